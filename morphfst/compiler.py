@@ -1,0 +1,317 @@
+"""Compile a language model into weighted finite-state transducers with pynini (OpenFst).
+
+Data flow (see DEVELOPERS.md):
+
+  lexicon × slot graph  ──►  M: internal analysis → underlying form (morph boundaries, markers)
+  co-occurrence filters ──►  M restricted on its analysis side
+  ordered rewrite rules ──►  cdrewrite cascade (Kaplan & Kay 1994; Mohri & Sproat 1996)
+  final step            ──►  bounded surface (letters and morph boundaries)
+
+From the bounded machine come the four saved transducers: ``analyzer`` (surface → internal
+analysis), ``generator`` (public analysis → surface), ``segmenter`` (surface → surface with morph
+boundaries) and ``bounded`` (surface with boundaries → internal analysis). Weights are in the
+tropical semiring; lower is better.
+"""
+
+from __future__ import annotations
+
+import time
+from collections import defaultdict
+from collections.abc import Callable
+from dataclasses import dataclass, field
+
+import pynini
+
+from . import model as m
+from .errors import UserError
+from .fstutil import acc, chars, cross, empty, union
+from .symbols import SymbolSpace
+from .validate import BOUNDARIES
+
+SETLIKE = (m.SetRef, m.Klass)
+
+
+@dataclass
+class CompiledFsts:
+    """The transducers of one language and the symbol space they are written in."""
+
+    space: SymbolSpace
+    fsts: dict[str, pynini.Fst]
+    timings: dict[str, float] = field(default_factory=dict)
+    stats: dict[str, object] = field(default_factory=dict)
+
+
+def build_space(g: m.Grammar) -> SymbolSpace:
+    """Register every symbol of the grammar in a fresh symbol space."""
+    space = SymbolSpace()
+    for sym in g.letters:
+        space.add(sym, "letter")
+    for sym in g.archiphonemes:
+        space.add(sym, "archiphoneme", single_char_ok=False)
+    for sym in g.markers:
+        space.add(sym, "marker", single_char_ok=False)
+    for sym in g.optionals:
+        space.add(sym, "optional", single_char_ok=False)
+    for sym in BOUNDARIES:
+        space.add(sym, "boundary", single_char_ok=False)
+    for dim in g.dimensions.values():
+        for value in dim.values:
+            kind = "pos" if dim.name == "pos" else "feature"
+            space.add(f"{kind}:{value}", kind, single_char_ok=False)
+    for affix in g.affixes:
+        space.add(f"affix:{affix.ident}", "affix", single_char_ok=False)
+    return space
+
+
+class Compiler:
+    """Builds the transducers of a grammar; each step is a method so tools can reuse it."""
+
+    def __init__(self, grammar: m.Grammar, space: SymbolSpace | None = None) -> None:
+        self.g = grammar
+        self.space = space or build_space(grammar)
+        s = self.space
+        self.letter_codes = [s.code(x) for x in grammar.letters]
+        self.underlying_codes = [s.code(x) for x in grammar.letters + grammar.archiphonemes + grammar.markers + grammar.optionals] + [s.code(b) for b in BOUNDARIES]
+        self.sigma = chars(self.underlying_codes).optimize()
+        self.sigma_star = self.sigma.closure().optimize()
+        self.plus = s.code(m.MORPH_BOUNDARY)
+        self._rule_cache: dict[str, pynini.Fst] = {}
+
+    # ---- expressions --------------------------------------------------------------------------
+    def set_codes(self, e: m.Expr) -> list[str]:
+        """The symbol codes of a set-like expression (``@set`` or ``[...]``)."""
+        s = self.space
+        if isinstance(e, m.SetRef):
+            return [s.code(x) for x in self.g.sets[e.name].members]
+        if isinstance(e, m.Sym):
+            return [s.code(e.name)]
+        if isinstance(e, m.Klass):
+            codes: list[str] = []
+            for item in e.items:
+                codes.extend(self.set_codes(item))
+            if e.negated:
+                return [c for c in self.underlying_codes if c not in codes]
+            return list(dict.fromkeys(codes))
+        raise TypeError(e)
+
+    def expr(self, e: m.Expr) -> pynini.Fst:
+        """An unweighted acceptor for a rule or pattern expression over the underlying alphabet."""
+        if isinstance(e, m.Sym):
+            return acc(self.space.code(e.name))
+        if isinstance(e, SETLIKE):
+            codes = self.set_codes(e)
+            return chars(codes) if codes else empty()
+        if isinstance(e, m.Seq):
+            out = acc("")
+            for item in e.items:
+                out = out + self.expr(item)
+            return out
+        if isinstance(e, m.Alt):
+            return union(self.expr(o) for o in e.options)
+        if isinstance(e, m.Repeat):
+            inner = self.expr(e.item)
+            return inner.closure() if e.high is None else inner.ques
+        if isinstance(e, m.Empty):
+            return acc("")
+        if isinstance(e, m.AnySym):
+            return self.sigma.copy()
+        raise TypeError(e)
+
+    # ---- rules ----------------------------------------------------------------------------------
+    def rule_fst(self, rule: m.Rule) -> pynini.Fst:
+        """One rewrite rule as a transducer over the underlying alphabet (cdrewrite)."""
+        if rule.name in self._rule_cache:
+            return self._rule_cache[rule.name]
+        tau = self.rule_tau(rule)
+        left = self.expr(rule.left).optimize() if rule.left is not None else acc("")
+        right = self.expr(rule.right).optimize() if rule.right is not None else acc("")
+        mode = "opt" if rule.optional else "obl"
+        fst = pynini.cdrewrite(tau, left, right, self.sigma_star, direction=rule.direction, mode=mode).optimize()
+        self._rule_cache[rule.name] = fst
+        return fst
+
+    def rule_tau(self, rule: m.Rule) -> pynini.Fst:
+        t, r = rule.target, rule.replacement
+        for side, e in (("target", t), ("replacement", r)):
+            if _mentions_boundary(e):
+                raise UserError(
+                    f"rule {rule.name}: the {side} contains a boundary (+, ^ or $)",
+                    rule.pos,
+                    hint="boundaries may appear in contexts only; rules never add or remove them",
+                )
+        if isinstance(t, SETLIKE) and isinstance(r, SETLIKE):
+            src, dst = self.set_codes(t), self.set_codes(r)
+            if len(src) != len(dst):
+                raise UserError(
+                    f"rule {rule.name}: the target set has {len(src)} symbols but the replacement set has {len(dst)}",
+                    rule.pos,
+                    hint="a set is rewritten symbol by symbol into a set of the same size, in order",
+                )
+            tau = union(cross(a, b) for a, b in zip(src, dst))
+        else:
+            target = self.expr(t).optimize()
+            if target.start() == pynini.NO_STATE_ID:
+                raise UserError(f"rule {rule.name}: the target matches nothing", rule.pos, hint="check the set or symbols named in the target")
+            tau = pynini.cross(target, self.expr(r).optimize())
+        if rule.weight:
+            tau = tau + pynini.accep("", weight=rule.weight)
+        return tau.optimize()
+
+    # ---- morphotactics ----------------------------------------------------------------------------
+    def stem_fst(self, entries: list[m.LexEntry]) -> pynini.Fst:
+        """Lemma and part of speech (analysis side) to word start, stem, flag markers, apostrophe."""
+        s = self.space
+        paths = []
+        start = s.code(m.WORD_START)
+        for e in entries:
+            underlying = start + s.encode(e.stem)
+            for flag in e.flags:
+                marker = self.g.flags[flag].marks
+                if marker:
+                    underlying += s.code(marker)
+            if self.g.classes[e.klass].apostrophe:
+                underlying += s.code("'") if "'" in s.to_char else ""
+            analysis = e.lemma + s.code(f"pos:{e.pos_tag}")
+            path = cross(analysis, underlying)
+            if e.weight:
+                path = path + pynini.accep("", weight=e.weight)
+            paths.append(path)
+        return union(paths)
+
+    def slot_graph(self, starts: list[str]) -> pynini.Fst:
+        """The morphotactic graph from the given slots to the end of the word (cycles allowed)."""
+        s = self.space
+        fst = pynini.Fst()
+        one = pynini.Weight.one(fst.weight_type())
+        start = fst.add_state()
+        fst.set_start(start)
+        entry = {name: fst.add_state() for name in self.g.slots}
+        end = fst.add_state()
+        final = fst.add_state()
+        fst.set_final(final)
+        fst.add_arc(end, pynini.Arc(0, ord(s.code(m.WORD_END)), one, final))
+
+        def target(name: str) -> int:
+            return end if name == m.END_SLOT else entry[name]
+
+        for name in starts:
+            fst.add_arc(start, pynini.Arc(0, 0, one, target(name)))
+        for slot in self.g.slots.values():
+            for affix in slot.affixes:
+                ilabels = [s.code(f"affix:{affix.ident}")] + [s.code(f"feature:{f}") if f"feature:{f}" in s.to_char else s.code(f"pos:{f}") for f in affix.features]
+                if affix.new_pos:
+                    ilabels.append(s.code(f"pos:{affix.new_pos}"))
+                olabels = [self.plus + s.encode(affix.form)] if affix.form else []
+                pairs = [(ord(c), 0) for c in ilabels] + [(0, ord(c)) for c in "".join(olabels)]
+                state = entry[slot.name]
+                weight = pynini.Weight(fst.weight_type(), affix.weight)
+                for index, (il, ol) in enumerate(pairs):
+                    nxt = fst.add_state()
+                    fst.add_arc(state, pynini.Arc(il, ol, weight if index == 0 else one, nxt))
+                    state = nxt
+                for follower in affix.next if affix.next is not None else slot.next:
+                    fst.add_arc(state, pynini.Arc(0, 0, one, target(follower)))
+        return fst
+
+    def constraint_filter(self, lemma_chars: set[str]) -> pynini.Fst | None:
+        """An acceptor over the analysis side that forbids what the constraints forbid."""
+        if not self.g.constraints:
+            return None
+        s = self.space
+        codes = set(lemma_chars) | {c for c, k in s.kinds.items() if k in {"feature", "pos", "affix"}}
+        sigma_star = chars(sorted(codes)).closure().optimize()
+        allowed = sigma_star
+        for c in self.g.constraints:
+            left = self._contains(c.left, sigma_star)
+            right = self._contains(c.right, sigma_star)
+            bad = (pynini.intersect(left, right) if c.kind == "excludes" else pynini.difference(left, right.optimize())).optimize()
+            allowed = pynini.difference(allowed, bad).optimize()
+        return allowed
+
+    def _contains(self, operand: str, sigma_star: pynini.Fst) -> pynini.Fst:
+        s = self.space
+        codes = [s.code(f"affix:{a.ident}") for a in self.g.affixes if a.name == operand]
+        for kind in ("feature", "pos"):
+            if f"{kind}:{operand}" in s.to_char:
+                codes.append(s.code(f"{kind}:{operand}"))
+        return (sigma_star + chars(codes) + sigma_star).optimize()
+
+    def final_step(self) -> pynini.Fst:
+        """Markers and word boundaries deleted, optional segments realized, archiphonemes filtered out."""
+        s = self.space
+        parts = [acc(c) for c in self.letter_codes] + [acc(self.plus)]
+        parts += [cross(s.code(mk), "") for mk in self.g.markers]
+        parts += [cross(s.code(o), s.code(o[1:-1])) for o in self.g.optionals if o[1:-1] in s.to_char]
+        parts += [cross(s.code(m.WORD_START), ""), cross(s.code(m.WORD_END), "")]
+        return union(parts).closure().optimize()
+
+    def delete_boundaries(self) -> pynini.Fst:
+        parts = [acc(c) for c in self.letter_codes] + [cross(self.plus, "")]
+        return union(parts).closure().optimize()
+
+    # ---- the whole ------------------------------------------------------------------------------------
+    def bounded(self, entries: list[m.LexEntry], progress: Callable[[str], None] | None = None) -> pynini.Fst:
+        """Internal analysis → bounded surface, for the given lexicon entries."""
+        groups: dict[frozenset[str], list[m.LexEntry]] = defaultdict(list)
+        for e in entries:
+            blocked = frozenset(r for f in e.flags for r in self.g.flags[f].blocks)
+            groups[blocked].append(e)
+        filt = self.constraint_filter({ch for e in entries for ch in e.lemma})
+        final = self.final_step()
+        results = []
+        for blocked, group in sorted(groups.items(), key=lambda kv: sorted(kv[0])):
+            by_class: dict[tuple[str, ...], list[m.LexEntry]] = defaultdict(list)
+            for e in group:
+                by_class[tuple(self.g.classes[e.klass].next)].append(e)
+            parts = [self.stem_fst(es) + self.slot_graph(list(starts)) for starts, es in by_class.items()]
+            fst = union(parts).optimize()
+            if filt is not None:
+                fst = pynini.compose(filt, fst)
+            for rule in self.g.rules:
+                if rule.name in blocked:
+                    continue
+                if progress:
+                    progress(rule.name)
+                fst = pynini.compose(fst, self.rule_fst(rule))
+            fst = pynini.compose(fst, final)
+            results.append(fst)
+        return union(results).optimize()
+
+    def build(self, progress: Callable[[str], None] | None = None) -> CompiledFsts:
+        """All saved transducers of the grammar's lexicon."""
+        timings: dict[str, float] = {}
+        t0 = time.perf_counter()
+        bounded = self.bounded(self.g.lexicon, progress)
+        timings["lexicon_rules"] = time.perf_counter() - t0
+        t1 = time.perf_counter()
+        fsts = self.derive(bounded)
+        timings["derive"] = time.perf_counter() - t1
+        return CompiledFsts(self.space, fsts, timings)
+
+    def derive(self, bounded: pynini.Fst) -> dict[str, pynini.Fst]:
+        """The four saved transducers from the bounded machine."""
+        delete = self.delete_boundaries()
+        gen_internal = pynini.compose(bounded, delete).optimize()
+        analyzer = gen_internal.copy().invert().optimize()
+        affix_labels = [(ord(c), 0) for c, k in self.space.kinds.items() if k == "affix"]
+        generator = gen_internal.copy().relabel_pairs(ipairs=affix_labels).optimize()
+        surfaces = bounded.copy().project("output").optimize()
+        segmenter = pynini.compose(delete.copy().invert(), surfaces).optimize()
+        bounded_analyzer = bounded.copy().invert().optimize()
+        for fst in (analyzer, generator, segmenter, bounded_analyzer):
+            fst.arcsort("ilabel")
+        return {"analyzer": analyzer, "generator": generator, "segmenter": segmenter, "bounded": bounded_analyzer}
+
+
+def _mentions_boundary(e: m.Expr) -> bool:
+    if isinstance(e, m.Sym):
+        return e.name in BOUNDARIES
+    if isinstance(e, m.Seq):
+        return any(_mentions_boundary(i) for i in e.items)
+    if isinstance(e, m.Alt):
+        return any(_mentions_boundary(i) for i in e.options)
+    if isinstance(e, m.Repeat):
+        return _mentions_boundary(e.item)
+    if isinstance(e, m.Klass):
+        return any(_mentions_boundary(i) for i in e.items)
+    return False

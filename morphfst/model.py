@@ -1,0 +1,274 @@
+"""The language model: plain dataclasses between parsing and compiling.
+
+The parser fills these from a grammar file and lexicon files; the compiler reads only these (it never
+sees syntax trees). Every object keeps the :class:`~morphfst.errors.Position` it came from so that
+later errors and traces can point at the source line.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from typing import Literal, Union
+
+from .errors import Position
+
+# ---------------------------------------------------------------------------------------------
+# Rule and pattern expressions (regular expressions over the grammar's symbols)
+
+
+@dataclass(frozen=True)
+class Sym:
+    """One symbol: a letter, an archiphoneme, a marker, a boundary or an optional segment."""
+
+    name: str
+    pos: Position | None = field(default=None, compare=False)
+
+
+@dataclass(frozen=True)
+class SetRef:
+    """A reference to a named symbol set (``@vowel``)."""
+
+    name: str
+    pos: Position | None = field(default=None, compare=False)
+
+
+@dataclass(frozen=True)
+class Klass:
+    """A bracketed class of symbols (``[ptk]``)."""
+
+    items: tuple[Expr, ...]
+    negated: bool = False
+
+
+@dataclass(frozen=True)
+class Seq:
+    items: tuple[Expr, ...]
+
+
+@dataclass(frozen=True)
+class Alt:
+    options: tuple[Expr, ...]
+
+
+@dataclass(frozen=True)
+class Repeat:
+    """``x*`` (low=0, high=None) or ``x?`` (low=0, high=1)."""
+
+    item: Expr
+    low: int
+    high: int | None
+
+
+@dataclass(frozen=True)
+class Empty:
+    """The empty string (``∅`` or ``""``)."""
+
+
+@dataclass(frozen=True)
+class AnySym:
+    """Any symbol of the underlying alphabet (``.``)."""
+
+
+Expr = Union[Sym, SetRef, Klass, Seq, Alt, Repeat, Empty, AnySym]
+
+# ---------------------------------------------------------------------------------------------
+# Declarations
+
+
+@dataclass
+class SymbolSet:
+    name: str
+    members: list[str]  # resolved symbol names
+    pos: Position
+
+
+@dataclass
+class Dimension:
+    """A feature dimension with its values, in UniMorph labels (Sylak-Glassman 2016)."""
+
+    name: str
+    values: list[str]
+    pos: Position
+
+
+@dataclass
+class Flag:
+    """A lexical exception flag.
+
+    ``marks``: a marker symbol placed right after the stem in the underlying form (rules may refer to
+    it; it never reaches the surface). ``blocks``: names of rules that do not apply to entries with
+    this flag.
+    """
+
+    name: str
+    marks: str | None
+    blocks: list[str]
+    description: str
+    pos: Position
+
+
+@dataclass
+class StemClass:
+    """An inflection class: the entry point of a lexicon entry into the slot graph."""
+
+    name: str
+    next: list[str]
+    pos_allowed: list[str]
+    apostrophe: bool
+    guess: Expr | None
+    pos: Position
+
+
+@dataclass
+class Affix:
+    """One affix (or zero morph) of a slot."""
+
+    form: list[str]  # underlying symbols; empty for a zero morph
+    features: list[str]
+    gloss: str
+    weight: float
+    next: list[str] | None  # None: the slot's followers
+    new_pos: str | None  # derivational: the part of speech after this affix
+    name: str | None
+    slot: str
+    pos: Position
+    ident: int = -1  # set by the compiler-facing model: index in Grammar.affixes
+
+    @property
+    def form_text(self) -> str:
+        return "".join(self.form)
+
+
+@dataclass
+class Slot:
+    """A position class in the morphotactic graph."""
+
+    name: str
+    next: list[str]  # follower slots; "end" ends the word
+    affixes: list[Affix]
+    pos: Position
+
+
+@dataclass
+class Constraint:
+    """A co-occurrence constraint between features or named affixes anywhere in a word."""
+
+    name: str
+    left: str
+    kind: Literal["requires", "excludes"]
+    right: str
+    pos: Position
+
+
+@dataclass
+class Rule:
+    """An ordered rewrite rule ``A -> B / L _ R`` (compiled with cdrewrite; Mohri & Sproat 1996)."""
+
+    name: str
+    target: Expr
+    replacement: Expr
+    left: Expr | None
+    right: Expr | None
+    direction: Literal["ltr", "rtl", "sim"]
+    optional: bool
+    weight: float
+    pos: Position
+    text: str
+
+
+@dataclass
+class Normalization:
+    """Input normalization: NFC, language-specific case folding, apostrophe variants."""
+
+    maps: list[tuple[str, str]] = field(default_factory=list)
+    lowercase: bool = True
+    apostrophes: list[str] = field(default_factory=list)
+
+
+@dataclass
+class TestCase:
+    """An inline test: expected analyses, expected generated forms, or a rejected word."""
+
+    kind: Literal["analyze", "exact", "generate", "reject"]
+    word: str  # surface word (analyze/exact/reject) or analysis text (generate)
+    expected: list[str]
+    pos: Position
+
+
+@dataclass
+class Layout:
+    """A table layout for one part of speech (rows, columns and sub-table dimensions)."""
+
+    pos_tag: str
+    title: str
+    rows: list[str]
+    columns: list[str]
+    tables: list[str]
+    fixed: list[str]
+    labels: dict[str, str]
+    pos: Position
+
+
+@dataclass
+class LexEntry:
+    """One lexicon line."""
+
+    lemma: str
+    klass: str
+    pos_tag: str
+    gloss: str
+    weight: float
+    stem: list[str]  # underlying stem symbols
+    flags: list[str]
+    pos: Position
+
+
+@dataclass
+class Grammar:
+    """Everything a grammar file and its lexicons declare."""
+
+    name: str
+    title: str
+    path: str
+    lexicon_paths: list[str] = field(default_factory=list)
+    letters: list[str] = field(default_factory=list)
+    archiphonemes: list[str] = field(default_factory=list)
+    markers: list[str] = field(default_factory=list)
+    optionals: list[str] = field(default_factory=list)  # "(y)" style optional segments
+    sets: dict[str, SymbolSet] = field(default_factory=dict)
+    dimensions: dict[str, Dimension] = field(default_factory=dict)
+    ud: dict[str, str] = field(default_factory=dict)
+    flags: dict[str, Flag] = field(default_factory=dict)
+    classes: dict[str, StemClass] = field(default_factory=dict)
+    slots: dict[str, Slot] = field(default_factory=dict)
+    constraints: list[Constraint] = field(default_factory=list)
+    rules: list[Rule] = field(default_factory=list)
+    normalization: Normalization = field(default_factory=Normalization)
+    tests: list[TestCase] = field(default_factory=list)
+    layouts: list[Layout] = field(default_factory=list)
+    lexicon: list[LexEntry] = field(default_factory=list)
+    sources: list[str] = field(default_factory=list)  # every file read, for the source hash
+
+    @property
+    def affixes(self) -> list[Affix]:
+        out: list[Affix] = []
+        for slot in self.slots.values():
+            out.extend(slot.affixes)
+        return out
+
+    def dimension_of(self, label: str) -> str | None:
+        for dim in self.dimensions.values():
+            if label in dim.values:
+                return dim.name
+        return None
+
+    @property
+    def pos_tags(self) -> list[str]:
+        dim = self.dimensions.get("pos")
+        return list(dim.values) if dim else []
+
+
+MORPH_BOUNDARY = "+"
+WORD_START = "^"
+WORD_END = "$"
+END_SLOT = "end"
