@@ -63,6 +63,14 @@ def read_lexicon(
     total = sum(c for _, c in counts)
     for index, count in counts:
         entries[index].weight += -math.log(count / total) if total > 0 else 0.0
+    if counts:
+        # Entries without a count where others have one get half a count (simple smoothing), so that
+        # an entry without a count is not preferred over every counted one.
+        counted = {index for index, _ in counts}
+        unseen = -math.log(0.5 / total)
+        for index, entry in enumerate(entries):
+            if index not in counted and entry.weight == 0.0:
+                entry.weight = unseen
     return entries
 
 

@@ -1,0 +1,76 @@
+"""The ``morphfst`` command: subcommands registered from small modules, one job each.
+
+A user's mistake prints one message (file, line, column, hint) and exits with code 2; there is
+never a traceback for it.
+"""
+
+from __future__ import annotations
+
+import argparse
+import importlib
+import sys
+from collections.abc import Sequence
+
+from ..errors import EXIT_USER_ERROR, UserError
+from ..version import __version__
+
+# Every module morphfst/cli/<name>_cmd.py defines register(subparsers) and is picked up here; the
+# commands listed first appear first in --help, the others follow in alphabetical order.
+FIRST = ["build", "analyze", "generate", "segment"]
+
+
+def command_modules() -> list[str]:
+    """The subcommand modules of this package, in help order."""
+    import pkgutil
+
+    names = [m.name[: -len("_cmd")] for m in pkgutil.iter_modules(__path__) if m.name.endswith("_cmd")]
+    ordered = [n for n in FIRST if n in names] + sorted(n for n in names if n not in FIRST)
+    return [f"{__name__}.{n}_cmd" for n in ordered]
+
+
+class _Parser(argparse.ArgumentParser):
+    """argparse with our exit code (2) and a hint line for bad options."""
+
+    def error(self, message: str) -> None:  # type: ignore[override]
+        self.print_usage(sys.stderr)
+        sys.stderr.write(f"error: {message}\nhint: run '{self.prog} --help' for the options and examples\n")
+        raise SystemExit(EXIT_USER_ERROR)
+
+
+def build_parser() -> argparse.ArgumentParser:
+    parser = _Parser(
+        prog="morphfst",
+        description="Finite-state morphology for agglutinative languages: analyze, generate and segment words.",
+        epilog="Run 'morphfst COMMAND --help' for the options and examples of each command.",
+    )
+    parser.add_argument("--version", action="version", version=f"morphfst {__version__}")
+    sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
+    for name in command_modules():
+        importlib.import_module(name).register(sub)
+    return parser
+
+
+def main(argv: Sequence[str] | None = None) -> int:
+    parser = build_parser()
+    args = parser.parse_args(argv)
+    if not getattr(args, "func", None):
+        parser.print_help()
+        return EXIT_USER_ERROR
+    try:
+        return int(args.func(args) or 0)
+    except UserError as exc:
+        sys.stderr.write(exc.render() + "\n")
+        return EXIT_USER_ERROR
+    except KeyboardInterrupt:
+        sys.stderr.write("interrupted\n")
+        return 130
+    except BrokenPipeError:
+        try:
+            sys.stdout = None  # type: ignore[assignment]
+        finally:
+            return 0
+
+
+def entry_point() -> None:
+    """Console-script entry point."""
+    sys.exit(main())

@@ -1,0 +1,79 @@
+"""``morphfst analyze``: every analysis of each word, ranked by weight."""
+
+from __future__ import annotations
+
+import argparse
+import sys
+from collections.abc import Iterator
+
+from ..textio import ReadStats
+from .common import Aligned, add_format, add_input, add_language, input_lines, open_language, report_stats, shorten, tsv_field, write_json
+
+EXAMPLES = """examples:
+  morphfst analyze evlerde kitabı                 two Turkish words, aligned for reading
+  morphfst analyze -l fin talossa -f jsonl        Finnish, one JSON object per word
+  morphfst analyze -i words.txt -f tsv --best 1   a word list, best analysis only, as TSV
+  echo "Ankara'da" | morphfst analyze             words from standard input
+"""
+
+TSV_HEADER = ["word", "rank", "lemma", "pos", "features", "segmentation", "gloss", "weight"]
+
+
+def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
+    p = sub.add_parser(
+        "analyze",
+        help="analyze words (lemma, features, segmentation, gloss, weight)",
+        description="Analyze words: every analysis with lemma, part of speech, features, morphs with glosses and weight, best first. "
+        "Each input token gives exactly one record (a word with no analysis included), in input order.",
+        epilog=EXAMPLES,
+        formatter_class=argparse.RawDescriptionHelpFormatter,
+    )
+    p.add_argument("words", nargs="*", help="words to analyze (default: read them from --input or standard input)")
+    add_language(p)
+    add_input(p)
+    add_format(p)
+    p.add_argument("--best", type=int, default=0, metavar="N", help="keep only the N best analyses of each word (0: all)")
+    p.set_defaults(func=run)
+
+
+def tokens(args: argparse.Namespace, stats: ReadStats) -> Iterator[str]:
+    if args.words:
+        yield from args.words
+        return
+    for line in input_lines(args, stats):
+        yield from line.split()
+
+
+def run(args: argparse.Namespace) -> int:
+    lang = open_language(args)
+    stats = ReadStats()
+    out = sys.stdout
+    table = Aligned(["word", "analysis", "segmentation", "gloss", "weight"], out) if args.format == "table" else None
+    if args.format == "tsv":
+        out.write("\t".join(TSV_HEADER) + "\n")
+    unknown = 0
+    for word in tokens(args, stats):
+        analyses = lang.analyze(word)
+        if args.best > 0:
+            analyses = analyses[: args.best]
+        if not analyses:
+            unknown += 1
+        if args.format == "jsonl":
+            write_json({"word": word, "analyses": [a.to_dict() for a in analyses]}, out)
+        elif args.format == "tsv":
+            if not analyses:
+                out.write("\t".join([tsv_field(word), "0", "", "", "", "", "", ""]) + "\n")
+            for rank, a in enumerate(analyses, start=1):
+                row = [word, str(rank), a.lemma, a.pos, ";".join(a.features), a.segmentation, a.gloss, f"{a.weight:.4f}"]
+                out.write("\t".join(tsv_field(c) for c in row) + "\n")
+        else:
+            assert table is not None
+            shown = shorten(word)
+            if not analyses:
+                table.add([shown, "(no analysis)", "", "", ""])
+            for rank, a in enumerate(analyses):
+                table.add([shown if rank == 0 else "", a.text, a.segmentation, a.gloss, f"{a.weight:.2f}"])
+    if table:
+        table.flush()
+    report_stats(stats)
+    return 0

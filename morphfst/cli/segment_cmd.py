@@ -1,0 +1,143 @@
+"""``morphfst segment``: split words, or every word of a text, into stem and affix morphs."""
+
+from __future__ import annotations
+
+import argparse
+import sys
+from collections import Counter
+
+from ..runtime import Language
+from ..textio import ReadStats, split_text
+from .common import Aligned, add_input, add_language, input_lines, open_language, report_stats, shorten, tsv_field, write_json
+
+EXAMPLES = """examples:
+  morphfst segment evlerinden kitapçılar          words given on the command line
+  morphfst segment -i demo/tur.txt                a text: same lines, words split into morphs
+  morphfst segment -i demo/tur.txt --sep ' +'     morphs as separate terms for an indexer
+  morphfst segment -i demo/tur.txt -f jsonl       one JSON object per token, all segmentations
+"""
+
+
+def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
+    p = sub.add_parser(
+        "segment",
+        help="split words or a text into stem and affix morphs",
+        description="Split each word into its surface morphs (best segmentation first). Given words, print a table; "
+        "given a text, print the same text with every analyzable word split, keeping lines and punctuation, "
+        "and a coverage summary on standard error.",
+        epilog=EXAMPLES,
+        formatter_class=argparse.RawDescriptionHelpFormatter,
+    )
+    p.add_argument("words", nargs="*", help="words to segment (default: read a text from --input or standard input)")
+    add_language(p)
+    add_input(p, "a text")
+    p.add_argument("-f", "--format", choices=("text", "tsv", "jsonl"), default="text", help="text (default), tsv or jsonl")
+    p.add_argument("--sep", default="-", help="string put between morphs in text output (default '-')")
+    p.add_argument("--mark-unknown", default="", metavar="MARK", help="put MARK before words with no analysis in text output")
+    p.add_argument("--no-summary", action="store_true", help="do not print the coverage summary")
+    p.set_defaults(func=run)
+
+
+def project(original: str, normalized: str, morphs: list[str]) -> list[str]:
+    """Cut the original spelling at the morph boundaries when normalization kept the length."""
+    if len(original) != len(normalized):
+        return morphs
+    out, pos = [], 0
+    for morph in morphs:
+        out.append(original[pos : pos + len(morph)])
+        pos += len(morph)
+    return out
+
+
+class Coverage:
+    """Token and type coverage of a run."""
+
+    def __init__(self) -> None:
+        self.tokens = 0
+        self.analyzed = 0
+        self.analyses = 0
+        self.types: Counter[str] = Counter()
+        self.unknown: Counter[str] = Counter()
+
+    def add(self, word: str, n_analyses: int) -> None:
+        self.tokens += 1
+        self.types[word] += 1
+        if n_analyses:
+            self.analyzed += 1
+            self.analyses += n_analyses
+        else:
+            self.unknown[word] += 1
+
+    def summary(self, top: int = 10) -> str:
+        types = len(self.types)
+        known_types = types - len(self.unknown)
+        pct = 100.0 * self.analyzed / self.tokens if self.tokens else 0.0
+        tpct = 100.0 * known_types / types if types else 0.0
+        amb = self.analyses / self.analyzed if self.analyzed else 0.0
+        lines = [
+            "coverage summary",
+            f"  tokens:  {self.tokens:>8}   analyzed {self.analyzed:>8}  ({pct:5.1f}%)",
+            f"  types:   {types:>8}   analyzed {known_types:>8}  ({tpct:5.1f}%)",
+            f"  analyses per analyzed token: {amb:.2f}",
+        ]
+        if self.unknown:
+            common = ", ".join(f"{w} ({n})" for w, n in self.unknown.most_common(top))
+            lines.append(f"  most frequent unanalyzed: {common}")
+        return "\n".join(lines) + "\n"
+
+
+def run(args: argparse.Namespace) -> int:
+    lang = open_language(args)
+    stats = ReadStats()
+    coverage = Coverage()
+    out = sys.stdout
+    if args.words:
+        table = Aligned(["word", "segmentation", "gloss", "analysis"], out)
+        for word in args.words:
+            segs = lang.segment(word)
+            coverage.add(word, len(segs))
+            if args.format == "jsonl":
+                write_json({"word": word, "segmentations": [s.to_dict() for s in segs]}, out)
+            elif args.format == "tsv":
+                best = segs[0] if segs else None
+                out.write(f"{tsv_field(word)}\t{best.text if best else ''}\t{best.gloss if best else ''}\n")
+            elif not segs:
+                table.add([shorten(word), "(no analysis)", "", ""])
+            else:
+                for rank, s in enumerate(segs):
+                    table.add([shorten(word) if rank == 0 else "", s.text, s.gloss, s.analyses[0].text])
+        if args.format == "text":
+            table.flush()
+    else:
+        if args.format == "tsv":
+            out.write("line\tword\tsegmentation\tgloss\tlemma\n")
+        for number, line in enumerate(input_lines(args, stats), start=1):
+            pieces = []
+            for text, is_word in split_text(line):
+                if not is_word:
+                    pieces.append(text)
+                    continue
+                segs = lang.segment(text)
+                coverage.add(text, len(segs))
+                _emit_token(args, lang, out, number, text, segs, pieces)
+            if args.format == "text":
+                out.write("".join(pieces) + "\n")
+    if not args.no_summary:
+        sys.stderr.write(coverage.summary())
+    report_stats(stats)
+    return 0
+
+
+def _emit_token(args: argparse.Namespace, lang: Language, out: object, number: int, text: str, segs: list, pieces: list[str]) -> None:  # type: ignore[type-arg]
+    best = segs[0] if segs else None
+    if args.format == "text":
+        if best is None:
+            pieces.append(args.mark_unknown + text)
+        else:
+            morphs = project(text, best.word, [m for m in best.morphs if m])
+            pieces.append(args.sep.join(morphs))
+    elif args.format == "tsv":
+        lemma = best.analyses[0].lemma if best else ""
+        out.write(f"{number}\t{tsv_field(text)}\t{best.text if best else ''}\t{best.gloss if best else ''}\t{lemma}\n")  # type: ignore[attr-defined]
+    else:
+        write_json({"line": number, "word": text, "segmentations": [s.to_dict() for s in segs]}, out)  # type: ignore[arg-type]

@@ -1,0 +1,127 @@
+"""The metadata saved beside the transducers: plain JSON describing the compiled language.
+
+It records what the runtime and the tools need without the grammar source: the symbol space,
+feature inventory and UD mapping, classes, the slot graph with every affix, the rule list, the
+lexicon entries, normalization, inline tests, layouts, and the source files with their hashes.
+"""
+
+from __future__ import annotations
+
+import hashlib
+from pathlib import Path
+from typing import Any
+
+from . import model as m
+from .symbols import SymbolSpace
+from .version import FORMAT_VERSION, __version__
+
+
+def file_hash(path: str | Path) -> str:
+    return hashlib.sha256(Path(path).read_bytes()).hexdigest()
+
+
+COMPILER_MODULES = (
+    "grammar.lark", "syntax.py", "model.py", "validate.py", "lexicon.py", "loader.py", "compiler.py",
+    "symbols.py", "fstutil.py", "normalize.py", "metadata.py",
+)
+
+
+def compiler_digest() -> str:
+    """A hash of the compiler's own source, so a changed compiler recompiles cached languages."""
+    h = hashlib.sha256()
+    here = Path(__file__).resolve().parent
+    for name in COMPILER_MODULES:
+        path = here / name
+        if path.exists():
+            h.update(path.read_bytes())
+    return h.hexdigest()
+
+
+def sources_digest(paths: list[str]) -> str:
+    """One hash over the compiler (version and source) and every source file (name and content)."""
+    h = hashlib.sha256(f"morphfst {__version__} format {FORMAT_VERSION} {compiler_digest()}".encode())
+    for p in paths:
+        h.update(Path(p).name.encode())
+        h.update(Path(p).read_bytes())
+    return h.hexdigest()
+
+
+def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
+    """Everything about a compiled language that is not a transducer."""
+    return {
+        "format": FORMAT_VERSION,
+        "version": __version__,
+        "name": g.name,
+        "title": g.title,
+        "grammar_path": str(Path(g.path).resolve()),
+        "sources": [{"path": str(Path(p).resolve()), "sha256": file_hash(p)} for p in g.sources],
+        "digest": sources_digest(g.sources),
+        "space": space.to_json(),
+        "dimensions": {d.name: d.values for d in g.dimensions.values()},
+        "ud": g.ud,
+        "classes": {
+            c.name: {"next": c.next, "pos": c.pos_allowed, "apostrophe": c.apostrophe, "line": c.pos.line}
+            for c in g.classes.values()
+        },
+        "slots": {
+            s.name: {
+                "next": s.next,
+                "line": s.pos.line,
+                "affixes": [
+                    {
+                        "id": a.ident,
+                        "form": a.form,
+                        "features": a.features,
+                        "gloss": a.gloss,
+                        "weight": a.weight,
+                        "next": a.next,
+                        "new_pos": a.new_pos,
+                        "name": a.name,
+                        "line": a.pos.line,
+                    }
+                    for a in s.affixes
+                ],
+            }
+            for s in g.slots.values()
+        },
+        "constraints": [
+            {"name": c.name, "left": c.left, "kind": c.kind, "right": c.right, "line": c.pos.line} for c in g.constraints
+        ],
+        "rules": [
+            {"name": r.name, "text": r.text, "line": r.pos.line, "direction": r.direction, "optional": r.optional}
+            for r in g.rules
+        ],
+        "flags": {f.name: {"marks": f.marks, "blocks": f.blocks, "description": f.description} for f in g.flags.values()},
+        "normalization": {
+            "maps": g.normalization.maps,
+            "lowercase": g.normalization.lowercase,
+            "apostrophes": g.normalization.apostrophes,
+        },
+        "tests": [{"kind": t.kind, "word": t.word, "expected": t.expected, "line": t.pos.line} for t in g.tests],
+        "layouts": [
+            {
+                "pos": lay.pos_tag,
+                "title": lay.title,
+                "rows": lay.rows,
+                "columns": lay.columns,
+                "tables": lay.tables,
+                "fixed": lay.fixed,
+                "labels": lay.labels,
+            }
+            for lay in g.layouts
+        ],
+        "lexicon": [
+            {
+                "lemma": e.lemma,
+                "class": e.klass,
+                "pos": e.pos_tag,
+                "gloss": e.gloss,
+                "weight": e.weight,
+                "stem": e.stem,
+                "flags": e.flags,
+                "file": e.pos.file,
+                "line": e.pos.line,
+            }
+            for e in g.lexicon
+        ],
+    }

@@ -1,0 +1,230 @@
+"""The runtime API: a compiled language that analyzes, generates and segments words.
+
+``analyze`` composes the word with the segmenter (surface → surface with morph boundaries) and each
+bounded string with the bounded analyzer, so every analysis comes with its surface morphs aligned
+with glosses and features. Ties are broken by the analysis text, so the order is deterministic.
+"""
+
+from __future__ import annotations
+
+from collections.abc import Sequence
+from functools import lru_cache
+from typing import Any
+
+import pynini
+
+from .errors import UserError
+from .fstutil import acc, is_empty, paths
+from .model import Normalization
+from .normalize import make_normalizer
+from .results import Analysis, Form, Morph, Segmentation
+from .symbols import PRIVATE_START, SymbolSpace
+
+MAX_PATHS = 200
+MAX_WORD = 1000  # longer tokens are not words; they get no analysis
+
+
+class Language:
+    """A compiled language. Build one with :func:`morphfst.load`."""
+
+    def __init__(self, fsts: dict[str, pynini.Fst], meta: dict[str, Any], path: str | None = None) -> None:
+        self.fsts = fsts
+        self.meta = meta
+        self.path = path
+        self.name: str = meta["name"]
+        self.title: str = meta["title"]
+        self.space = SymbolSpace.from_json(meta["space"])
+        self.ud: dict[str, str] = meta["ud"]
+        self.dimensions: dict[str, list[str]] = meta["dimensions"]
+        norm = meta["normalization"]
+        self.normalize = make_normalizer(Normalization([tuple(p) for p in norm["maps"]], norm["lowercase"], norm["apostrophes"]))
+        self.affixes: dict[int, dict[str, Any]] = {}
+        for slot_name, slot in meta["slots"].items():
+            for affix in slot["affixes"]:
+                self.affixes[affix["id"]] = affix | {"slot": slot_name}
+        self.glosses: dict[tuple[str, str], str] = {}
+        for entry in meta["lexicon"]:
+            self.glosses.setdefault((entry["lemma"], entry["pos"]), entry["gloss"])
+        self.plus = self.space.code("+")
+        self._kind = self.space.kinds
+        self.analyze_cached = lru_cache(maxsize=65536)(self._analyze_tuple)
+
+    # ---- analysis ---------------------------------------------------------------------------------
+    def analyze(self, word: str) -> list[Analysis]:
+        """All analyses of ``word``, best (lowest weight) first; an empty list when there is none."""
+        return list(self.analyze_cached(word))
+
+    def _analyze_tuple(self, word: str) -> tuple[Analysis, ...]:
+        surface = self.normalize(word)
+        if not self.acceptable(surface):
+            return ()
+        best: dict[tuple[str, str], Analysis] = {}
+        for bounded, _ in self._bounded(surface):
+            lattice = pynini.compose(acc(bounded), self.fsts["bounded"])
+            for _, internal, weight in paths(lattice, MAX_PATHS):
+                analysis = self._decode(surface, internal, bounded, weight)
+                key = (analysis.text, analysis.segmentation)
+                if key not in best or weight < best[key].weight:
+                    best[key] = analysis
+        return tuple(sorted(best.values(), key=lambda a: (round(a.weight, 5), a.text, a.segmentation)))
+
+    def acceptable(self, surface: str) -> bool:
+        """False for words the transducers cannot read: empty, too long, or using reserved code points."""
+        return 0 < len(surface) <= MAX_WORD and all(ord(c) < PRIVATE_START for c in surface)
+
+    def _bounded(self, surface: str) -> list[tuple[str, float]]:
+        lattice = pynini.compose(acc(surface), self.fsts["segmenter"])
+        if is_empty(lattice):
+            return []
+        found: dict[str, float] = {}
+        for _, bounded, weight in paths(lattice, MAX_PATHS):
+            found[bounded] = min(weight, found.get(bounded, weight))
+        return sorted(found.items(), key=lambda kv: (round(kv[1], 5), kv[0]))
+
+    def _decode(self, surface: str, internal: str, bounded: str, weight: float) -> Analysis:
+        kinds = self._kind
+        name = self.space.name
+        i = 0
+        while i < len(internal) and kinds.get(internal[i]) != "pos":
+            i += 1
+        lemma = internal[:i]
+        pos = name(internal[i]).split(":", 1)[1] if i < len(internal) else "?"
+        features: list[str] = []
+        groups: list[tuple[int, list[str]]] = []
+        for ch in internal[i + 1 :]:
+            kind = kinds.get(ch)
+            label = name(ch).split(":", 1)[1]
+            if kind == "affix":
+                groups.append((int(label), []))
+            else:
+                features.append(label)
+                if groups:
+                    groups[-1][1].append(label)
+        parts = bounded.split(self.plus)
+        nonzero = [a for a, _ in groups if self.affixes[a]["form"]]
+        aligned = len(parts) == len(nonzero) + 1
+        stem_gloss = self.glosses.get((lemma, pos), lemma)
+        morphs = [Morph(parts[0], stem_gloss, (pos,), "stem", lemma)]
+        k = 1
+        for affix_id, labels in groups:
+            info = self.affixes[affix_id]
+            if info["form"]:
+                form = parts[k] if aligned else "?"
+                k += 1
+            else:
+                form = ""
+            morphs.append(
+                Morph(form, info["gloss"], tuple(labels), "affix", "".join(info["form"]), info["slot"], affix_id, info["new_pos"])
+            )
+        return Analysis(surface, lemma, pos, tuple(features), tuple(morphs), weight, self.ud)
+
+    def segment(self, word: str) -> list[Segmentation]:
+        """Distinct splits of ``word`` into surface morphs, best first, each with its analyses."""
+        groups: dict[tuple[str, ...], list[Analysis]] = {}
+        for analysis in self.analyze(word):
+            key = tuple(m.form for m in analysis.morphs if m.kind == "stem" or m.underlying)
+            groups.setdefault(key, []).append(analysis)
+        out = [Segmentation(self.normalize(word), key, min(a.weight for a in group), tuple(group)) for key, group in groups.items()]
+        return sorted(out, key=lambda s: (round(s.weight, 5), s.text))
+
+    def accepts(self, word: str) -> bool:
+        """True when ``word`` has at least one analysis (one composition, no decoding)."""
+        surface = self.normalize(word)
+        if not self.acceptable(surface):
+            return False
+        return not is_empty(pynini.compose(acc(surface), self.fsts["analyzer"]).connect())
+
+    # ---- generation -------------------------------------------------------------------------------
+    def labels(self) -> dict[str, str]:
+        """Every feature and part-of-speech label with its dimension."""
+        return {v: d for d, values in self.dimensions.items() for v in values}
+
+    def _label_code(self, label: str) -> str:
+        for kind in ("pos", "feature"):
+            key = f"{kind}:{label}"
+            if key in self.space.to_char:
+                return self.space.to_char[key]
+        known = sorted(self.labels())
+        import difflib
+
+        near = difflib.get_close_matches(label, known, n=1)
+        raise UserError(
+            f"unknown feature label {label!r}",
+            hint=(f"did you mean {near[0]!r}? " if near else "") + "labels: " + " ".join(known),
+        )
+
+    def generate(self, lemma: str, features: str | Sequence[str]) -> list[Form]:
+        """Surface forms of ``lemma`` with ``features`` (``"N;PL;LOC"`` or a list), best first.
+
+        The labels may be given in any order: when the given order has no form, every order is tried
+        (an acceptor over the permutations of the labels).
+        """
+        labels = [f for f in (features.split(";") if isinstance(features, str) else features) if f.strip()]
+        labels = [f.strip() for f in labels]
+        codes = [self._label_code(f) for f in labels]
+        analysis = f"{lemma} {';'.join(labels)}"
+        forms = self._generate_from(acc(lemma + "".join(codes)), analysis)
+        if not forms and 1 < len(codes) <= 8:
+            forms = self._generate_from(acc(lemma) + _permutations(codes), analysis)
+        return forms
+
+    def _generate_from(self, query: pynini.Fst, analysis: str) -> list[Form]:
+        lattice = pynini.compose(query, self.fsts["generator"])
+        found: dict[str, float] = {}
+        for _, surface, weight in paths(lattice, MAX_PATHS):
+            found[surface] = min(weight, found.get(surface, weight))
+        return [Form(s, w, analysis) for s, w in sorted(found.items(), key=lambda kv: (round(kv[1], 5), kv[0]))]
+
+    def generate_text(self, analysis: str) -> list[Form]:
+        """Generate from an analysis text ``lemma POS;FEAT;...``."""
+        lemma, _, bundle = analysis.strip().rpartition(" ")
+        if not lemma:
+            raise UserError(f"malformed analysis {analysis!r}", hint="write it as: lemma POS;FEAT;FEAT")
+        return self.generate(lemma, bundle)
+
+    # ---- information -----------------------------------------------------------------------------------
+    @property
+    def lexicon(self) -> list[dict[str, Any]]:
+        return list(self.meta["lexicon"])
+
+    def entries(self, lemma: str) -> list[dict[str, Any]]:
+        """Lexicon entries whose lemma is ``lemma``."""
+        return [e for e in self.meta["lexicon"] if e["lemma"] == lemma]
+
+    def stats(self) -> dict[str, Any]:
+        from .fstutil import size
+
+        return {name: dict(zip(("states", "arcs"), size(f))) for name, f in self.fsts.items()}
+
+
+def _permutations(codes: list[str]) -> pynini.Fst:
+    """An acceptor for every ordering of a multiset of single-symbol codes (subset construction)."""
+    counts: dict[str, int] = {}
+    for c in codes:
+        counts[c] = counts.get(c, 0) + 1
+    symbols = sorted(counts)
+    fst = pynini.Fst()
+    one = pynini.Weight.one(fst.weight_type())
+    states: dict[tuple[int, ...], int] = {}
+
+    def state(remaining: tuple[int, ...]) -> int:
+        if remaining not in states:
+            states[remaining] = fst.add_state()
+            if not any(remaining):
+                fst.set_final(states[remaining])
+        return states[remaining]
+
+    start = tuple(counts[s] for s in symbols)
+    fst.set_start(state(start))
+    todo = [start]
+    seen = {start}
+    while todo:
+        rem = todo.pop()
+        for i, sym in enumerate(symbols):
+            if rem[i]:
+                nxt = rem[:i] + (rem[i] - 1,) + rem[i + 1 :]
+                fst.add_arc(state(rem), pynini.Arc(ord(sym), ord(sym), one, state(nxt)))
+                if nxt not in seen:
+                    seen.add(nxt)
+                    todo.append(nxt)
+    return fst
