@@ -70,7 +70,7 @@ class Language:
 
     def acceptable(self, surface: str) -> bool:
         """False for words the transducers cannot read: empty, too long, or using reserved code points."""
-        return 0 < len(surface) <= MAX_WORD and all(ord(c) < PRIVATE_START for c in surface)
+        return 0 < len(surface) <= MAX_WORD and "\x00" not in surface and all(ord(c) < PRIVATE_START for c in surface)
 
     def _bounded(self, surface: str) -> list[tuple[str, float]]:
         lattice = pynini.compose(acc(surface), self.fsts["segmenter"])

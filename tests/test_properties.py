@@ -1,0 +1,51 @@
+"""Property tests (hypothesis): generated forms analyze back, and analyzer and generator agree."""
+
+from __future__ import annotations
+
+import pytest
+from hypothesis import HealthCheck, given, settings
+from hypothesis import strategies as st
+
+import morphfst
+
+NOUN_FEATURES = st.tuples(
+    st.sampled_from(["SG", "PL"]),
+    st.sampled_from([None, "PSS1S", "PSS2S", "PSS3S", "PSS1P", "PSS2P", "PSS3P"]),
+    st.sampled_from(["NOM", "ACC", "DAT", "LOC", "ABL", "GEN", "INS"]),
+)
+
+
+@pytest.fixture(scope="module")
+def nouns(tur: morphfst.Language) -> list[str]:
+    return sorted({e["lemma"] for e in tur.lexicon if e["pos"] == "N"})
+
+
+@settings(max_examples=150, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
+@given(data=st.data())
+def test_generated_forms_analyze_back(tur: morphfst.Language, nouns: list[str], data: st.DataObject) -> None:
+    lemma = data.draw(st.sampled_from(nouns))
+    number, poss, case = data.draw(NOUN_FEATURES)
+    feats = ";".join(f for f in ["N", number, poss, case] if f)
+    for form in tur.generate(lemma, feats):
+        assert f"{lemma} {feats}" in [a.text for a in tur.analyze(form.form)]
+
+
+@settings(max_examples=150, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
+@given(word=st.text(alphabet="aeıioöuübcçdgğklmnprsştvyz'", min_size=1, max_size=12))
+def test_every_analysis_generates_the_word(tur: morphfst.Language, word: str) -> None:
+    for analysis in tur.analyze(word):
+        assert word in [f.form for f in tur.generate(analysis.lemma, analysis.tags)]
+        assert "".join(m.form for m in analysis.morphs) == word
+
+
+@settings(max_examples=60, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
+@given(data=st.data())
+def test_finnish_generated_forms_analyze_back(fin: morphfst.Language, data: st.DataObject) -> None:
+    entries = [e for e in fin.lexicon if e["pos"] == "N"]
+    entry = data.draw(st.sampled_from(entries))
+    number = data.draw(st.sampled_from(["SG", "PL"]))
+    cases = [v for v in fin.dimensions.get("Case", [])]
+    case = data.draw(st.sampled_from(cases))
+    feats = f"N;{number};{case}"
+    for form in fin.generate(entry["lemma"], feats):
+        assert f"{entry['lemma']} {feats}" in [a.text for a in fin.analyze(form.form)]

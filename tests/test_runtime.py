@@ -1,0 +1,114 @@
+"""The runtime API and the compiler features behind it: flags, constraints, derivation, caching."""
+
+from __future__ import annotations
+
+from pathlib import Path
+
+import pytest
+
+import morphfst
+from morphfst.errors import UserError
+from toygrammar import TOY_GRAMMAR, TOY_LEXICON, write_toy
+
+
+def test_analysis_object(tur: morphfst.Language) -> None:
+    a = tur.analyze("evlerde")[0]
+    assert (a.lemma, a.pos, a.features) == ("ev", "N", ("PL", "LOC"))
+    assert a.text == "ev N;PL;LOC"
+    assert a.ud_feats() == "Case=Loc|Number=Plur" and a.upos() == "NOUN"
+    assert a.morphs[0].kind == "stem" and a.morphs[0].gloss == "house"
+    assert [(m.slot, m.underlying) for m in a.morphs[1:]] == [("number", "lAr"), ("case", "DA")]
+    assert a.to_dict()["segmentation"] == "ev-ler-de"
+
+
+def test_ranked_and_deterministic(tur: morphfst.Language) -> None:
+    first = [a.text for a in tur.analyze("kitabı")]
+    assert first == sorted(first, key=lambda t: t)  # equal weights: ties broken by the analysis text
+    assert [a.text for a in tur.analyze("kitabı")] == first
+    weights = [a.weight for a in tur.analyze("evlerinden")]
+    assert weights == sorted(weights)
+
+
+def test_generate_accepts_labels_in_any_order(tur: morphfst.Language) -> None:
+    assert [f.form for f in tur.generate("ev", ["LOC", "PL", "N"])] == ["evlerde"]
+    assert [f.form for f in tur.generate_text("ev N;PL;LOC")] == ["evlerde"]
+
+
+def test_unknown_label_is_a_user_error(tur: morphfst.Language) -> None:
+    with pytest.raises(UserError) as info:
+        tur.generate("ev", "N;PLURAL")
+    assert "PLURAL" in info.value.message and "PL" in (info.value.hint or "")
+
+
+def test_words_outside_the_alphabet_get_no_analysis(tur: morphfst.Language) -> None:
+    for word in ["evlerdeq", "ев", "", "e\u0000v", "\U000f0001", "x" * 100_000]:
+        assert tur.analyze(word) == []
+        assert tur.segment(word) == []
+        assert not tur.accepts(word)
+
+
+def test_segment_groups_analyses_by_split(tur: morphfst.Language) -> None:
+    segs = tur.segment("kitabı")
+    assert len(segs) == 1 and segs[0].text == "kitab-ı"
+    assert {a.text for a in segs[0].analyses} == {"kitap N;SG;ACC", "kitap N;SG;PSS3S;NOM"}
+
+
+def test_flag_that_blocks_a_rule_and_flag_marker(tur: morphfst.Language) -> None:
+    assert [f.form for f in tur.generate("top", "N;SG;ACC")] == ["topu"]  # no_voicing blocks final_voicing
+    assert [f.form for f in tur.generate("saat", "N;SG;LOC")] == ["saatte"]  # <fr> marker: front harmony
+
+
+def test_constraint_excludes(tur: morphfst.Language) -> None:
+    assert tur.generate("ev", "N;PL;PSS3P;NOM") == []
+    assert [f.form for f in tur.generate("ev", "N;SG;PSS3P;NOM")] == ["evleri"]
+
+
+def test_derivation_cycle_is_finite_per_word(tur: morphfst.Language) -> None:
+    texts = [a.text for a in tur.analyze("kitapçılık")]
+    assert "kitap N;AGT;N;ABSTR;N;SG;NOM" in texts
+
+
+def test_requires_constraint(tmp_path: Path) -> None:
+    grammar = TOY_GRAMMAR.replace("rules {", "constraints {\n  loc_needs_plural: LOC requires PL\n}\n\nrules {")
+    lang = morphfst.load(write_toy(tmp_path, grammar))
+    assert [a.text for a in lang.analyze("kalarna")] == ["ka N;PL;LOC"]
+    assert lang.analyze("kana") == []
+
+
+def test_weights_rank_lexicon_entries(tmp_path: Path) -> None:
+    lexicon = "lemma\tclass\tpos\tgloss\tweight\nka\tnoun\tN\thouse\t2.5\nkal\tnoun\tN\tbig house\t0.5\n"
+    grammar = TOY_GRAMMAR.replace('"nA"   LOC', '"nA"   LOC\n  "ar"   LOC gloss LOC weight 1')
+    lang = morphfst.load(write_toy(tmp_path, grammar, lexicon))
+    # "kalar" is ka+PL (2.5) or kal+LOC via "ar" (0.5 + 1): the cheaper reading comes first
+    assert [a.text for a in lang.analyze("kalar")] == ["kal N;SG;LOC", "ka N;PL;NOM"]
+    assert [round(a.weight, 3) for a in lang.analyze("kalar")] == [1.5, 2.5]
+
+
+def test_compiled_file_is_reused_and_recompiled_when_sources_change(tmp_path: Path) -> None:
+    path = write_toy(tmp_path)
+    first = morphfst.load(path)
+    again = morphfst.load(path)
+    assert again.path == first.path
+    (tmp_path / "toy.tsv").write_text(TOY_LEXICON + "lo\tnoun\tN\tstone\n", encoding="utf-8")
+    changed = morphfst.load(path)
+    assert changed.path != first.path
+    assert changed.analyze("lolar")[0].text == "lo N;PL;NOM"
+
+
+def test_explicit_compiled_file(tmp_path: Path) -> None:
+    path = write_toy(tmp_path)
+    out = morphfst.compile_grammar(path, tmp_path / "toy.mfc")
+    lang = morphfst.load(out)
+    assert lang.analyze("kalar")[0].text == "ka N;PL;NOM"
+    meta = lang.meta
+    assert meta["name"] == "toy" and meta["digest"] and len(meta["sources"]) == 2
+    assert [r["name"] for r in meta["rules"]] == ["front", "back"]
+    # a source change is noticed when the compiled file is loaded by path
+    (tmp_path / "toy.tsv").write_text(TOY_LEXICON + "lo\tnoun\tN\tstone\n", encoding="utf-8")
+    assert morphfst.load(out).analyze("lo")[0].lemma == "lo"
+
+
+def test_unknown_language_name() -> None:
+    with pytest.raises(UserError) as info:
+        morphfst.load("klingon")
+    assert "tur" in (info.value.hint or "")
