@@ -53,9 +53,18 @@ def test_segment_groups_analyses_by_split(tur: morphfst.Language) -> None:
     assert {a.text for a in segs[0].analyses} == {"kitap N;SG;ACC", "kitap N;SG;PSS3S;NOM"}
 
 
-def test_flag_that_blocks_a_rule_and_flag_marker(tur: morphfst.Language) -> None:
-    assert [f.form for f in tur.generate("top", "N;SG;ACC")] == ["topu"]  # no_voicing blocks final_voicing
+def test_flag_markers(tur: morphfst.Language) -> None:
+    assert [f.form for f in tur.generate("top", "N;SG;ACC")] == ["topu"]  # <nv> marker stops final voicing
+    assert [f.form for f in tur.generate("bakmak", "V;FUT;1;SG")] == ["bakacağım"]  # ... of the stem only
     assert [f.form for f in tur.generate("saat", "N;SG;LOC")] == ["saatte"]  # <fr> marker: front harmony
+
+
+def test_flag_that_blocks_a_rule(tmp_path: Path) -> None:
+    grammar = TOY_GRAMMAR.replace("classes {", 'flags {\n  stubborn blocks front "keeps back vowels in suffixes"\n}\n\nclasses {')
+    lexicon = TOY_LEXICON.replace("lemma\tclass\tpos\tgloss\n", "lemma\tclass\tpos\tgloss\tflags\n") + "pe\tnoun\tN\tstone\tstubborn\n"
+    lang = morphfst.load(write_toy(tmp_path, grammar, lexicon))
+    assert [f.form for f in lang.generate("te", "N;PL;NOM")] == ["teler"]
+    assert [f.form for f in lang.generate("pe", "N;PL;NOM")] == ["pelar"]
 
 
 def test_constraint_excludes(tur: morphfst.Language) -> None:

@@ -59,6 +59,19 @@ PARADIGM = [
     ("göz", "N;AGT;N;SG;NOM", "gözcü"),
     ("tuz", "N;PROPR;ADJ", "tuzlu"),
     ("tuz", "N;PRIV;ADJ", "tuzsuz"),
+    # verbs: from memory (Göksel & Kerslake 2005, chapters on the verb and person markers)
+    ("okumak", "V;PROG;1;SG", "okuyorum"),
+    ("gelmek", "V;PROG;3;PL", "geliyorlar"),
+    ("anlamak", "V;PROG;3;SG", "anlıyor"),  # a stem-final low vowel is raised before -Iyor
+    ("beklemek", "V;PROG;1;PL", "bekliyoruz"),
+    ("görmek", "V;PROG;2;PL", "görüyorsunuz"),
+    ("okumak", "V;NEG;PROG;3;SG", "okumuyor"),
+    ("gelmek", "V;PST;1;SG", "geldim"),
+    ("içmek", "V;PST;1;PL", "içtik"),  # D -> t after ç
+    ("bakmak", "V;PST;3;SG", "baktı"),
+    ("yazmak", "V;FUT;1;SG", "yazacağım"),  # k -> ğ before the person marker
+    ("gelmek", "V;NEG;FUT;3;SG", "gelmeyecek"),
+    ("bakmak", "V;PROG;3;SG", "bakıyor"),  # verb stems keep their final stop
 ]
 
 
