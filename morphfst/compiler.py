@@ -78,8 +78,13 @@ class Compiler:
         self._rule_cache: dict[str, pynini.Fst] = {}
 
     # ---- expressions --------------------------------------------------------------------------
-    def set_codes(self, e: m.Expr) -> list[str]:
-        """The symbol codes of a set-like expression (``@set`` or ``[...]``)."""
+    def set_codes(self, e: m.Expr, dedupe: bool = True) -> list[str]:
+        """The symbol codes of a set-like expression (``@set`` or ``[...]``), in order.
+
+        A rule's replacement class keeps repeated symbols (``[t T p] -> [d d v]`` maps two symbols to
+        ``d``); everywhere else a class is a set. A negated class means any symbol of the underlying
+        alphabet except those listed, boundaries and markers included.
+        """
         s = self.space
         if isinstance(e, m.SetRef):
             return [s.code(x) for x in self.g.sets[e.name].members]
@@ -88,10 +93,10 @@ class Compiler:
         if isinstance(e, m.Klass):
             codes: list[str] = []
             for item in e.items:
-                codes.extend(self.set_codes(item))
+                codes.extend(self.set_codes(item, dedupe))
             if e.negated:
                 return [c for c in self.underlying_codes if c not in codes]
-            return list(dict.fromkeys(codes))
+            return list(dict.fromkeys(codes)) if dedupe else codes
         raise TypeError(e)
 
     def expr(self, e: m.Expr) -> pynini.Fst:
@@ -140,7 +145,7 @@ class Compiler:
                     hint="boundaries may appear in contexts only; rules never add or remove them",
                 )
         if isinstance(t, SETLIKE) and isinstance(r, SETLIKE):
-            src, dst = self.set_codes(t), self.set_codes(r)
+            src, dst = self.set_codes(t), self.set_codes(r, dedupe=False)
             if len(src) != len(dst):
                 raise UserError(
                     f"rule {rule.name}: the target set has {len(src)} symbols but the replacement set has {len(dst)}",
@@ -241,7 +246,9 @@ class Compiler:
         s = self.space
         parts = [acc(c) for c in self.letter_codes] + [acc(self.plus)]
         parts += [cross(s.code(mk), "") for mk in self.g.markers]
-        parts += [cross(s.code(o), s.code(o[1:-1])) for o in self.g.optionals if o[1:-1] in s.to_char]
+        # leftover optional segments of letters surface as the letter; those of archiphonemes had to be
+        # realized by a rule, so a path still holding one is dropped like an unresolved archiphoneme
+        parts += [cross(s.code(o), s.code(o[1:-1])) for o in self.g.optionals if o[1:-1] in self.g.letters]
         parts += [cross(s.code(m.WORD_START), ""), cross(s.code(m.WORD_END), "")]
         return union(parts).closure().optimize()
 
@@ -286,6 +293,11 @@ class Compiler:
         t1 = time.perf_counter()
         fsts = self.derive(bounded)
         timings["derive"] = time.perf_counter() - t1
+        t2 = time.perf_counter()
+        guesser = self.guesser()
+        if guesser is not None:
+            fsts["guesser"] = guesser
+            timings["guesser"] = time.perf_counter() - t2
         return CompiledFsts(self.space, fsts, timings)
 
     def derive(self, bounded: pynini.Fst) -> dict[str, pynini.Fst]:
@@ -301,6 +313,71 @@ class Compiler:
         for fst in (analyzer, generator, segmenter, bounded_analyzer):
             fst.arcsort("ilabel")
         return {"analyzer": analyzer, "generator": generator, "segmenter": segmenter, "bounded": bounded_analyzer}
+
+
+    # ---- the guesser for unknown words ----------------------------------------------------------------
+    def guess_stem_fst(self, klass: m.StemClass) -> pynini.Fst | None:
+        """Guessed stems of a class: lemma = stem, any string of letters its ``guess`` pattern allows.
+
+        Analysis side: the stem's letters, a part of speech of the class and the guess marker; underlying
+        side: word start, the stem and the class's apostrophe. Every guessed analysis weighs at least
+        :data:`GUESS_OFFSET` (so it always ranks below an analysis with a lexicon stem) plus
+        :data:`GUESS_STEM_WEIGHT` per stem letter (shorter stems, i.e. longer affix chains, rank first).
+        """
+        if klass.guess is None:
+            return None
+        s = self.space
+        mark = s.add(GUESS_SYMBOL, "guess", single_char_ok=False)
+        try:
+            pattern = self.expr(klass.guess).optimize()
+        except KeyError as exc:
+            raise UserError(
+                f"class {klass.name}: the guess pattern names an unknown symbol or set {exc.args[0]!r}",
+                klass.pos,
+                hint="a guess pattern is written with the grammar's letters and @sets",
+            ) from None
+        letters = union(acc(c, weight=GUESS_STEM_WEIGHT) for c in self.letter_codes).closure()
+        stem = pynini.intersect(pattern, letters.optimize()).optimize()
+        if stem.start() == pynini.NO_STATE_ID:
+            raise UserError(f"class {klass.name}: the guess pattern matches no string of letters", klass.pos)
+        tags = klass.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == klass.name}) or self.g.pos_tags
+        tail = union(acc(s.code(f"pos:{t}")) for t in tags) + acc(mark)
+        after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""
+        return cross("", s.code(m.WORD_START)) + stem + cross(tail, after) + pynini.accep("", weight=GUESS_OFFSET)
+
+    def guesser(self) -> pynini.Fst | None:
+        """Bounded surface → internal analysis of guessed words (``None`` when no class has a guess pattern).
+
+        Each class's guessed stems enter the class's slot graph and go through the same constraints,
+        rule cascade and final step as lexicon stems; the internal analysis carries the guess marker
+        right after the part of speech. Each affix with a surface form costs :data:`GUESS_MORPH_WEIGHT`, so a
+        guessed affix of one letter does not pay for the stem letter it saves, and one of two letters does.
+        """
+        parts = []
+        for klass in self.g.classes.values():
+            stem = self.guess_stem_fst(klass)
+            if stem is not None:
+                parts.append(stem + self.slot_graph(list(klass.next)))
+        if not parts:
+            return None
+        fst = union(parts).optimize()
+        filt = self.constraint_filter(set(self.letter_codes) | {self.space.code(GUESS_SYMBOL)})
+        if filt is not None:
+            fst = pynini.compose(filt, fst)
+        for rule in self.g.rules:
+            fst = pynini.compose(fst, self.rule_fst(rule))
+        fst = pynini.compose(fst, self.final_step())
+        morph_cost = union([chars(self.letter_codes), acc(self.plus, weight=GUESS_MORPH_WEIGHT)]).closure()
+        fst = pynini.compose(fst, morph_cost)
+        guesser = fst.invert().optimize()
+        guesser.arcsort("ilabel")
+        return guesser
+
+
+GUESS_SYMBOL = "mark:guess"  # the marker of a guessed analysis (kind "guess"), right after the part of speech
+GUESS_OFFSET = 100.0  # weight added to every guessed analysis
+GUESS_STEM_WEIGHT = 0.1  # weight per letter of a guessed stem
+GUESS_MORPH_WEIGHT = 0.15  # weight per guessed-word affix with a surface form
 
 
 def _mentions_boundary(e: m.Expr) -> bool:

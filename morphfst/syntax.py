@@ -383,7 +383,17 @@ class _Builder:
         if kind == "e_set":
             return m.SetRef(str(kids[0])[1:], self.pos_of(kids[0]))
         if kind == "e_boundary":
-            return m.Sym(m.MORPH_BOUNDARY, self.pos_of(node))
+            pos = self.pos_of(node)
+            line = self.lines[pos.line - 1] if 0 < pos.line <= len(self.lines) else ""
+            before = line[pos.column - 2] if pos.column >= 2 else " "
+            if not before.isspace() and before not in "([|/_":
+                raise UserError(
+                    "'+' right after a symbol: this is the morph boundary, not 'one or more'",
+                    pos,
+                    hint="write X X* for one or more; put a space before + when you mean the boundary",
+                    source_line=line,
+                )
+            return m.Sym(m.MORPH_BOUNDARY, pos)
         if kind == "e_start":
             return m.Sym(m.WORD_START, self.pos_of(node))
         if kind == "e_end":

@@ -91,3 +91,8 @@ def test_directions(direction: str, expected: str) -> None:
     # "a -> e after e": left to right matches the left context against its own output (the change
     # spreads); right to left and simultaneous application match it against the input (common practice).
     assert forms(f"rule s {direction}: a -> e / e _", "^beaa$") == [expected]
+
+
+def test_replacement_class_may_repeat_symbols() -> None:
+    assert forms("rule m: [ptk] -> [bbg] / _ $", "^kap$") == ["^kab$"]
+    assert forms("rule m: [ptk] -> [bbg] / _ $", "^kat$") == ["^kab$"]

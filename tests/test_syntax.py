@@ -88,3 +88,10 @@ def test_unexpected_character() -> None:
         parse_grammar_text("alphabet {\n  letters a b\n}\nsets {\n  v = a \\ b\n}\n", "chars.mfg")
     assert info.value.position is not None
     assert (info.value.position.line, info.value.position.column) == (5, 9)
+
+
+def test_plus_glued_to_a_symbol_is_an_error() -> None:
+    src = "alphabet {\n  letters a b\n}\nrules {\n  rule r: a -> b / b+ _\n}\n"
+    with pytest.raises(UserError) as info:
+        parse_grammar_text(src, "plus.mfg")
+    assert "one or more" in info.value.message and info.value.position and info.value.position.line == 5
