@@ -131,7 +131,7 @@ def scaling(grammar: Path, factors: list[int]) -> None:
                 header = next(i for i, ln in enumerate(lines) if ln.strip() and not ln.startswith("#"))
                 cols = lines[header].split("\t")
                 out = [lines[header]]
-                for k in range(factor):
+                for _copy in range(factor):
                     for ln in lines[header + 1 :]:
                         if not ln.strip() or ln.startswith("#"):
                             continue
@@ -189,8 +189,12 @@ def main() -> None:
         lang = morphfst.load(out)
         loads.append(time.perf_counter() - t0)
     print(f"morphfst core benchmark: {lang.title}")
-    print(f"  compile time:            {compile_s:.2f} s ({len(lang.meta['lexicon'])} lexicon entries, {len(lang.meta['rules'])} rules)")
-    print(f"  compiled file:           {out.stat().st_size / 1024:.0f} KiB, load time median {statistics.median(loads) * 1000:.1f} ms")
+    print(
+        f"  compile time:            {compile_s:.2f} s ({len(lang.meta['lexicon'])} lexicon entries, {len(lang.meta['rules'])} rules)"
+    )
+    print(
+        f"  compiled file:           {out.stat().st_size / 1024:.0f} KiB, load time median {statistics.median(loads) * 1000:.1f} ms"
+    )
     for name, fst in lang.fsts.items():
         states, arcs = size(fst)
         print(f"  {name:<24} {states:>8,} states {arcs:>9,} arcs")

@@ -19,12 +19,13 @@ import time
 from collections import defaultdict
 from collections.abc import Callable
 from dataclasses import dataclass, field
+from typing import Literal
 
 import pynini
 
 from . import model as m
 from .errors import UserError
-from .fstutil import acc, chars, cross, empty, union
+from .fstutil import NO_STATE_ID, Arc, Weight, acc, chars, cross, empty, union
 from .symbols import SymbolSpace
 from .validate import BOUNDARIES
 
@@ -71,7 +72,9 @@ class Compiler:
         self.space = space or build_space(grammar)
         s = self.space
         self.letter_codes = [s.code(x) for x in grammar.letters]
-        self.underlying_codes = [s.code(x) for x in grammar.letters + grammar.archiphonemes + grammar.markers + grammar.optionals] + [s.code(b) for b in BOUNDARIES]
+        self.underlying_codes = [
+            s.code(x) for x in grammar.letters + grammar.archiphonemes + grammar.markers + grammar.optionals
+        ] + [s.code(b) for b in BOUNDARIES]
         self.sigma = chars(self.underlying_codes).optimize()
         self.sigma_star = self.sigma.closure().optimize()
         self.plus = s.code(m.MORPH_BOUNDARY)
@@ -130,7 +133,7 @@ class Compiler:
         tau = self.rule_tau(rule)
         left = self.expr(rule.left).optimize() if rule.left is not None else acc("")
         right = self.expr(rule.right).optimize() if rule.right is not None else acc("")
-        mode = "opt" if rule.optional else "obl"
+        mode: Literal["opt", "obl"] = "opt" if rule.optional else "obl"
         fst = pynini.cdrewrite(tau, left, right, self.sigma_star, direction=rule.direction, mode=mode).optimize()
         self._rule_cache[rule.name] = fst
         return fst
@@ -155,8 +158,10 @@ class Compiler:
             tau = union(cross(a, b) for a, b in zip(src, dst))
         else:
             target = self.expr(t).optimize()
-            if target.start() == pynini.NO_STATE_ID:
-                raise UserError(f"rule {rule.name}: the target matches nothing", rule.pos, hint="check the set or symbols named in the target")
+            if target.start() == NO_STATE_ID:
+                raise UserError(
+                    f"rule {rule.name}: the target matches nothing", rule.pos, hint="check the set or symbols named in the target"
+                )
             tau = pynini.cross(target, self.expr(r).optimize())
         if rule.weight:
             tau = tau + pynini.accep("", weight=rule.weight)
@@ -187,35 +192,37 @@ class Compiler:
         """The morphotactic graph from the given slots to the end of the word (cycles allowed)."""
         s = self.space
         fst = pynini.Fst()
-        one = pynini.Weight.one(fst.weight_type())
+        one = Weight.one(fst.weight_type())
         start = fst.add_state()
         fst.set_start(start)
         entry = {name: fst.add_state() for name in self.g.slots}
         end = fst.add_state()
         final = fst.add_state()
         fst.set_final(final)
-        fst.add_arc(end, pynini.Arc(0, ord(s.code(m.WORD_END)), one, final))
+        fst.add_arc(end, Arc(0, ord(s.code(m.WORD_END)), one, final))
 
         def target(name: str) -> int:
             return end if name == m.END_SLOT else entry[name]
 
         for name in starts:
-            fst.add_arc(start, pynini.Arc(0, 0, one, target(name)))
+            fst.add_arc(start, Arc(0, 0, one, target(name)))
         for slot in self.g.slots.values():
             for affix in slot.affixes:
-                ilabels = [s.code(f"affix:{affix.ident}")] + [s.code(f"feature:{f}") if f"feature:{f}" in s.to_char else s.code(f"pos:{f}") for f in affix.features]
+                ilabels = [s.code(f"affix:{affix.ident}")] + [
+                    s.code(f"feature:{f}") if f"feature:{f}" in s.to_char else s.code(f"pos:{f}") for f in affix.features
+                ]
                 if affix.new_pos:
                     ilabels.append(s.code(f"pos:{affix.new_pos}"))
                 olabels = [self.plus + s.encode(affix.form)] if affix.form else []
                 pairs = [(ord(c), 0) for c in ilabels] + [(0, ord(c)) for c in "".join(olabels)]
                 state = entry[slot.name]
-                weight = pynini.Weight(fst.weight_type(), affix.weight)
+                weight = Weight(fst.weight_type(), affix.weight)
                 for index, (il, ol) in enumerate(pairs):
                     nxt = fst.add_state()
-                    fst.add_arc(state, pynini.Arc(il, ol, weight if index == 0 else one, nxt))
+                    fst.add_arc(state, Arc(il, ol, weight if index == 0 else one, nxt))
                     state = nxt
                 for follower in affix.next if affix.next is not None else slot.next:
-                    fst.add_arc(state, pynini.Arc(0, 0, one, target(follower)))
+                    fst.add_arc(state, Arc(0, 0, one, target(follower)))
         return fst
 
     def constraint_filter(self, lemma_chars: set[str]) -> pynini.Fst | None:
@@ -229,7 +236,9 @@ class Compiler:
         for c in self.g.constraints:
             left = self._contains(c.left, sigma_star)
             right = self._contains(c.right, sigma_star)
-            bad = (pynini.intersect(left, right) if c.kind == "excludes" else pynini.difference(left, right.optimize())).optimize()
+            bad = (
+                pynini.intersect(left, right) if c.kind == "excludes" else pynini.difference(left, right.optimize())
+            ).optimize()
             allowed = pynini.difference(allowed, bad).optimize()
         return allowed
 
@@ -314,7 +323,6 @@ class Compiler:
             fst.arcsort("ilabel")
         return {"analyzer": analyzer, "generator": generator, "segmenter": segmenter, "bounded": bounded_analyzer}
 
-
     # ---- the guesser for unknown words ----------------------------------------------------------------
     def guess_stem_fst(self, klass: m.StemClass) -> pynini.Fst | None:
         """Guessed stems of a class: lemma = stem, any string of letters its ``guess`` pattern allows.
@@ -338,7 +346,7 @@ class Compiler:
             ) from None
         letters = union(acc(c, weight=GUESS_STEM_WEIGHT) for c in self.letter_codes).closure()
         stem = pynini.intersect(pattern, letters.optimize()).optimize()
-        if stem.start() == pynini.NO_STATE_ID:
+        if stem.start() == NO_STATE_ID:
             raise UserError(f"class {klass.name}: the guess pattern matches no string of letters", klass.pos)
         tags = klass.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == klass.name}) or self.g.pos_tags
         tail = union(acc(s.code(f"pos:{t}")) for t in tags) + acc(mark)

@@ -8,6 +8,12 @@ import pynini
 
 TOKEN = "utf8"
 
+# pynini provides these at run time but its type stubs do not re-export them; name them once here.
+Arc = pynini.Arc  # type: ignore[attr-defined]
+Weight = pynini.Weight  # type: ignore[attr-defined]
+NO_STATE_ID: int = pynini.NO_STATE_ID  # type: ignore[attr-defined]
+ACYCLIC = pynini.ACYCLIC  # type: ignore[attr-defined]
+
 
 def acc(text: str, weight: float = 0.0) -> pynini.Fst:
     """An acceptor for a string of symbol codes (the empty string allowed)."""
@@ -47,7 +53,7 @@ def empty() -> pynini.Fst:
 
 
 def is_empty(fst: pynini.Fst) -> bool:
-    return fst.start() == pynini.NO_STATE_ID or fst.num_states() == 0
+    return fst.start() == NO_STATE_ID or fst.num_states() == 0
 
 
 def size(fst: pynini.Fst) -> tuple[int, int]:
@@ -59,7 +65,7 @@ def paths(fst: pynini.Fst, limit: int = 1000) -> list[tuple[str, str, float]]:
     """(input, output, weight) of the paths of ``fst``, at most ``limit`` (best first if cyclic)."""
     if is_empty(fst):
         return []
-    if not fst.properties(pynini.ACYCLIC, True) == pynini.ACYCLIC:
+    if not fst.properties(ACYCLIC, True) == ACYCLIC:
         fst = pynini.shortestpath(fst, nshortest=limit)
     out: list[tuple[str, str, float]] = []
     it = fst.paths(input_token_type=TOKEN, output_token_type=TOKEN)

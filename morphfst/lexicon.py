@@ -39,9 +39,7 @@ def lexicon_files(grammar: m.Grammar) -> list[Path]:
     return files
 
 
-def read_lexicon(
-    grammar: m.Grammar, fold: Callable[[str], str], files: list[Path] | None = None
-) -> list[m.LexEntry]:
+def read_lexicon(grammar: m.Grammar, fold: Callable[[str], str], files: list[Path] | None = None) -> list[m.LexEntry]:
     """Read and validate every lexicon file of ``grammar``; ``fold`` normalizes a lemma to a stem."""
     entries: list[m.LexEntry] = []
     counts: list[tuple[int, float]] = []
@@ -74,9 +72,7 @@ def read_lexicon(
     return entries
 
 
-def _read_file(
-    path: Path, grammar: m.Grammar, fold: Callable[[str], str]
-) -> list[tuple[m.LexEntry, float | None]]:
+def _read_file(path: Path, grammar: m.Grammar, fold: Callable[[str], str]) -> list[tuple[m.LexEntry, float | None]]:
     try:
         raw = path.read_bytes()
     except OSError as exc:
@@ -84,8 +80,8 @@ def _read_file(
     try:
         text = raw.decode("utf-8")
     except UnicodeDecodeError as exc:
-        line = raw[: exc.start].count(b"\n") + 1
-        raise UserError("lexicon file is not valid UTF-8", Position(str(path), line), hint="save it as UTF-8") from None
+        bad_line = raw[: exc.start].count(b"\n") + 1
+        raise UserError("lexicon file is not valid UTF-8", Position(str(path), bad_line), hint="save it as UTF-8") from None
     text = unicodedata.normalize("NFC", text)
     header: list[str] | None = None
     out: list[tuple[m.LexEntry, float | None]] = []
@@ -151,7 +147,11 @@ def _entry(
     klass = row["class"]
     if klass not in grammar.classes:
         near = _nearest(klass, list(grammar.classes))
-        raise fail("class", f"unknown class {klass!r}", f"did you mean {near!r}?" if near else "declare it in the grammar's classes block")
+        raise fail(
+            "class",
+            f"unknown class {klass!r}",
+            f"did you mean {near!r}?" if near else "declare it in the grammar's classes block",
+        )
     pos_tag = row["pos"]
     allowed = grammar.classes[klass].pos_allowed or grammar.pos_tags
     if pos_tag not in allowed:
@@ -162,7 +162,9 @@ def _entry(
         try:
             weight = float(row["weight"])
         except ValueError:
-            raise fail("weight", f"malformed weight {row['weight']!r}", "a weight is a number such as 0.5 (lower is better)") from None
+            raise fail(
+                "weight", f"malformed weight {row['weight']!r}", "a weight is a number such as 0.5 (lower is better)"
+            ) from None
         if not math.isfinite(weight):
             raise fail("weight", f"malformed weight {row['weight']!r}", "a weight must be a finite number")
     if row.get("count"):
@@ -171,12 +173,18 @@ def _entry(
             if count <= 0 or not math.isfinite(count):
                 raise ValueError
         except ValueError:
-            raise fail("count", f"malformed count {row['count']!r}", "a count is a positive number of corpus occurrences") from None
+            raise fail(
+                "count", f"malformed count {row['count']!r}", "a count is a positive number of corpus occurrences"
+            ) from None
     flags = [f.strip() for f in row.get("flags", "").split(",") if f.strip()]
     for flag in flags:
         if flag not in grammar.flags:
             near = _nearest(flag, list(grammar.flags))
-            raise fail("flags", f"unknown flag {flag!r}", f"did you mean {near!r}?" if near else "declare it in the grammar's flags block")
+            raise fail(
+                "flags",
+                f"unknown flag {flag!r}",
+                f"did you mean {near!r}?" if near else "declare it in the grammar's flags block",
+            )
     pos = Position(str(path), number, 1)
     stem_text = row.get("stem") or fold(lemma)
     stem = parse_form(stem_text, where("stem") if row.get("stem") else pos)
@@ -185,7 +193,11 @@ def _entry(
         base = sym[1:-1] if sym.startswith("(") else sym
         if sym not in known and base not in known:
             column = "stem" if row.get("stem") else "lemma"
-            raise fail(column, f"symbol {sym!r} of stem {stem_text!r} is not in the alphabet", "add it to the grammar's letters, or give an underlying stem in the stem column")
+            raise fail(
+                column,
+                f"symbol {sym!r} of stem {stem_text!r} is not in the alphabet",
+                "add it to the grammar's letters, or give an underlying stem in the stem column",
+            )
     entry = m.LexEntry(lemma, klass, pos_tag, row["gloss"], weight, stem, flags, pos)
     return entry, count
 

@@ -21,8 +21,17 @@ def file_hash(path: str | Path) -> str:
 
 
 COMPILER_MODULES = (
-    "grammar.lark", "syntax.py", "model.py", "validate.py", "lexicon.py", "loader.py", "compiler.py",
-    "symbols.py", "fstutil.py", "normalize.py", "metadata.py",
+    "grammar.lark",
+    "syntax.py",
+    "model.py",
+    "validate.py",
+    "lexicon.py",
+    "loader.py",
+    "compiler.py",
+    "symbols.py",
+    "fstutil.py",
+    "normalize.py",
+    "metadata.py",
 )
 
 

@@ -166,7 +166,7 @@ class _Builder:
         return self.lines[pos.line - 1].strip() if 0 < pos.line <= len(self.lines) else ""
 
     @staticmethod
-    def unquote(tok: Token) -> str:
+    def unquote(tok: Any) -> str:
         return str(tok)[1:-1]
 
     def build(self, tree: Tree) -> None:
@@ -211,7 +211,7 @@ class _Builder:
     def _set_items(self, items: list[Any]) -> list[str]:
         out: list[str] = []
         for item in items:
-            tok = item.children[0] if isinstance(item, Tree) else item
+            tok: Any = item.children[0] if isinstance(item, Tree) else item
             text = str(tok)
             if tok.type == "SETREF":
                 ref = text[1:]
@@ -418,7 +418,7 @@ class _Builder:
             return m.Alt(tuple(self.expr(k) for k in kids))
         raise UserError(f"unsupported expression {kind}", self.pos_of(node))  # pragma: no cover
 
-    def _token_expr(self, tok: Token) -> m.Expr:
+    def _token_expr(self, tok: Any) -> m.Expr:
         if tok.type == "SETREF":
             return m.SetRef(str(tok)[1:], self.pos_of(tok))
         if tok.type == "OPTSEG":  # "(y)": the optional segment, or the plain symbol if there is none

@@ -74,7 +74,11 @@ def _check_sets(g: m.Grammar) -> None:
     for s in g.sets.values():
         for sym in s.members:
             if sym not in known:
-                raise _err(f"set {s.name} has {sym!r}, which is not in the alphabet", s.pos, _near(sym, sorted(known)) or "declare it under letters, archiphonemes or markers")
+                raise _err(
+                    f"set {s.name} has {sym!r}, which is not in the alphabet",
+                    s.pos,
+                    _near(sym, sorted(known)) or "declare it under letters, archiphonemes or markers",
+                )
 
 
 def _check_features(g: m.Grammar) -> None:
@@ -89,7 +93,9 @@ def _check_features(g: m.Grammar) -> None:
                 )
             owner[value] = dim.name
     if g.classes and "pos" not in g.dimensions:
-        raise _err("no 'pos' dimension declared", Position(g.path), "declare the parts of speech in the features block: pos: N V ADJ")
+        raise _err(
+            "no 'pos' dimension declared", Position(g.path), "declare the parts of speech in the features block: pos: N V ADJ"
+        )
     for label in g.ud:
         if label not in owner:
             raise _err(f"UD mapping for undeclared feature {label}", Position(g.path), _near(label, sorted(owner)))
@@ -99,7 +105,11 @@ def _check_flags(g: m.Grammar) -> None:
     rule_names = {r.name for r in g.rules}
     for flag in g.flags.values():
         if flag.marks and flag.marks not in g.markers:
-            raise _err(f"flag {flag.name} marks {flag.marks}, which is not a declared marker", flag.pos, "add it to the alphabet's markers line")
+            raise _err(
+                f"flag {flag.name} marks {flag.marks}, which is not a declared marker",
+                flag.pos,
+                "add it to the alphabet's markers line",
+            )
         for name in flag.blocks:
             if name not in rule_names:
                 raise _err(f"flag {flag.name} blocks an undefined rule {name!r}", flag.pos, _near(name, sorted(rule_names)))
@@ -108,7 +118,11 @@ def _check_flags(g: m.Grammar) -> None:
 def _check_slot_names(names: list[str], g: m.Grammar, pos: Position, what: str) -> None:
     for name in names:
         if name != m.END_SLOT and name not in g.slots:
-            raise _err(f"{what} points at an undefined slot {name!r}", pos, _near(name, sorted(g.slots)) or "declare the slot, or write 'end'")
+            raise _err(
+                f"{what} points at an undefined slot {name!r}",
+                pos,
+                _near(name, sorted(g.slots)) or "declare the slot, or write 'end'",
+            )
 
 
 def _check_slots(g: m.Grammar) -> None:
@@ -117,7 +131,9 @@ def _check_slots(g: m.Grammar) -> None:
         _check_slot_names(klass.next, g, klass.pos, f"class {klass.name}")
         for tag in klass.pos_allowed:
             if tag not in pos_tags:
-                raise _err(f"class {klass.name} names an undeclared part of speech {tag}", klass.pos, "declare it in the 'pos' dimension")
+                raise _err(
+                    f"class {klass.name} names an undeclared part of speech {tag}", klass.pos, "declare it in the 'pos' dimension"
+                )
     letters = set(g.letters) | set(g.archiphonemes) | set(g.markers) | set(g.optionals)
     for slot in g.slots.values():
         _check_slot_names(slot.next, g, slot.pos, f"slot {slot.name}")
@@ -126,12 +142,20 @@ def _check_slots(g: m.Grammar) -> None:
                 _check_slot_names(affix.next, g, affix.pos, f"affix {affix.form_text!r}")
             for feat in affix.features:
                 if g.dimension_of(feat) is None:
-                    raise _err(f"undeclared feature {feat!r}", affix.pos, _near(feat, [v for d in g.dimensions.values() for v in d.values]) or "declare it in the features block")
+                    raise _err(
+                        f"undeclared feature {feat!r}",
+                        affix.pos,
+                        _near(feat, [v for d in g.dimensions.values() for v in d.values]) or "declare it in the features block",
+                    )
             if affix.new_pos is not None and affix.new_pos not in pos_tags:
                 raise _err(f"undeclared part of speech {affix.new_pos!r}", affix.pos, "declare it in the 'pos' dimension")
             for sym in affix.form:
                 if sym not in letters:
-                    raise _err(f"symbol {sym!r} in form {affix.form_text!r} is not in the alphabet", affix.pos, _near(sym, sorted(letters)) or "declare it under letters, archiphonemes or markers")
+                    raise _err(
+                        f"symbol {sym!r} in form {affix.form_text!r} is not in the alphabet",
+                        affix.pos,
+                        _near(sym, sorted(letters)) or "declare it under letters, archiphonemes or markers",
+                    )
 
 
 def _check_reachability(g: m.Grammar) -> None:
@@ -148,7 +172,11 @@ def _check_reachability(g: m.Grammar) -> None:
             todo.extend(affix.next or [])
     for slot in g.slots.values():
         if slot.name not in reached:
-            raise _err(f"slot {slot.name} is not reachable from any class", slot.pos, "list it after a class's '->' or in another slot's followers, or delete it")
+            raise _err(
+                f"slot {slot.name} is not reachable from any class",
+                slot.pos,
+                "list it after a class's '->' or in another slot's followers, or delete it",
+            )
 
 
 def _check_constraints(g: m.Grammar) -> None:
@@ -157,7 +185,11 @@ def _check_constraints(g: m.Grammar) -> None:
     for c in g.constraints:
         for operand in (c.left, c.right):
             if operand not in names and operand not in labels:
-                raise _err(f"constraint {c.name}: {operand!r} is neither a feature nor a named affix", c.pos, _near(operand, sorted(names | labels)))
+                raise _err(
+                    f"constraint {c.name}: {operand!r} is neither a feature nor a named affix",
+                    c.pos,
+                    _near(operand, sorted(names | labels)),
+                )
 
 
 def _check_rules(g: m.Grammar) -> None:
@@ -165,10 +197,14 @@ def _check_rules(g: m.Grammar) -> None:
     seen: dict[str, Position] = {}
     for index, rule in enumerate(g.rules):
         if rule.name in seen:
-            raise _err(f"rule {rule.name} is defined twice", rule.pos, f"the first definition is at {seen[rule.name]}; rule names must be unique")
+            raise _err(
+                f"rule {rule.name} is defined twice",
+                rule.pos,
+                f"the first definition is at {seen[rule.name]}; rule names must be unique",
+            )
         seen[rule.name] = rule.pos
 
-        def fix(e: m.Expr | None, role: str) -> m.Expr | None:
+        def fix(e: m.Expr | None, role: str, rule: m.Rule = rule) -> m.Expr | None:
             return None if e is None else _resolve(e, g, known, rule, role)
 
         g.rules[index] = replace(
@@ -196,7 +232,11 @@ def _resolve(e: m.Expr, g: m.Grammar, known: set[str], rule: m.Rule, role: str) 
         return m.Sym(name, e.pos)
     if isinstance(e, m.SetRef):
         if e.name not in g.sets:
-            raise UserError(f"rule {rule.name}: undeclared set @{e.name}", e.pos or rule.pos, hint=_near(e.name, sorted(g.sets)) or "declare it in the sets block")
+            raise UserError(
+                f"rule {rule.name}: undeclared set @{e.name}",
+                e.pos or rule.pos,
+                hint=_near(e.name, sorted(g.sets)) or "declare it in the sets block",
+            )
         return e
     if isinstance(e, m.Klass):
         return m.Klass(tuple(_resolve(i, g, known, rule, role) for i in e.items), e.negated)

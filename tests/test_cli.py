@@ -28,7 +28,9 @@ def test_analyze_table(capsys: pytest.CaptureFixture[str], tur: morphfst.Languag
     assert "(no analysis)" in lines[3]
 
 
-def test_analyze_tsv_one_record_per_token_in_order(capsys: pytest.CaptureFixture[str], tmp_path: Path, tur: morphfst.Language) -> None:
+def test_analyze_tsv_one_record_per_token_in_order(
+    capsys: pytest.CaptureFixture[str], tmp_path: Path, tur: morphfst.Language
+) -> None:
     words = tmp_path / "words.txt"
     words.write_text("evlerde qqq\n\nodaya\n", encoding="utf-8")
     code, out, _ = run(capsys, "analyze", "-i", str(words), "-f", "tsv", "--best", "1")
@@ -53,7 +55,9 @@ def test_generate(capsys: pytest.CaptureFixture[str], tur: morphfst.Language) ->
     assert code == 2 and "unknown feature label 'PLURAL'" in err and "Traceback" not in err
 
 
-def test_segment_text_keeps_lines_and_reports_coverage(capsys: pytest.CaptureFixture[str], tmp_path: Path, tur: morphfst.Language) -> None:
+def test_segment_text_keeps_lines_and_reports_coverage(
+    capsys: pytest.CaptureFixture[str], tmp_path: Path, tur: morphfst.Language
+) -> None:
     text = tmp_path / "text.txt"
     text.write_text("Evlerde kitaplar qqq.\n\nAnkara'da, zzz!\n", encoding="utf-8")
     code, out, err = run(capsys, "segment", "-i", str(text))
@@ -119,5 +123,7 @@ def test_console_script_runs_as_a_process(tur: morphfst.Language) -> None:
     )
     assert proc.returncode == 0, proc.stderr
     assert "oda\tN\tPL;LOC" in proc.stdout
-    proc = subprocess.run([sys.executable, "-m", "morphfst", "build", "/no/such.mfg"], capture_output=True, text=True, check=False)
+    proc = subprocess.run(
+        [sys.executable, "-m", "morphfst", "build", "/no/such.mfg"], capture_output=True, text=True, check=False
+    )
     assert proc.returncode == 2 and "Traceback" not in proc.stderr and "no such file" in proc.stderr

@@ -5,10 +5,10 @@ from __future__ import annotations
 from pathlib import Path
 
 import pytest
+from toygrammar import TOY_GRAMMAR, TOY_LEXICON, write_toy
 
 import morphfst
 from morphfst.errors import UserError
-from toygrammar import TOY_GRAMMAR, TOY_LEXICON, write_toy
 
 
 def test_analysis_object(tur: morphfst.Language) -> None:
@@ -63,7 +63,9 @@ def test_flag_markers(tur: morphfst.Language) -> None:
 
 def test_flag_that_blocks_a_rule(tmp_path: Path) -> None:
     grammar = TOY_GRAMMAR.replace("classes {", 'flags {\n  stubborn blocks front "keeps back vowels in suffixes"\n}\n\nclasses {')
-    lexicon = TOY_LEXICON.replace("lemma\tclass\tpos\tgloss\n", "lemma\tclass\tpos\tgloss\tflags\n") + "pe\tnoun\tN\tstone\tstubborn\n"
+    lexicon = (
+        TOY_LEXICON.replace("lemma\tclass\tpos\tgloss\n", "lemma\tclass\tpos\tgloss\tflags\n") + "pe\tnoun\tN\tstone\tstubborn\n"
+    )
     lang = morphfst.load(write_toy(tmp_path, grammar, lexicon))
     assert [f.form for f in lang.generate("te", "N;PL;NOM")] == ["teler"]
     assert [f.form for f in lang.generate("pe", "N;PL;NOM")] == ["pelar"]

@@ -3,11 +3,11 @@
 from __future__ import annotations
 
 import pytest
+from toygrammar import TOY_GRAMMAR
 
 from morphfst import model as m
 from morphfst.errors import UserError
 from morphfst.syntax import parse_form, parse_grammar_text
-from toygrammar import TOY_GRAMMAR
 
 
 def test_toy_grammar_blocks() -> None:
@@ -66,7 +66,7 @@ def test_forms_with_optional_segments_and_multichar_symbols() -> None:
 
 
 def test_syntax_error_has_line_column_caret_and_hint() -> None:
-    src = "alphabet {\n  letters a b\n}\nslot x {\n  \"a\" PL gloss\n}\n"
+    src = 'alphabet {\n  letters a b\n}\nslot x {\n  "a" PL gloss\n}\n'
     with pytest.raises(UserError) as info:
         parse_grammar_text(src, "bad.mfg")
     err = info.value

@@ -5,11 +5,11 @@ from __future__ import annotations
 from pathlib import Path
 
 import pytest
+from toygrammar import TOY_GRAMMAR, TOY_LEXICON, write_toy
 
 from morphfst.cli import main
 from morphfst.errors import UserError
 from morphfst.loader import load_model
-from toygrammar import TOY_GRAMMAR, TOY_LEXICON, write_toy
 
 
 def line_of(text: str, needle: str) -> int:
@@ -125,7 +125,9 @@ def test_counts_become_negative_log_weights(tmp_path: Path) -> None:
         ("slot case {", "slot case {{"),
     ],
 )
-def test_cli_reports_errors_with_exit_code_2_and_no_traceback(tmp_path: Path, capsys: pytest.CaptureFixture[str], change: tuple[str, str]) -> None:
+def test_cli_reports_errors_with_exit_code_2_and_no_traceback(
+    tmp_path: Path, capsys: pytest.CaptureFixture[str], change: tuple[str, str]
+) -> None:
     path = write_toy(tmp_path, TOY_GRAMMAR.replace(*change))
     code = main(["build", str(path), "-o", str(tmp_path / "out.mfc")])
     err = capsys.readouterr().err

@@ -8,6 +8,7 @@ from __future__ import annotations
 
 import argparse
 import importlib
+import os
 import sys
 from collections.abc import Sequence
 
@@ -65,10 +66,10 @@ def main(argv: Sequence[str] | None = None) -> int:
         sys.stderr.write("interrupted\n")
         return 130
     except BrokenPipeError:
-        try:
-            sys.stdout = None  # type: ignore[assignment]
-        finally:
-            return 0
+        # the reader went away (e.g. piped into head): stop quietly
+        devnull = os.open(os.devnull, os.O_WRONLY)
+        os.dup2(devnull, sys.stdout.fileno())
+        return 0
 
 
 def entry_point() -> None:

@@ -7,7 +7,18 @@ import sys
 from collections.abc import Iterator
 
 from ..textio import ReadStats
-from .common import Aligned, add_format, add_input, add_language, input_lines, open_language, report_stats, shorten, tsv_field, write_json
+from .common import (
+    Aligned,
+    add_format,
+    add_input,
+    add_language,
+    input_lines,
+    open_language,
+    report_stats,
+    shorten,
+    tsv_field,
+    write_json,
+)
 
 EXAMPLES = """examples:
   morphfst analyze evlerde kitabı                 two Turkish words, aligned for reading

@@ -32,7 +32,9 @@ def run(args: argparse.Namespace) -> int:
     w = sys.stdout.write
     w(f"{meta['title']} ({meta['name']}), morphfst {meta['version']}\n")
     w(f"  compiled file: {lang.path}\n  grammar:       {meta['grammar_path']}\n")
-    w(f"  lexicon entries: {len(meta['lexicon'])}   classes: {len(meta['classes'])}   slots: {len(meta['slots'])}   rules: {len(meta['rules'])}\n")
+    w(
+        f"  lexicon entries: {len(meta['lexicon'])}   classes: {len(meta['classes'])}   slots: {len(meta['slots'])}   rules: {len(meta['rules'])}\n"
+    )
     w("features:\n")
     for dim, values in meta["dimensions"].items():
         w(f"  {dim:<12} {' '.join(values)}\n")

@@ -128,7 +128,9 @@ def run(args: argparse.Namespace) -> int:
     return 0
 
 
-def _emit_token(args: argparse.Namespace, lang: Language, out: object, number: int, text: str, segs: list, pieces: list[str]) -> None:  # type: ignore[type-arg]
+def _emit_token(
+    args: argparse.Namespace, lang: Language, out: object, number: int, text: str, segs: list, pieces: list[str]
+) -> None:  # type: ignore[type-arg]
     best = segs[0] if segs else None
     if args.format == "text":
         if best is None:
