@@ -8,7 +8,7 @@ later errors and traces can point at the source line.
 from __future__ import annotations
 
 from dataclasses import dataclass, field
-from typing import Literal, Union
+from typing import Literal
 
 from .errors import Position
 
@@ -69,7 +69,7 @@ class AnySym:
     """Any symbol of the underlying alphabet (``.``)."""
 
 
-Expr = Union[Sym, SetRef, Klass, Seq, Alt, Repeat, Empty, AnySym]
+Expr = Sym | SetRef | Klass | Seq | Alt | Repeat | Empty | AnySym
 
 # ---------------------------------------------------------------------------------------------
 # Declarations
