@@ -45,10 +45,16 @@ PARADIGMS = (
     + table("tyttö", "PL", "tytöt tyttöjen tyttöjä tyttöinä tytöiksi tytöissä tytöistä tyttöihin tytöillä tytöiltä tytöille")
     # Karlsson (3rd ed., 2018), gradation pp : p and the plural a : o — from memory
     + table("kauppa", "SG", "kauppa kaupan kauppaa kauppana kaupaksi kaupassa kaupasta kauppaan kaupalla kaupalta kaupalle")
-    + table("kauppa", "PL", "kaupat kauppojen kauppoja kauppoina kaupoiksi kaupoissa kaupoista kauppoihin kaupoilla kaupoilta kaupoille")
+    + table(
+        "kauppa",
+        "PL",
+        "kaupat kauppojen kauppoja kauppoina kaupoiksi kaupoissa kaupoista kauppoihin kaupoilla kaupoilta kaupoille",
+    )
     # Karlsson (3rd ed., 2018), gradation nt : nn — from memory
     + table("ranta", "SG", "ranta rannan rantaa rantana rannaksi rannassa rannasta rantaan rannalla rannalta rannalle")
-    + table("ranta", "PL", "rannat rantojen rantoja rantoina rannoiksi rannoissa rannoista rantoihin rannoilla rannoilta rannoille")
+    + table(
+        "ranta", "PL", "rannat rantojen rantoja rantoina rannoiksi rannoissa rannoista rantoihin rannoilla rannoilta rannoille"
+    )
     # Karlsson (3rd ed., 2018), gradation nk : ng and the plural ä : ∅ — from memory
     + table("kenkä", "SG", "kenkä kengän kenkää kenkänä kengäksi kengässä kengästä kenkään kengällä kengältä kengälle")
     + table("kenkä", "PL", "kengät kenkien kenkiä kenkinä kengiksi kengissä kengistä kenkiin kengillä kengiltä kengille")
@@ -59,8 +65,14 @@ PARADIGMS = (
     + table("lampi", "SG", "lampi lammen lampea lampena lammeksi lammessa lammesta lampeen lammella lammelta lammelle")
     + table("lampi", "PL", "lammet lampien lampia lampina lammiksi lammissa lammista lampiin lammilla lammilta lammille")
     # Karlsson (3rd ed., 2018), nouns in -e with a lengthened stem vowel; illative -seen, -siin — from memory
-    + table("huone", "SG", "huone huoneen huonetta huoneena huoneeksi huoneessa huoneesta huoneeseen huoneella huoneelta huoneelle")
-    + table("huone", "PL", "huoneet huoneiden huoneita huoneina huoneiksi huoneissa huoneista huoneisiin huoneilla huoneilta huoneille")
+    + table(
+        "huone", "SG", "huone huoneen huonetta huoneena huoneeksi huoneessa huoneesta huoneeseen huoneella huoneelta huoneelle"
+    )
+    + table(
+        "huone",
+        "PL",
+        "huoneet huoneiden huoneita huoneina huoneiksi huoneissa huoneista huoneisiin huoneilla huoneilta huoneille",
+    )
     # Karlsson (3rd ed., 2018), one-syllable long vowels; illative -hVn, partitive -tA — from memory
     + table("maa", "SG", "maa maan maata maana maaksi maassa maasta maahan maalla maalta maalle")
     + table("maa", "PL", "maat maiden maita maina maiksi maissa maista maihin mailla mailta maille")
@@ -69,7 +81,9 @@ PARADIGMS = (
     + table("tie", "PL", "tiet teiden teitä teinä teiksi teissä teistä teihin teillä teiltä teille")
     # Karlsson (3rd ed., 2018), i-stems: i becomes e before the plural i — from memory
     + table("tunti", "SG", "tunti tunnin tuntia tuntina tunniksi tunnissa tunnista tuntiin tunnilla tunnilta tunnille")
-    + table("tunti", "PL", "tunnit tuntien tunteja tunteina tunneiksi tunneissa tunneista tunteihin tunneilla tunneilta tunneille")
+    + table(
+        "tunti", "PL", "tunnit tuntien tunteja tunteina tunneiksi tunneissa tunneista tunteihin tunneilla tunneilta tunneille"
+    )
 )
 
 # Single cells of other stem types.
@@ -262,10 +276,20 @@ def test_segmentation_gloss_and_ud(fin: morphfst.Language) -> None:
     assert best.ud_feats() == "Case=Ine|Number=Plur"
     # common practice: UD Finnish case names for the UniMorph labels
     expected = {
-        "NOM": "Case=Nom", "GEN": "Case=Gen", "PRT": "Case=Par", "ESS": "Case=Ess", "TRANS": "Case=Tra",
-        "IN+ESS": "Case=Ine", "IN+ABL": "Case=Ela", "IN+ALL": "Case=Ill",
-        "AT+ESS": "Case=Ade", "AT+ABL": "Case=Abl", "AT+ALL": "Case=All",
-        "SG": "Number=Sing", "PL": "Number=Plur", "N": "NOUN",
+        "NOM": "Case=Nom",
+        "GEN": "Case=Gen",
+        "PRT": "Case=Par",
+        "ESS": "Case=Ess",
+        "TRANS": "Case=Tra",
+        "IN+ESS": "Case=Ine",
+        "IN+ABL": "Case=Ela",
+        "IN+ALL": "Case=Ill",
+        "AT+ESS": "Case=Ade",
+        "AT+ABL": "Case=Abl",
+        "AT+ALL": "Case=All",
+        "SG": "Number=Sing",
+        "PL": "Number=Plur",
+        "N": "NOUN",
     }
     for label, value in expected.items():
         assert fin.ud[label] == value
