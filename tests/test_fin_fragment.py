@@ -2,7 +2,7 @@
 
 Source for the expected forms: Karlsson, F., Finnish: An Essential Grammar (3rd ed., Routledge,
 2018), the chapters on vowel harmony, consonant gradation, the noun cases and their plural, the
-possessive suffixes and the present tense of verbs. Every value below was written from memory of
+possessive suffixes, and the present tense, past tense and imperative of verbs. Every value below was written from memory of
 those tables, not copied from the book; checks that rest on no single source say "common practice".
 The grammar is compiled once per test session (the ``fin`` fixture of conftest.py).
 """
@@ -12,6 +12,9 @@ from __future__ import annotations
 import pytest
 
 import morphfst
+from morphfst import debug
+from morphfst.layout import arrange
+from morphfst.paradigm import make_bound, paradigms
 
 KARLSSON = "Karlsson, Finnish: An Essential Grammar (3rd ed., 2018)"
 
@@ -160,6 +163,48 @@ CELLS = [
     ("lähteä", "V;V.PTCP;ACT;PST", "lähtenyt"),
     ("sanoa", "V;IMP;3;SG", "sanokoon"),
     ("tietää", "V;IMP;3;SG", "tietäköön"),
+    # Karlsson (3rd ed., 2018), the past tense: the stem changes before -i- as a noun stem before the
+    # plural -i- (a drops after o/u in the first syllable, else becomes o; e and i drop, t : s in
+    # tietää), and gradation as in the present — from memory
+    ("ottaa", "V;IND;PST;1;SG", "otin"),
+    ("ottaa", "V;IND;PST;3;SG", "otti"),
+    ("ottaa", "V;IND;PST;3;PL", "ottivat"),
+    ("ostaa", "V;IND;PST;3;SG", "osti"),
+    ("antaa", "V;IND;PST;1;SG", "annoin"),
+    ("antaa", "V;IND;PST;3;SG", "antoi"),
+    ("puhua", "V;IND;PST;1;PL", "puhuimme"),
+    ("sanoa", "V;IND;PST;3;SG", "sanoi"),
+    ("kysyä", "V;IND;PST;3;PL", "kysyivät"),
+    ("nukkua", "V;IND;PST;1;SG", "nukuin"),
+    ("nukkua", "V;IND;PST;3;SG", "nukkui"),
+    ("kertoa", "V;IND;PST;2;SG", "kerroit"),
+    ("lukea", "V;IND;PST;1;SG", "luin"),
+    ("lukea", "V;IND;PST;3;SG", "luki"),
+    ("lähteä", "V;IND;PST;2;PL", "lähditte"),
+    ("oppia", "V;IND;PST;3;SG", "oppi"),
+    ("tietää", "V;IND;PST;1;SG", "tiesin"),
+    ("tietää", "V;IND;PST;3;SG", "tiesi"),
+    # ... the imperative: the second person singular has the weak grade, the others -kAA-, -kOOn,
+    # -kOOt with the strong grade — from memory
+    ("ottaa", "V;IMP;2;SG", "ota"),
+    ("lukea", "V;IMP;2;SG", "lue"),
+    ("antaa", "V;IMP;2;SG", "anna"),
+    ("tietää", "V;IMP;2;SG", "tiedä"),
+    ("puhua", "V;IMP;2;SG", "puhu"),
+    ("ottaa", "V;IMP;1;PL", "ottakaamme"),
+    ("ottaa", "V;IMP;2;PL", "ottakaa"),
+    ("tietää", "V;IMP;2;PL", "tietäkää"),
+    ("ottaa", "V;IMP;3;PL", "ottakoot"),
+    ("kysyä", "V;IMP;3;PL", "kysykööt"),
+    # Karlsson (3rd ed., 2018), possessive suffixes after the illative, the allative and a plural
+    # case — from memory
+    ("talo", "N;SG;IN+ALL;PSS3S", "taloonsa"),
+    ("talo", "N;SG;AT+ALL;PSS3S", "talolleen"),
+    ("talo", "N;PL;IN+ESS;PSS3P", "taloissaan"),
+    ("huone", "N;SG;IN+ALL;PSS3S", "huoneeseensa"),
+    ("kivi", "N;SG;PRT;PSS3S", "kiveään"),
+    ("käsi", "N;SG;PRT;PSS3S", "kättään"),
+    ("kala", "N;SG;PRT;PSS3S", "kalaansa"),  # not *kalaaan
 ]
 
 ALL = PARADIGMS + CELLS
@@ -205,6 +250,17 @@ WRONG = [
     "ottan",  # otan
     "kysynut",  # harmony: kysynyt
     "tietäkoon",  # harmony: tietäköön
+    "ottin",  # weak grade in the closed syllable: otin
+    "oti",  # strong grade in the open syllable: otti
+    "lukin",  # luin
+    "tiedin",  # tiesin
+    "antain",  # annoin
+    "kysyivat",  # harmony: kysyivät
+    "otta",  # the imperative has the weak grade: ota
+    "ottakoo",  # ottakoon, ottakoot
+    "kalaaan",  # kalaansa
+    "öihiin",  # öihin
+    "yöihin",  # öihin
 ]
 
 
@@ -317,3 +373,81 @@ def test_inline_tests_of_the_grammar(fin: morphfst.Language) -> None:
                 assert texts == set(case["expected"]), case
             else:
                 assert set(case["expected"]) <= texts, case
+
+
+def test_every_verb_has_one_form_per_cell(fin: morphfst.Language) -> None:
+    # common practice: a regular verb of the puhua type has one standard form in each of these cells
+    cells = ["V;NFIN", "V;V.PTCP;ACT;PST"]
+    cells += [f"V;IND;{tense};{person};{number}" for tense in ("PRS", "PST") for number in ("SG", "PL") for person in "123"]
+    cells += ["V;IMP;2;SG", "V;IMP;3;SG", "V;IMP;1;PL", "V;IMP;2;PL", "V;IMP;3;PL"]
+    verbs = [e["lemma"] for e in fin.lexicon if e["pos"] == "V"]
+    assert len(verbs) >= 10
+    for lemma in verbs:
+        for cell in cells:
+            forms = [f.form for f in fin.generate(lemma, cell)]
+            assert len(forms) == 1, (lemma, cell, forms)
+
+
+def test_imperative_third_person_number(fin: morphfst.Language) -> None:
+    # Karlsson (3rd ed., 2018), the imperative — from memory: -kOOn is singular, -kOOt plural
+    assert {a.text for a in fin.analyze("puhukoon")} == {"puhua V;IMP;3;SG"}
+    assert {a.text for a in fin.analyze("puhukoot")} == {"puhua V;IMP;3;PL"}
+
+
+def test_conjugation_layout(fin: morphfst.Language) -> None:
+    # common practice of grammar books: persons down (singular 1-2-3, plural 1-2-3), the present and the
+    # past indicative across, the imperative in a table of its own, the non-finite forms listed apart
+    (reading,) = paradigms(fin, "ottaa", make_bound(fin, 0), "V")
+    sections = arrange(reading, fin.meta).sections
+    indicative = sections[0].grids[0]
+    assert indicative.row_dims == ["Number", "Person"]
+    assert indicative.rows == ["1st singular", "2nd singular", "3rd singular", "1st plural", "2nd plural", "3rd plural"]
+    assert indicative.columns == ["present", "past"]
+    assert [row[1].forms[0].form for row in indicative.cells if row[1] is not None] == [
+        "otin",
+        "otit",
+        "otti",
+        "otimme",
+        "otitte",
+        "ottivat",
+    ]
+    imperative = sections[1].grids[0]
+    assert [row[0].forms[0].form for row in imperative.cells if row[0] is not None] == [
+        "ota",
+        "ottakoon",
+        "ottakaamme",
+        "ottakaa",
+        "ottakoot",
+    ]
+    listed = {c.features for s in sections[2:] for g in s.grids for row in g.cells for c in row if c is not None}
+    assert listed == {"V;NFIN", "V;V.PTCP;ACT;PST"}
+
+
+def test_lint_and_coverage_of_the_grammar(fin: morphfst.Language) -> None:
+    # The grammar resolves every archiphoneme on every path (no path is dropped silently), and its
+    # inline tests pass, fire every rule and exercise every affix.
+    report = debug.lint(fin)
+    assert [f.message for f in report.findings] == []
+    tests = debug.run_tests(fin)
+    assert tests.exit_code == 0
+    assert tests.coverage is not None
+    assert tests.coverage.rules_never == [] and tests.coverage.affixes_never == [] and tests.coverage.slots_never == []
+
+
+def test_guessed_nouns(fin: morphfst.Language) -> None:
+    # Unknown words: kahvila 'cafe', pöllö 'owl', radio and paperi are not in the lexicon; their forms
+    # are regular (from memory).
+    assert fin.analyze("kahvilassa") == []
+    best = fin.guess("kahvilassa")[0]
+    assert best.guessed and best.text == "kahvila N;SG;IN+ESS" and best.segmentation == "kahvila-ssa"
+    assert fin.analyze("kahvilassa", guess=True)[0].text == "kahvila N;SG;IN+ESS"
+    assert "kahvila N;PL;IN+ESS" in [g.text for g in fin.guess("kahviloissa")]
+    assert fin.guess("pöllöllä")[0].text == "pöllö N;SG;AT+ESS"
+    assert fin.guess("radioissa")[0].text == "radio N;PL;IN+ESS"
+    assert fin.guess("paperista")[0].text == "paperi N;SG;IN+ABL"
+    # common practice: guessed stems keep vowel harmony, so a back stem with a front ending is no
+    # inessive, and a word without a vowel gets no guess
+    assert all(g.text != "kahvila N;SG;IN+ESS" for g in fin.guess("kahvilassä"))
+    assert fin.guess("kkk") == []
+    # a word of the lexicon is never guessed
+    assert fin.analyze("talossa", guess=True) == fin.analyze("talossa")
