@@ -200,13 +200,26 @@ def memory_child(compiled: str, depth: int) -> None:
     _, peak_py = tracemalloc.get_traced_memory()
     tracemalloc.stop()
     hwm = kib("VmHWM") if can_reset else -1
-    print(json.dumps({"entries": stats.entries, "forms": stats.forms, "rss_growth_kib": hwm - before if can_reset else None,
-                      "python_peak_kib": peak_py // 1024}))
+    print(
+        json.dumps(
+            {
+                "entries": stats.entries,
+                "forms": stats.forms,
+                "rss_growth_kib": hwm - before if can_reset else None,
+                "python_peak_kib": peak_py // 1024,
+            }
+        )
+    )
 
 
 def memory_figures(compiled: Path, depth: int) -> dict[str, object]:
-    out = subprocess.run([sys.executable, __file__, "--memory-child", str(compiled), "--depth", str(depth)],
-                         capture_output=True, text=True, check=True, env=os.environ.copy())
+    out = subprocess.run(
+        [sys.executable, __file__, "--memory-child", str(compiled), "--depth", str(depth)],
+        capture_output=True,
+        text=True,
+        check=True,
+        env=os.environ.copy(),
+    )
     return json.loads(out.stdout.strip().splitlines()[-1])
 
 
@@ -258,7 +271,9 @@ def main() -> None:
         for n in (args.small, args.entries):
             m = memory_figures(compiled[n], args.depth)
             rss = f"{m['rss_growth_kib']:,} KiB" if m["rss_growth_kib"] is not None else "n/a"
-            print(f"  {m['entries']:>6} entries, {m['forms']:>8} forms: resident set growth {rss:>12}, Python peak {m['python_peak_kib']:,} KiB")
+            print(
+                f"  {m['entries']:>6} entries, {m['forms']:>8} forms: resident set growth {rss:>12}, Python peak {m['python_peak_kib']:,} KiB"
+            )
 
         print("\none table (paradigm + layout + text), median seconds")
         base = morphfst.load(grammar)
@@ -274,7 +289,15 @@ def main() -> None:
             e, prefix = model[0], _syllables()[-1]
             stem = prefix + "".join(e["stem"])
             new = {"klass": e["class"], "pos": e["pos"], "stem": stem, "flags": e["flags"]}
-            rows.append((f"new word {prefix + e['lemma']} (--class {e['class']}), compiled on the spot", base, prefix + e["lemma"], 0, new))
+            rows.append(
+                (
+                    f"new word {prefix + e['lemma']} (--class {e['class']}), compiled on the spot",
+                    base,
+                    prefix + e["lemma"],
+                    0,
+                    new,
+                )
+            )
         for label, lg, word, depth, spec in rows:
             if spec is None and not lg.entries(word):
                 print(f"  {label:<60} skipped: not in the lexicon")

@@ -88,7 +88,9 @@ def lexicon_index(lang: Language, pos: Sequence[str] = ()) -> list[int | list[in
     return order
 
 
-def lexicon_groups(lang: Language, pos: Sequence[str] = (), index: list[int | list[int]] | None = None) -> Iterator[list[dict[str, Any]]]:
+def lexicon_groups(
+    lang: Language, pos: Sequence[str] = (), index: list[int | list[int]] | None = None
+) -> Iterator[list[dict[str, Any]]]:
     """Lexicon entries grouped by (lemma, part of speech), in lexicon order of first appearance."""
     entries = lang.meta["lexicon"]
     for item in index if index is not None else lexicon_index(lang, pos):
@@ -96,7 +98,10 @@ def lexicon_groups(lang: Language, pos: Sequence[str] = (), index: list[int | li
 
 
 def iter_cells(
-    lang: Language, bound: Bound, pos: Sequence[str] = (), filler: CellFiller | None = None,
+    lang: Language,
+    bound: Bound,
+    pos: Sequence[str] = (),
+    filler: CellFiller | None = None,
     index: list[int | list[int]] | None = None,
 ) -> Iterator[tuple[list[dict[str, Any]], list[Cell]]]:
     """(entries, cells) for every (lemma, part of speech) of the lexicon, one at a time."""

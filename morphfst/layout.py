@@ -191,8 +191,16 @@ def declared_layouts(meta: dict[str, Any], pos: str) -> list[LayoutSpec]:
     for raw in meta.get("layouts", []):
         if raw["pos"] != pos:
             continue
-        spec = LayoutSpec(raw["pos"], raw["title"], list(raw["rows"]), list(raw["columns"]), list(raw["tables"]),
-                          list(raw["fixed"]), dict(raw["labels"]), "declared")
+        spec = LayoutSpec(
+            raw["pos"],
+            raw["title"],
+            list(raw["rows"]),
+            list(raw["columns"]),
+            list(raw["tables"]),
+            list(raw["fixed"]),
+            dict(raw["labels"]),
+            "declared",
+        )
         check_layout(meta, spec)
         out.append(spec)
     return out
@@ -208,19 +216,35 @@ def check_layout(meta: dict[str, Any], spec: LayoutSpec) -> None:
     for role, names in (("rows", spec.rows), ("columns", spec.columns), ("tables", spec.tables)):
         for name in names:
             if name not in dims:
-                raise UserError(f"{what}: unknown dimension {name!r} in {role}", where, hint="dimensions: " + ", ".join(sorted(dims)))
+                raise UserError(
+                    f"{what}: unknown dimension {name!r} in {role}", where, hint="dimensions: " + ", ".join(sorted(dims))
+                )
             if name in seen:
-                raise UserError(f"{what}: dimension {name} is used in both {seen[name]} and {role}", where, hint="give each dimension one role")
+                raise UserError(
+                    f"{what}: dimension {name} is used in both {seen[name]} and {role}",
+                    where,
+                    hint="give each dimension one role",
+                )
             seen[name] = role
     for label in spec.fixed:
         if label not in index:
-            raise UserError(f"{what}: unknown feature label {label!r} in fixed", where, hint="fixed takes feature labels such as " + ", ".join(list(index)[:4]))
+            raise UserError(
+                f"{what}: unknown feature label {label!r} in fixed",
+                where,
+                hint="fixed takes feature labels such as " + ", ".join(list(index)[:4]),
+            )
         if index[label] in seen:
-            raise UserError(f"{what}: {label} is fixed but its dimension {index[label]} is also in {seen[index[label]]}", where, hint="drop one of them")
+            raise UserError(
+                f"{what}: {label} is fixed but its dimension {index[label]} is also in {seen[index[label]]}",
+                where,
+                hint="drop one of them",
+            )
     for key in spec.labels:
         base = key[: -len(NONE_SUFFIX)] if key.endswith(NONE_SUFFIX) else key
         if key not in index and base not in dims and key not in meta["dimensions"].get("pos", []):
-            raise UserError(f"{what}: label for unknown value {key!r}", where, hint="label a feature value, a dimension, or DIMENSION.none")
+            raise UserError(
+                f"{what}: label for unknown value {key!r}", where, hint="label a feature value, a dimension, or DIMENSION.none"
+            )
 
 
 def default_layout(pos: str, present: dict[str, list[Value]], title: str = "") -> LayoutSpec:
@@ -273,8 +297,18 @@ def arrange(paradigm: Paradigm, meta: dict[str, Any], override: LayoutSpec | Non
         # a derived stem is named by its citation form and its derivation.
         title = "" if len(stem_tags) == 1 else f"{citation or '?'} ({pos}; {stem})"
         if override is not None:
-            specs = [LayoutSpec(pos, override.title or pos, override.rows, override.columns, override.tables, override.fixed,
-                                dict(override.labels), override.origin)]
+            specs = [
+                LayoutSpec(
+                    pos,
+                    override.title or pos,
+                    override.rows,
+                    override.columns,
+                    override.tables,
+                    override.fixed,
+                    dict(override.labels),
+                    override.origin,
+                )
+            ]
         else:
             specs = declared_layouts(meta, pos)
         remaining = values
@@ -374,8 +408,13 @@ def _citation(cells: list[Cell], meta: dict[str, Any]) -> str | None:
 
 
 def _section(
-    title: str, stem: str, pos: str, citation: str | None, spec: LayoutSpec,
-    values: list[tuple[dict[str, str], Cell]], inventory: dict[str, list[str]],
+    title: str,
+    stem: str,
+    pos: str,
+    citation: str | None,
+    spec: LayoutSpec,
+    values: list[tuple[dict[str, str], Cell]],
+    inventory: dict[str, list[str]],
 ) -> Section:
     present = _present(values, inventory)
     named = set(spec.rows) | set(spec.columns) | set(spec.tables)

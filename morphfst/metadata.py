@@ -69,7 +69,13 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
         "dimensions": {d.name: d.values for d in g.dimensions.values()},
         "ud": g.ud,
         "classes": {
-            c.name: {"next": c.next, "pos": c.pos_allowed, "apostrophe": c.apostrophe, "line": c.pos.line}
+            c.name: {
+                "next": c.next,
+                "pos": c.pos_allowed,
+                "apostrophe": c.apostrophe,
+                "line": c.pos.line,
+                "guess": expr_text(c.guess),
+            }
             for c in g.classes.values()
         },
         "slots": {
@@ -134,3 +140,29 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
             for e in g.lexicon
         ],
     }
+
+
+def expr_text(e: m.Expr | None) -> str | None:
+    """A pattern expression written back in the grammar's notation (``None`` for no pattern)."""
+    if e is None:
+        return None
+    if isinstance(e, m.Sym):
+        return e.name
+    if isinstance(e, m.SetRef):
+        return f"@{e.name}"
+    if isinstance(e, m.Klass):
+        return ("[^" if e.negated else "[") + " ".join(expr_text(i) or "" for i in e.items) + "]"
+    if isinstance(e, m.Seq):
+        return " ".join(expr_text(i) or "" for i in e.items)
+    if isinstance(e, m.Alt):
+        return "(" + " | ".join(expr_text(o) or "" for o in e.options) + ")"
+    if isinstance(e, m.Repeat):
+        inner = expr_text(e.item) or ""
+        if isinstance(e.item, (m.Seq, m.Alt)) and not inner.startswith("("):
+            inner = f"({inner})"
+        return inner + ("*" if e.high is None else "?")
+    if isinstance(e, m.Empty):
+        return "∅"
+    if isinstance(e, m.AnySym):
+        return "."
+    return str(e)

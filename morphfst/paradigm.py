@@ -422,7 +422,9 @@ def not_found(lang: Language, lemma: str) -> UserError:
     lemmas = sorted({e["lemma"] for e in lang.meta["lexicon"]})
     near = difflib.get_close_matches(lemma, lemmas, n=3)
     classes = ", ".join(f"{name} ({'/'.join(c['pos']) or 'any'})" for name, c in lang.meta["classes"].items())
-    hint = (f"did you mean {', '.join(near)}? " if near else "") + f"to try it as a new entry, give its class: --class CLASS (classes: {classes})"
+    hint = (
+        f"did you mean {', '.join(near)}? " if near else ""
+    ) + f"to try it as a new entry, give its class: --class CLASS (classes: {classes})"
     return UserError(f"{lemma!r} is not in the {lang.name} lexicon", hint=hint)
 
 
@@ -459,7 +461,14 @@ def paradigms(
         if len(distinct) > 1 and _source_available(lang):
             for e in group:
                 par = trial_paradigm(
-                    lang, e["lemma"], e["class"], pos=e["pos"], stem="".join(e["stem"]), flags=e["flags"], gloss=e["gloss"], bound=bound
+                    lang,
+                    e["lemma"],
+                    e["class"],
+                    pos=e["pos"],
+                    stem="".join(e["stem"]),
+                    flags=e["flags"],
+                    gloss=e["gloss"],
+                    bound=bound,
                 )
                 par.source = "lexicon"
                 par.origins = [_origin(e)]
@@ -537,7 +546,9 @@ def trial_entry(
     allowed = grammar.classes[klass].pos_allowed or grammar.pos_tags
     if pos is None:
         if len(allowed) != 1:
-            raise UserError(f"class {klass} allows several parts of speech", where, hint="choose one with --pos: " + ", ".join(allowed))
+            raise UserError(
+                f"class {klass} allows several parts of speech", where, hint="choose one with --pos: " + ", ".join(allowed)
+            )
         pos = allowed[0]
     if pos not in allowed:
         raise UserError(f"part of speech {pos!r} does not fit class {klass}", where, hint="allowed here: " + ", ".join(allowed))
@@ -583,8 +594,17 @@ def compile_entry(lang: Language, entry_args: dict[str, Any]) -> tuple[Language,
     fsts = compiler.derive(compiler.bounded([entry]))
     meta = build_metadata(grammar, compiler.space)
     meta["lexicon"] = [
-        {"lemma": entry.lemma, "class": entry.klass, "pos": entry.pos_tag, "gloss": entry.gloss, "weight": entry.weight,
-         "stem": entry.stem, "flags": entry.flags, "file": "", "line": 0}
+        {
+            "lemma": entry.lemma,
+            "class": entry.klass,
+            "pos": entry.pos_tag,
+            "gloss": entry.gloss,
+            "weight": entry.weight,
+            "stem": entry.stem,
+            "flags": entry.flags,
+            "file": "",
+            "line": 0,
+        }
     ]
     return Language(fsts, meta, None), entry
 
@@ -602,7 +622,9 @@ def trial_paradigm(
     """The paradigm of a word given with its class (and optionally part of speech, stem and flags),
     whether or not it is in the lexicon: the entry is compiled on its own with the grammar source."""
     bound = bound or Bound()
-    trial, entry = compile_entry(lang, {"lemma": lemma, "klass": klass, "pos": pos, "stem": stem, "flags": list(flags), "gloss": gloss})
+    trial, entry = compile_entry(
+        lang, {"lemma": lemma, "klass": klass, "pos": pos, "stem": stem, "flags": list(flags), "gloss": gloss}
+    )
     notes = []
     in_lexicon = [e for e in lang.entries(entry.lemma) if e["class"] == entry.klass and e["pos"] == entry.pos_tag]
     if not in_lexicon:

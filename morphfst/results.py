@@ -35,6 +35,7 @@ class Analysis:
     morphs: tuple[Morph, ...]
     weight: float
     ud: dict[str, str] = field(default_factory=dict, compare=False, repr=False)
+    guessed: bool = False  # True when the stem was guessed (not in the lexicon); see Language.guess
 
     @property
     def tags(self) -> tuple[str, ...]:
@@ -100,7 +101,7 @@ class Analysis:
             "gloss": self.gloss,
             "weight": round(self.weight, 6),
             "morphs": [asdict(m) | {"features": list(m.features)} for m in self.morphs],
-        }
+        } | ({"guessed": True} if self.guessed else {})
 
 
 @dataclass(frozen=True)

@@ -14,11 +14,12 @@ from typing import Any
 import pynini
 
 from .errors import UserError
-from .fstutil import acc, is_empty, paths
+from .fstutil import Arc, Weight, acc, is_empty, paths
 from .model import Normalization
 from .normalize import make_normalizer
 from .results import Analysis, Form, Morph, Segmentation
 from .symbols import PRIVATE_START, SymbolSpace
+from .walk import FastAnalyzer
 
 MAX_PATHS = 200
 MAX_WORD = 1000  # longer tokens are not words; they get no analysis
@@ -48,11 +49,31 @@ class Language:
         self.plus = self.space.code("+")
         self._kind = self.space.kinds
         self.analyze_cached = lru_cache(maxsize=65536)(self._analyze_tuple)
+        self._fast: FastAnalyzer | None = None
 
     # ---- analysis ---------------------------------------------------------------------------------
-    def analyze(self, word: str) -> list[Analysis]:
-        """All analyses of ``word``, best (lowest weight) first; an empty list when there is none."""
-        return list(self.analyze_cached(word))
+    def analyze(self, word: str, guess: bool = False) -> list[Analysis]:
+        """All analyses of ``word``, best (lowest weight) first; an empty list when there is none.
+
+        With ``guess=True``, a word with no analysis gets the guesser's analyses instead (see :meth:`guess`).
+        """
+        found = list(self.analyze_cached(word))
+        if not found and guess:
+            return self.guess(word)
+        return found
+
+    @property
+    def fast(self) -> FastAnalyzer:
+        """The fast path (arc tables walked in Python; built on first use): same analyses, plus guesses."""
+        if self._fast is None:
+            self._fast = FastAnalyzer(self)
+        return self._fast
+
+    def guess(self, word: str) -> list[Analysis]:
+        """Guessed analyses of ``word``: a stem of the shape a class's ``guess`` pattern allows, a valid
+        affix chain and the same rules; each is marked ``guessed`` and weighs more than any analysis with
+        a lexicon stem. Empty when the grammar declares no guess pattern."""
+        return self.fast.guess(word)
 
     def _analyze_tuple(self, word: str) -> tuple[Analysis, ...]:
         surface = self.normalize(word)
@@ -66,7 +87,7 @@ class Language:
                 key = (analysis.text, analysis.segmentation)
                 if key not in best or weight < best[key].weight:
                     best[key] = analysis
-        return tuple(sorted(best.values(), key=lambda a: (round(a.weight, 5), a.text, a.segmentation)))
+        return tuple(sorted(best.values(), key=_rank))
 
     def acceptable(self, surface: str) -> bool:
         """False for words the transducers cannot read: empty, too long, or using reserved code points."""
@@ -124,8 +145,8 @@ class Language:
         for analysis in self.analyze(word):
             key = tuple(m.form for m in analysis.morphs if m.kind == "stem" or m.underlying)
             groups.setdefault(key, []).append(analysis)
-        out = [Segmentation(self.normalize(word), key, min(a.weight for a in group), tuple(group)) for key, group in groups.items()]
-        return sorted(out, key=lambda s: (round(s.weight, 5), s.text))
+        # analyses arrive ranked, so the first analysis of each split decides the split's rank
+        return [Segmentation(self.normalize(word), key, group[0].weight, tuple(group)) for key, group in groups.items()]
 
     def accepts(self, word: str) -> bool:
         """True when ``word`` has at least one analysis (one composition, no decoding)."""
@@ -197,6 +218,11 @@ class Language:
         return {name: dict(zip(("states", "arcs"), size(f))) for name, f in self.fsts.items()}
 
 
+def _rank(a: Analysis) -> tuple[float, str, str]:
+    """Best first: lower weight, then the analysis text and segmentation (deterministic on ties)."""
+    return (round(a.weight, 5), a.text, a.segmentation)
+
+
 def _permutations(codes: list[str]) -> pynini.Fst:
     """An acceptor for every ordering of a multiset of single-symbol codes (subset construction)."""
     counts: dict[str, int] = {}
@@ -204,7 +230,7 @@ def _permutations(codes: list[str]) -> pynini.Fst:
         counts[c] = counts.get(c, 0) + 1
     symbols = sorted(counts)
     fst = pynini.Fst()
-    one = pynini.Weight.one(fst.weight_type())
+    one = Weight.one(fst.weight_type())
     states: dict[tuple[int, ...], int] = {}
 
     def state(remaining: tuple[int, ...]) -> int:
@@ -223,7 +249,7 @@ def _permutations(codes: list[str]) -> pynini.Fst:
         for i, sym in enumerate(symbols):
             if rem[i]:
                 nxt = rem[:i] + (rem[i] - 1,) + rem[i + 1 :]
-                fst.add_arc(state(rem), pynini.Arc(ord(sym), ord(sym), one, state(nxt)))
+                fst.add_arc(state(rem), Arc(ord(sym), ord(sym), one, state(nxt)))
                 if nxt not in seen:
                     seen.add(nxt)
                     todo.append(nxt)

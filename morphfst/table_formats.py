@@ -105,7 +105,10 @@ class _Block:
 
 def _grid_block(grid: Grid, columns: list[int], row_labels: bool, stacked: bool, title: str) -> _Block:
     label_w = max([display_width(grid.row_header)] + [display_width(r) for r in grid.rows]) if row_labels else 0
-    contents = [[(cell_lines(grid.cells[r][c]) if stacked else [cell_text(grid.cells[r][c])]) for c in columns] for r in range(len(grid.rows))]
+    contents = [
+        [(cell_lines(grid.cells[r][c]) if stacked else [cell_text(grid.cells[r][c])]) for c in columns]
+        for r in range(len(grid.rows))
+    ]
     widths = []
     for j, c in enumerate(columns):
         w = display_width(grid.columns[c])
@@ -265,7 +268,20 @@ def render_markdown(items: Sequence[Arranged]) -> str:
 # ---------------------------------------------------------------------------------------------
 # CSV / TSV
 
-RECORD_FIELDS = ("lemma", "pos", "reading", "section", "table", "row", "column", "features", "rank", "form", "weight", "preferred")
+RECORD_FIELDS = (
+    "lemma",
+    "pos",
+    "reading",
+    "section",
+    "table",
+    "row",
+    "column",
+    "features",
+    "rank",
+    "form",
+    "weight",
+    "preferred",
+)
 
 
 def records(items: Sequence[Arranged]) -> list[dict[str, Any]]:
@@ -279,13 +295,27 @@ def records(items: Sequence[Arranged]) -> list[dict[str, Any]]:
                         if cell is None:
                             continue
                         base = {
-                            "lemma": a.paradigm.lemma, "pos": a.paradigm.pos, "reading": reading, "section": section.stem,
-                            "table": grid.title, "row": label, "column": column, "features": cell.features,
+                            "lemma": a.paradigm.lemma,
+                            "pos": a.paradigm.pos,
+                            "reading": reading,
+                            "section": section.stem,
+                            "table": grid.title,
+                            "row": label,
+                            "column": column,
+                            "features": cell.features,
                         }
                         if not cell.forms:
                             out.append(base | {"rank": 0, "form": "", "weight": "", "preferred": ""})
                         for v in cell.forms:
-                            out.append(base | {"rank": v.rank, "form": v.form, "weight": f"{v.weight:.4f}", "preferred": "yes" if v.preferred else "no"})
+                            out.append(
+                                base
+                                | {
+                                    "rank": v.rank,
+                                    "form": v.form,
+                                    "weight": f"{v.weight:.4f}",
+                                    "preferred": "yes" if v.preferred else "no",
+                                }
+                            )
     return out
 
 

@@ -82,13 +82,7 @@ rules {
 }
 """
 
-TABLE_TOY_LEXICON = (
-    "lemma\tclass\tpos\tgloss\n"
-    "ka\tnoun\tN\thouse\n"
-    "te\tnoun\tN\ttree\n"
-    "sama\tverb\tV\tgo\n"
-    "no\tpart\tPART\tindeed\n"
-)
+TABLE_TOY_LEXICON = "lemma\tclass\tpos\tgloss\nka\tnoun\tN\thouse\nte\tnoun\tN\ttree\nsama\tverb\tV\tgo\nno\tpart\tPART\tindeed\n"
 
 
 def write_table_toy(directory: Path, grammar: str = TABLE_TOY, lexicon: str = TABLE_TOY_LEXICON) -> Path:

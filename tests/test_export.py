@@ -33,8 +33,12 @@ def test_three_columns_and_known_forms(tur: morphfst.Language, tur_export: tuple
     assert all(set(r[2].split(";")) <= labels for r in rows)
     lines = {tuple(r) for r in rows}
     # Göksel & Kerslake (2005), Turkish: A Comprehensive Grammar, ch. 8; forms from memory.
-    for expected in [("ev", "evlerde", "N;PL;LOC"), ("kitap", "kitabı", "N;SG;ACC"), ("oda", "odaya", "N;SG;DAT"),
-                     ("Ankara", "Ankara'da", "PROPN;SG;LOC")]:
+    for expected in [
+        ("ev", "evlerde", "N;PL;LOC"),
+        ("kitap", "kitabı", "N;SG;ACC"),
+        ("oda", "odaya", "N;SG;DAT"),
+        ("Ankara", "Ankara'da", "PROPN;SG;LOC"),
+    ]:
         assert expected in lines, expected
     assert stats.forms == len(rows)  # type: ignore[attr-defined]
 

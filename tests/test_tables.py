@@ -62,24 +62,52 @@ def grid_of(a: Arranged, title: str, section: int = 0):  # type: ignore[no-untyp
 # inflection: plural -lAr, possessive and case suffixes) and ch. 2 (vowel harmony, consonant
 # alternation). The forms below were written from memory of those tables.
 TUR_EV = {
-    "N;SG;NOM": "ev", "N;SG;ACC": "evi", "N;SG;DAT": "eve", "N;SG;LOC": "evde", "N;SG;ABL": "evden", "N;SG;GEN": "evin",
+    "N;SG;NOM": "ev",
+    "N;SG;ACC": "evi",
+    "N;SG;DAT": "eve",
+    "N;SG;LOC": "evde",
+    "N;SG;ABL": "evden",
+    "N;SG;GEN": "evin",
     "N;SG;INS": "evle",
-    "N;PL;NOM": "evler", "N;PL;ACC": "evleri", "N;PL;DAT": "evlere", "N;PL;LOC": "evlerde", "N;PL;ABL": "evlerden",
-    "N;PL;GEN": "evlerin", "N;PL;INS": "evlerle",
-    "N;SG;PSS1S;NOM": "evim", "N;SG;PSS2S;NOM": "evin", "N;SG;PSS3S;NOM": "evi", "N;SG;PSS1P;NOM": "evimiz",
-    "N;SG;PSS2P;NOM": "eviniz", "N;SG;PSS3P;NOM": "evleri",
-    "N;SG;PSS3S;ACC": "evini", "N;SG;PSS3S;DAT": "evine", "N;SG;PSS3S;LOC": "evinde", "N;SG;PSS3S;ABL": "evinden",
+    "N;PL;NOM": "evler",
+    "N;PL;ACC": "evleri",
+    "N;PL;DAT": "evlere",
+    "N;PL;LOC": "evlerde",
+    "N;PL;ABL": "evlerden",
+    "N;PL;GEN": "evlerin",
+    "N;PL;INS": "evlerle",
+    "N;SG;PSS1S;NOM": "evim",
+    "N;SG;PSS2S;NOM": "evin",
+    "N;SG;PSS3S;NOM": "evi",
+    "N;SG;PSS1P;NOM": "evimiz",
+    "N;SG;PSS2P;NOM": "eviniz",
+    "N;SG;PSS3P;NOM": "evleri",
+    "N;SG;PSS3S;ACC": "evini",
+    "N;SG;PSS3S;DAT": "evine",
+    "N;SG;PSS3S;LOC": "evinde",
+    "N;SG;PSS3S;ABL": "evinden",
     "N;PL;PSS1S;LOC": "evlerimde",
 }
 # Same source, from memory: back-vowel stem (oda), final-stop voicing (kitap, ağaç), round harmony (göz).
 TUR_OTHERS = {
-    ("oda", "N;SG;DAT"): "odaya", ("oda", "N;SG;ACC"): "odayı", ("oda", "N;PL;LOC"): "odalarda",
-    ("oda", "N;SG;PSS3S;NOM"): "odası", ("oda", "N;SG;PSS3S;LOC"): "odasında",
-    ("kitap", "N;SG;ACC"): "kitabı", ("kitap", "N;SG;DAT"): "kitaba", ("kitap", "N;SG;LOC"): "kitapta",
-    ("kitap", "N;SG;ABL"): "kitaptan", ("kitap", "N;SG;GEN"): "kitabın", ("kitap", "N;SG;PSS1S;NOM"): "kitabım",
-    ("ağaç", "N;SG;ACC"): "ağacı", ("ağaç", "N;SG;LOC"): "ağaçta",
-    ("göz", "N;SG;ACC"): "gözü", ("göz", "N;SG;PSS3S;ACC"): "gözünü", ("göz", "N;PL;NOM"): "gözler",
-    ("kuzu", "N;SG;PSS1S;GEN"): "kuzumun", ("kuzu", "N;SG;PSS3S;NOM"): "kuzusu",
+    ("oda", "N;SG;DAT"): "odaya",
+    ("oda", "N;SG;ACC"): "odayı",
+    ("oda", "N;PL;LOC"): "odalarda",
+    ("oda", "N;SG;PSS3S;NOM"): "odası",
+    ("oda", "N;SG;PSS3S;LOC"): "odasında",
+    ("kitap", "N;SG;ACC"): "kitabı",
+    ("kitap", "N;SG;DAT"): "kitaba",
+    ("kitap", "N;SG;LOC"): "kitapta",
+    ("kitap", "N;SG;ABL"): "kitaptan",
+    ("kitap", "N;SG;GEN"): "kitabın",
+    ("kitap", "N;SG;PSS1S;NOM"): "kitabım",
+    ("ağaç", "N;SG;ACC"): "ağacı",
+    ("ağaç", "N;SG;LOC"): "ağaçta",
+    ("göz", "N;SG;ACC"): "gözü",
+    ("göz", "N;SG;PSS3S;ACC"): "gözünü",
+    ("göz", "N;PL;NOM"): "gözler",
+    ("kuzu", "N;SG;PSS1S;GEN"): "kuzumun",
+    ("kuzu", "N;SG;PSS3S;NOM"): "kuzusu",
 }
 
 
@@ -118,9 +146,16 @@ def test_turkish_verb_conjugation(tur: morphfst.Language) -> None:
     # Lewis, G. (2000), Turkish Grammar, 2nd ed., Oxford University Press, ch. VIII (the verb):
     # present progressive -Iyor, past -DI, future -(y)AcAk with personal endings; forms from memory.
     expected = {
-        "V;PROG;1;SG": "geliyorum", "V;PROG;3;PL": "geliyorlar", "V;PST;1;SG": "geldim", "V;PST;1;PL": "geldik",
-        "V;PST;2;PL": "geldiniz", "V;FUT;1;SG": "geleceğim", "V;FUT;3;SG": "gelecek",
-        "V;NEG;PROG;1;SG": "gelmiyorum", "V;NEG;PST;3;SG": "gelmedi", "V;NEG;FUT;1;PL": "gelmeyeceğiz",
+        "V;PROG;1;SG": "geliyorum",
+        "V;PROG;3;PL": "geliyorlar",
+        "V;PST;1;SG": "geldim",
+        "V;PST;1;PL": "geldik",
+        "V;PST;2;PL": "geldiniz",
+        "V;FUT;1;SG": "geleceğim",
+        "V;FUT;3;SG": "gelecek",
+        "V;NEG;PROG;1;SG": "gelmiyorum",
+        "V;NEG;PST;3;SG": "gelmedi",
+        "V;NEG;FUT;1;PL": "gelmeyeceğiz",
     }
     gel = only(tur, "gelmek", "V")
     for features, form in expected.items():
@@ -226,11 +261,7 @@ def test_depth_limit_bounds_cyclic_derivation(toy: morphfst.Language, tur: morph
 
 def test_ambiguous_lemma_gives_every_reading(tmp_path: Path) -> None:
     lexicon = (
-        "lemma\tclass\tpos\tgloss\tstem\n"
-        "ka\tnoun\tN\thouse\t\n"
-        "ka\tverb\tV\tmake\t\n"
-        "te\tnoun\tN\ttree\t\n"
-        "te\tnoun\tN\ttea\ttel\n"
+        "lemma\tclass\tpos\tgloss\tstem\nka\tnoun\tN\thouse\t\nka\tverb\tV\tmake\t\nte\tnoun\tN\ttree\t\nte\tnoun\tN\ttea\ttel\n"
     )
     lang = morphfst.load(write_table_toy(tmp_path, lexicon=lexicon))
     ka = paradigms(lang, "ka")

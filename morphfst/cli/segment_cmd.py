@@ -7,7 +7,8 @@ import sys
 from collections import Counter
 
 from ..runtime import Language
-from ..textio import ReadStats, split_text
+from ..textio import ReadStats
+from ..tokenize import Tokenizer, split_line
 from .common import Aligned, add_input, add_language, input_lines, open_language, report_stats, shorten, tsv_field, write_json
 
 EXAMPLES = """examples:
@@ -88,6 +89,7 @@ class Coverage:
 
 def run(args: argparse.Namespace) -> int:
     lang = open_language(args)
+    tokenizer = Tokenizer.for_meta(lang.meta)
     stats = ReadStats()
     coverage = Coverage()
     out = sys.stdout
@@ -113,7 +115,7 @@ def run(args: argparse.Namespace) -> int:
             out.write("line\tword\tsegmentation\tgloss\tlemma\n")
         for number, line in enumerate(input_lines(args, stats), start=1):
             pieces = []
-            for text, is_word in split_text(line):
+            for text, is_word in split_line(line, tokenizer):
                 if not is_word:
                     pieces.append(text)
                     continue

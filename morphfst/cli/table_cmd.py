@@ -49,16 +49,28 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
     )
     p.add_argument("lemmas", nargs="+", metavar="LEMMA", help="the lemma(s) to inflect")
     add_language(p)
-    p.add_argument("-f", "--format", choices=FORMATS, default="text",
-                   help="text (aligned, default), markdown, csv or tsv (one record per form), html (a page), json")
+    p.add_argument(
+        "-f",
+        "--format",
+        choices=FORMATS,
+        default="text",
+        help="text (aligned, default), markdown, csv or tsv (one record per form), html (a page), json",
+    )
     p.add_argument("-o", "--output", metavar="FILE", help="write to FILE (written under a temporary name, then renamed)")
     p.add_argument("--width", type=int, metavar="N", help="terminal columns for the text view (default: the terminal's, or 80)")
     bound = p.add_argument_group("which cells")
-    bound.add_argument("--depth", type=int, default=0, metavar="N",
-                       help="derivational affixes allowed in a word (0: the entry's own inflection; default 0)")
+    bound.add_argument(
+        "--depth",
+        type=int,
+        default=0,
+        metavar="N",
+        help="derivational affixes allowed in a word (0: the entry's own inflection; default 0)",
+    )
     bound.add_argument("--with", dest="require", metavar="LABELS", help="only cells carrying all these labels (comma-separated)")
     bound.add_argument("--without", dest="exclude", metavar="LABELS", help="leave out cells carrying any of these labels")
-    bound.add_argument("--pos", metavar="POS", help="only the reading with this part of speech (or the part of speech of a new word)")
+    bound.add_argument(
+        "--pos", metavar="POS", help="only the reading with this part of speech (or the part of speech of a new word)"
+    )
     new = p.add_argument_group("a word not in the lexicon")
     new.add_argument("--class", dest="klass", metavar="CLASS", help="inflect the word as an entry of this class")
     new.add_argument("--stem", metavar="STEM", help="its underlying stem, if it differs from the lemma (e.g. a verb's stem)")
@@ -75,7 +87,9 @@ def run(args: argparse.Namespace) -> int:
     lang = open_language(args)
     bound = make_bound(lang, args.depth, _labels(args.require), _labels(args.exclude))
     if args.pos and args.pos not in lang.dimensions.get("pos", []):
-        raise UserError(f"unknown part of speech {args.pos!r}", hint="parts of speech: " + ", ".join(lang.dimensions.get("pos", [])))
+        raise UserError(
+            f"unknown part of speech {args.pos!r}", hint="parts of speech: " + ", ".join(lang.dimensions.get("pos", []))
+        )
     if not args.klass and (args.stem or args.flags):
         raise UserError("--stem and --flags describe a new entry", hint="give its class too, e.g. --class noun")
     if args.width is not None and args.width < 20:
@@ -86,8 +100,18 @@ def run(args: argparse.Namespace) -> int:
     found = []
     for lemma in args.lemmas:
         if args.klass:
-            found.append(trial_paradigm(lang, lemma, args.klass, pos=args.pos, stem=args.stem, flags=_labels(args.flags),
-                                        gloss=args.gloss, bound=bound))
+            found.append(
+                trial_paradigm(
+                    lang,
+                    lemma,
+                    args.klass,
+                    pos=args.pos,
+                    stem=args.stem,
+                    flags=_labels(args.flags),
+                    gloss=args.gloss,
+                    bound=bound,
+                )
+            )
         else:
             found.extend(paradigms(lang, lemma, bound, args.pos))
     arranged = [arrange(p, lang.meta, override) for p in found]

@@ -1,0 +1,148 @@
+"""The engine on a Dask cluster (dask.distributed): input files cut into byte-range partitions,
+each partition processed by a Dask worker into its own output file.
+
+The compiled grammar is shipped once to each worker (a worker plugin holding the .mfc bytes). A first
+pass counts the lines of every partition (so every output record carries its line number in the
+input file); the second pass writes the outputs, each under a temporary name renamed when complete.
+Dask is optional: nothing here is imported unless ``--dask`` is used.
+"""
+
+from __future__ import annotations
+
+import logging
+from pathlib import Path
+from typing import Any
+
+from ..errors import UserError
+from ..runtime import Language
+from .coverage import Coverage
+from .local import WorkerFailure
+from .progress import Progress
+from .records import Options
+from .sources import Source, compiled_file, output_path
+
+PARTITION_BYTES = 64 * 1024 * 1024
+INSTALL_HINT = "install the optional extra: pip install 'morphfst[dask]' (or: pip install 'dask[distributed]')"
+
+
+def require_dask() -> None:
+    """Raise a clear :class:`UserError` when dask.distributed is not installed."""
+    try:
+        import distributed  # noqa: F401
+    except ImportError:
+        raise UserError("--dask needs the dask.distributed package, which is not installed", hint=INSTALL_HINT) from None
+
+
+def partitions(sources: list[Source], partition_bytes: int) -> list[tuple[int, int, int, int]]:
+    """(source index, partition number, start, stop) byte ranges covering every source (one at least each)."""
+    out = []
+    for i, s in enumerate(sources):
+        size = s.size or 0
+        starts = list(range(0, size, max(partition_bytes, 1))) or [0]
+        for n, start in enumerate(starts):
+            out.append((i, n, start, min(start + partition_bytes, size)))
+    return out
+
+
+def connect(address: str | None, workers: int) -> tuple[Any, Any]:
+    """A client on the scheduler at ``address``, or on a local cluster of ``workers`` processes started here."""
+    from distributed import Client, LocalCluster
+
+    if address:
+        try:
+            return Client(address, timeout="20s"), None
+        except OSError as exc:
+            raise UserError(
+                f"cannot reach the Dask scheduler at {address}: {exc}", hint="check the address (e.g. tcp://host:8786)"
+            ) from None
+    cluster = LocalCluster(
+        n_workers=max(workers, 1),
+        threads_per_worker=1,
+        processes=True,
+        dashboard_address=None,
+        silence_logs=logging.ERROR,
+    )
+    return Client(cluster), cluster
+
+
+def run_dask(
+    lang: Language,
+    sources: list[Source],
+    out_dir: str | Path,
+    options: Options,
+    address: str | None = None,
+    workers: int = 2,
+    partition_bytes: int = PARTITION_BYTES,
+    progress: Progress | None = None,
+) -> tuple[Coverage, list[dict[str, Any]]]:
+    """Run on Dask; returns the run's coverage and the manifest entries (every output in input order)."""
+    require_dask()
+    if any(s.is_stdin for s in sources):
+        raise UserError("the Dask engine reads files, not standard input", hint="give input files or directories")
+    from distributed import as_completed
+
+    from .dask_worker import GrammarPlugin, count_line_starts, process_partition
+
+    mfc = Path(compiled_file(lang))
+    client, cluster = connect(address, workers)
+    try:
+        client.register_plugin(GrammarPlugin(mfc.read_bytes(), mfc.name, options), name="morphfst-grammar")
+        parts = partitions(sources, partition_bytes)
+        counts = client.gather(
+            client.map(
+                count_line_starts,
+                [sources[i].path for i, _, _, _ in parts],
+                [a for *_, a, _ in parts],
+                [b for *_, b in parts],
+                pure=False,
+            )
+        )
+        specs = []
+        first_line: dict[int, int] = {}
+        for index, ((i, n, start, stop), count) in enumerate(zip(parts, counts)):
+            line = first_line.get(i, 1)
+            first_line[i] = line + count
+            single = sum(1 for p in parts if p[0] == i) == 1
+            target = output_path(out_dir, sources[i], options.suffix, None if single else n)
+            specs.append(
+                {
+                    "index": index,
+                    "path": sources[i].path,
+                    "doc": sources[i].name,
+                    "start": start,
+                    "stop": stop,
+                    "first_line": line,
+                    "output": str(target),
+                }
+            )
+        futures = client.map(process_partition, specs, pure=False)
+        total = Coverage(files=[s.path for s in sources])
+        entries: list[dict[str, Any] | None] = [None] * len(specs)
+        try:
+            for future in as_completed(futures):
+                result = future.result()
+                cov: Coverage = result["coverage"]
+                total.merge(cov)
+                spec = specs[result["index"]]
+                entries[result["index"]] = {
+                    "input": spec["path"],
+                    "output": Path(result["output"]).name,
+                    "bytes": [spec["start"], spec["stop"]],
+                    "first_line": spec["first_line"],
+                    "lines": cov.lines,
+                    "tokens": cov.tokens,
+                }
+                if progress:
+                    progress.update(result["bytes"], cov.tokens)
+        except Exception as exc:
+            for f in futures:
+                f.cancel()
+            raise WorkerFailure(
+                f"a Dask task failed: {type(exc).__name__}: {exc}",
+                hint="outputs of finished partitions are complete files, but the run has no manifest: rerun it",
+            ) from None
+        return total, [e for e in entries if e is not None]
+    finally:
+        client.close()
+        if cluster is not None:
+            cluster.close()

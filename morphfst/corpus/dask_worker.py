@@ -1,0 +1,89 @@
+"""What runs on Dask workers (imported only when the Dask engine is used; needs dask.distributed).
+
+The compiled grammar travels once per worker, inside a worker plugin: its bytes are written to the
+worker's local directory and loaded there when the plugin is registered, and the worker keeps one
+:class:`~morphfst.corpus.records.ChunkProcessor` (so its per-type cache serves every partition the
+worker processes).
+"""
+
+from __future__ import annotations
+
+from pathlib import Path
+from typing import Any
+
+from distributed import get_worker
+from distributed.diagnostics.plugin import WorkerPlugin
+
+from .coverage import Coverage
+from .outputs import AtomicFile
+from .reading import chunks, read_blocks
+from .records import ChunkProcessor, Options
+
+PLUGIN_NAME = "morphfst-grammar"
+
+
+class GrammarPlugin(WorkerPlugin):
+    """Holds the compiled grammar (the bytes of a .mfc file) and, on each worker, the loaded language."""
+
+    name = PLUGIN_NAME
+
+    def __init__(self, data: bytes, filename: str, options: Options) -> None:
+        self.data = data
+        self.filename = filename
+        self.options = options
+        self.processor: ChunkProcessor | None = None
+
+    def setup(self, worker: Any) -> None:
+        from .sources import load_compiled
+
+        directory = Path(getattr(worker, "local_directory", None) or ".")
+        path = directory / f"morphfst-{self.filename}"
+        path.write_bytes(self.data)
+        self.processor = ChunkProcessor(load_compiled(str(path)), self.options)
+
+
+def _processor() -> ChunkProcessor:
+    plugin = get_worker().plugins[PLUGIN_NAME]
+    processor = getattr(plugin, "processor", None)
+    if not isinstance(processor, ChunkProcessor):
+        raise RuntimeError("the morphfst grammar plugin is not set up on this worker")
+    return processor
+
+
+def count_line_starts(path: str, start: int, stop: int, block: int = 1 << 22) -> int:
+    """Lines that start in ``[start, stop)`` of a file (a line starts at 0 and after each newline)."""
+    n = 1 if start == 0 and stop > 0 else 0
+    lo = max(start - 1, 0)
+    hi = stop - 1
+    with open(path, "rb") as handle:
+        handle.seek(lo)
+        remaining = hi - lo
+        while remaining > 0:
+            data = handle.read(min(block, remaining))
+            if not data:
+                break
+            n += data.count(b"\n")
+            remaining -= len(data)
+    return n
+
+
+def process_partition(spec: dict[str, Any]) -> dict[str, Any]:
+    """Process the lines that start in one byte range of a file into one output file (atomic)."""
+    processor = _processor()
+    options = processor.options
+    processor.doc = spec["doc"]
+    coverage = Coverage(files=[spec["path"]])
+    sink = AtomicFile(spec["output"])
+    try:
+        with open(spec["path"], "rb") as handle:
+            blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
+            for chunk in chunks(blocks, spec["first_line"], options.chunk_bytes, options.max_line_bytes):
+                result = processor.process(chunk)
+                sink.write(result.data)
+                coverage.add(result)
+        coverage.add_tally(processor.flush())
+        sink.commit()
+    except BaseException:
+        sink.abort()
+        raise
+    return {"index": spec["index"], "output": spec["output"], "coverage": coverage, "bytes": spec["stop"] - spec["start"]}

@@ -1,0 +1,319 @@
+"""The engine on one machine: the main process reads chunks, worker processes analyze them, results
+are written back in input order.
+
+With one job everything runs in the main process. With N jobs, N worker processes are started
+(``spawn``: a fresh interpreter, so no lock or thread of the main process is copied); chunk i goes
+to worker ``i mod N`` and results are collected in the same round-robin order, so reassembly is
+ordered by construction. At most ``window`` chunks are in flight, so memory stays constant whatever
+the input size. Results come back over one pipe per worker whose write end only the worker holds:
+a worker that dies (killed, out of memory, crashed) closes it, and the main process stops with a
+:class:`WorkerFailure` naming the worker, its exit status and the lines it was working on.
+"""
+
+from __future__ import annotations
+
+import multiprocessing as mp
+import sys
+import traceback
+from collections import deque
+from collections.abc import Callable, Iterator
+from contextlib import ExitStack, contextmanager
+from dataclasses import dataclass
+from pathlib import Path
+from typing import Any
+
+from ..errors import UserError
+from ..runtime import Language
+from .coverage import Coverage
+from .outputs import AtomicFile, StdoutSink
+from .progress import Progress
+from .reading import Chunk, chunks, read_blocks
+from .records import ChunkProcessor, ChunkResult, Options, Tally
+from .sources import Source, compiled_file, load_compiled
+
+POLL_SECONDS = 0.5
+
+
+class WorkerFailure(UserError):
+    """A worker process died or raised an error: the run stops and no output is committed."""
+
+
+@dataclass
+class Job:
+    """What one chunk is and where it came from (for error messages)."""
+
+    source: int
+    chunk: Chunk
+    name: str
+
+    def where(self) -> str:
+        c = self.chunk
+        last = c.first_line + max(c.lines - 1, 0)
+        return f"lines {c.first_line}-{last} of {self.name}"
+
+
+def source_chunks(source: Source, options: Options) -> Iterator[Chunk]:
+    """The chunks of one input (standard input included)."""
+    import sys
+
+    if source.is_stdin:
+        yield from chunks(
+            read_blocks(sys.stdin.buffer, block=options.chunk_bytes), 1, options.chunk_bytes, options.max_line_bytes
+        )
+        return
+    try:
+        handle = Path(source.path).open("rb")
+    except OSError as exc:
+        raise UserError(f"cannot read input file: {exc.strerror or exc}", hint="check the path and its permissions") from None
+    with handle:
+        yield from chunks(read_blocks(handle, block=options.chunk_bytes), 1, options.chunk_bytes, options.max_line_bytes)
+
+
+def _worker_main(path: str, options: Options, processor_class: type[ChunkProcessor], tasks: Any, results: Any) -> None:
+    """A worker process: load the compiled language once, then process chunks until told to stop."""
+    try:
+        processor = processor_class(load_compiled(path), options)
+    except BaseException:
+        results.send(("error", traceback.format_exc()))
+        return
+    while True:
+        item = tasks.get()
+        if item is None:
+            results.send(("final", processor.flush()))
+            break
+        doc, chunk = item
+        processor.doc = doc
+        try:
+            result = processor.process(chunk)
+        except BaseException:
+            results.send(("error", traceback.format_exc()))
+            return
+        results.send(("ok", result))
+    results.close()
+
+
+class Workers:
+    """N worker processes fed round-robin; results read back in the same order."""
+
+    def __init__(self, lang: Language, options: Options, jobs: int, processor_class: type[ChunkProcessor]) -> None:
+        ctx = mp.get_context("spawn")
+        path = compiled_file(lang)
+        self.procs: list[Any] = []
+        self.tasks: list[Any] = []
+        self.results: list[Any] = []
+        with _main_file_hidden_if_missing():
+            self._start(ctx, path, options, jobs, processor_class)
+        self.next_put = 0
+        self.next_get = 0
+        self.closed = False
+
+    def _start(self, ctx: Any, path: str, options: Options, jobs: int, processor_class: type[ChunkProcessor]) -> None:
+        for _ in range(jobs):
+            tasks = ctx.Queue()
+            reader, writer = ctx.Pipe(duplex=False)
+            proc = ctx.Process(target=_worker_main, args=(path, options, processor_class, tasks, writer), daemon=True)
+            proc.start()
+            writer.close()  # only the worker holds the write end: its death closes the pipe
+            self.procs.append(proc)
+            self.tasks.append(tasks)
+            self.results.append(reader)
+
+    def put(self, doc: str, chunk: Chunk) -> None:
+        self.tasks[self.next_put % len(self.procs)].put((doc, chunk))
+        self.next_put += 1
+
+    def get(self, job: Job) -> ChunkResult:
+        index = self.next_get % len(self.procs)
+        self.next_get += 1
+        kind, payload = self._receive(index, job.where())
+        if kind != "ok":
+            raise WorkerFailure(f"worker process {index + 1} sent {kind!r} while processing {job.where()}")
+        return payload  # type: ignore[no-any-return]
+
+    def _receive(self, index: int, doing: str) -> tuple[str, Any]:
+        """The next message of worker ``index``; a dead worker or an error raises :class:`WorkerFailure`."""
+        conn, proc = self.results[index], self.procs[index]
+        hint = "no output was written; a worker killed by signal 9 has often run out of memory (try fewer --jobs)"
+        while True:
+            try:
+                if conn.poll(POLL_SECONDS):
+                    kind, payload = conn.recv()
+                    break
+            except (EOFError, OSError):
+                proc.join(timeout=5)
+                raise WorkerFailure(
+                    f"worker process {index + 1} (pid {proc.pid}) died {_exit_text(proc.exitcode)} while processing {doing}",
+                    hint=hint,
+                ) from None
+            if not proc.is_alive() and not conn.poll(0):
+                proc.join(timeout=5)
+                raise WorkerFailure(
+                    f"worker process {index + 1} (pid {proc.pid}) died {_exit_text(proc.exitcode)} while processing {doing}",
+                    hint=hint,
+                )
+        if kind == "error":
+            last = payload.strip().splitlines()[-1] if payload.strip() else "unknown error"
+            raise WorkerFailure(
+                f"worker process {index + 1} failed while processing {doing}: {last}",
+                hint="no output was written; this is a bug, please report it with the traceback:\n" + payload.rstrip(),
+            )
+        return kind, payload
+
+    def finish(self) -> list[Tally]:
+        """Tell every worker to stop; returns the figures each flushes before it stops."""
+        for tasks in self.tasks:
+            tasks.put(None)
+        tallies = []
+        for index in range(len(self.procs)):
+            kind, payload = self._receive(index, "its last figures")
+            if kind != "final":
+                raise WorkerFailure(f"worker process {index + 1} sent {kind!r} instead of its last figures")
+            tallies.append(payload)
+        return tallies
+
+    def close(self, wait: bool = True) -> None:
+        if self.closed:
+            return
+        self.closed = True
+        for tasks in self.tasks:
+            try:
+                tasks.put(None)
+            except (OSError, ValueError):
+                pass
+        for proc in self.procs:
+            proc.join(timeout=10 if wait else 0.1)
+            if proc.is_alive():
+                proc.terminate()
+                proc.join(timeout=5)
+        for tasks in self.tasks:
+            tasks.cancel_join_thread()
+            tasks.close()
+        for conn in self.results:
+            conn.close()
+
+
+@contextmanager
+def _main_file_hidden_if_missing() -> Iterator[None]:
+    """Start workers even when the main program has no file (``python -`` or an interactive session):
+    a spawned process re-imports the main program from its file, and fails when that is ``<stdin>``."""
+    main = sys.modules.get("__main__")
+    name = getattr(main, "__file__", None)
+    hide = main is not None and name is not None and not Path(name).exists() and getattr(main, "__spec__", None) is None
+    if hide:
+        del main.__file__  # type: ignore[union-attr]
+    try:
+        yield
+    finally:
+        if hide:
+            main.__file__ = name  # type: ignore[union-attr]
+
+
+def _exit_text(code: int | None) -> str:
+    if code is None:
+        return "(exit status unknown)"
+    if code < 0:
+        import signal
+
+        try:
+            name = signal.Signals(-code).name
+        except ValueError:
+            name = f"signal {-code}"
+        return f"(killed by {name})"
+    return f"(exit code {code})"
+
+
+Sink = AtomicFile | StdoutSink
+
+
+def run_local(
+    lang: Language,
+    sources: list[Source],
+    make_sink: Callable[[Source], Sink],
+    options: Options,
+    jobs: int = 1,
+    progress: Progress | None = None,
+    processor_class: type[ChunkProcessor] = ChunkProcessor,
+    on_done: Callable[[Source, Path, Coverage], None] | None = None,
+    processor: ChunkProcessor | None = None,
+    workers: Workers | None = None,
+) -> Coverage:
+    """Process every source into its sink, in order; returns the coverage of the whole run.
+
+    Each sink is committed (renamed into place) when its last chunk is written; if anything fails,
+    every sink not yet committed is aborted (its temporary file removed). A ``processor`` (one job)
+    or running ``workers`` may be passed in to reuse their caches across runs; ``workers`` passed in
+    are left running (their per-type figures are then flushed with :meth:`Workers.finish` only when
+    the caller stops them, so the returned coverage has no per-type figures).
+    """
+    total = Coverage(files=[s.path for s in sources])
+    with ExitStack() as stack:
+        sinks: dict[int, Sink] = {}
+        per_source: dict[int, Coverage] = {}
+
+        def abort_all() -> None:
+            for sink in sinks.values():
+                sink.abort()
+
+        stack.callback(abort_all)
+
+        def open_source(i: int) -> Sink:
+            if i not in sinks:
+                sinks[i] = make_sink(sources[i])
+                per_source[i] = Coverage()
+            return sinks[i]
+
+        def finish(i: int) -> None:
+            path = sinks.pop(i).commit()
+            if on_done:
+                on_done(sources[i], path, per_source.pop(i))
+
+        def write(job: Job, result: ChunkResult) -> None:
+            open_source(job.source).write(result.data)
+            total.add(result)
+            per_source[job.source].add(result)
+            if progress:
+                progress.update(result.bytes_in, result.tokens)
+
+        if jobs <= 1 and workers is None:
+            processor = processor or processor_class(lang, options)
+            for i, source in enumerate(sources):
+                open_source(i)
+                processor.doc = source.name
+                for chunk in source_chunks(source, options):
+                    write(Job(i, chunk, source.path), processor.process(chunk))
+                finish(i)
+            total.add_tally(processor.flush())
+            return total
+
+        owned = workers is None
+        pool = workers or Workers(lang, options, jobs, processor_class)
+        if owned:
+            stack.callback(pool.close, False)
+        window = 3 * len(pool.procs)
+        pending: deque[Job] = deque()
+        reading_done: set[int] = set()
+
+        def collect() -> None:
+            job = pending.popleft()
+            write(job, pool.get(job))
+            if job.source in reading_done and not any(p.source == job.source for p in pending):
+                finish(job.source)
+
+        for i, source in enumerate(sources):
+            open_source(i)
+            for chunk in source_chunks(source, options):
+                while len(pending) >= window:
+                    collect()
+                job = Job(i, chunk, source.path)
+                pool.put(source.name, chunk)
+                pending.append(job)
+            reading_done.add(i)
+            if not any(p.source == i for p in pending):
+                finish(i)
+        while pending:
+            collect()
+        if owned:
+            for tally in pool.finish():
+                total.add_tally(tally)
+            pool.close()
+    return total

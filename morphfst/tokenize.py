@@ -1,0 +1,123 @@
+"""Splitting text into word tokens and separator pieces, so that the pieces rebuild the text exactly.
+
+A **token** is a run of letters and digits (Unicode categories L, N and the combining marks that
+follow a letter), joined into one token across:
+
+- an apostrophe of the language followed by more letters: ``Ankara'da``, ``2023'te``, ``Ankara’da``;
+- a hyphen followed by more letters: ``sarı-kırmızı``, ``e-posta``;
+- a colon after an upper-case letter or a digit, before more letters: ``TRT:nin``, ``10:30``
+  (a colon after a lower-case letter is a separator: ``not:bu`` is three pieces);
+- a period or a comma between digits: ``3.5``, ``1,000``.
+
+Everything else (white space, punctuation, symbols, control characters) is a **separator** piece:
+white-space runs are one piece, a run of one repeated punctuation character (``...``, ``!!``) is one
+piece, any other character is a piece of its own. Joining the texts of all pieces gives the line back.
+
+The apostrophes come from the grammar's ``normalize`` block (``apostrophes ...``); the rest follows
+the Unicode character classes (common practice for word-boundary splitting of Latin-script text).
+"""
+
+from __future__ import annotations
+
+import re
+from collections.abc import Iterable, Sequence
+from dataclasses import dataclass
+from typing import Any
+
+DEFAULT_APOSTROPHES = ("'", "\u2019", "\u02bc")  # ASCII apostrophe, right single quotation mark, modifier letter apostrophe
+HYPHENS = "-\u2010\u2011"  # hyphen-minus, hyphen, non-breaking hyphen
+COMBINING = "\u0300-\u036f\u1ab0-\u1aff\u1dc0-\u1dff\u20d0-\u20ff\ufe20-\ufe2f"
+_UPPER = re.escape("".join(c for c in map(chr, range(0x10000)) if c.isupper()))  # upper-case letters of the BMP
+
+WORD = "word"
+SPACE = "space"
+PUNCT = "punct"
+
+
+@dataclass(frozen=True)
+class Piece:
+    """One piece of a line: its text, its kind (``word``, ``space`` or ``punct``) and its start offset."""
+
+    text: str
+    kind: str
+    start: int
+
+    @property
+    def is_token(self) -> bool:
+        return self.kind == WORD
+
+
+class Tokenizer:
+    """A tokenizer for one language (its apostrophe characters); see the module documentation."""
+
+    def __init__(self, apostrophes: Sequence[str] = DEFAULT_APOSTROPHES) -> None:
+        self.apostrophes = tuple(dict.fromkeys(a for a in apostrophes if a)) or DEFAULT_APOSTROPHES
+        apos = "".join(re.escape(a) for a in self.apostrophes)
+        joiner = (
+            rf"[{COMBINING}]+"  # combining marks after a letter
+            rf"|[{apos}{re.escape(HYPHENS)}](?=[^\W_])"  # apostrophe or hyphen before more letters
+            rf"|(?<=[{_UPPER}\d]):(?=[^\W_])"  # colon after an abbreviation or a number
+            r"|(?<=\d)[.,](?=\d)"  # decimal point or digit group separator
+        )
+        word = rf"[^\W_]+(?:(?:{joiner})[^\W_]*)*"
+        self.word_re = re.compile(word)
+        self.word_or_newline_re = re.compile(rf"{word}|\n")
+        self.sep_re = re.compile(r"\s+|(.)\1*", re.DOTALL)
+
+    @classmethod
+    def for_meta(cls, meta: dict[str, Any]) -> Tokenizer:
+        """The tokenizer of a compiled language (its metadata's normalization apostrophes)."""
+        norm = meta.get("normalization") or {}
+        return cls(tuple(norm.get("apostrophes") or ()) + DEFAULT_APOSTROPHES)
+
+    # ---- tokens only (the fast path used on corpora) ------------------------------------------------
+    def tokens(self, line: str) -> list[str]:
+        """The word tokens of ``line``, in order."""
+        return self.word_re.findall(line)
+
+    def tokens_and_newlines(self, text: str) -> list[str]:
+        """The word tokens of a text of several lines, with a ``"\\n"`` item at each line end."""
+        return self.word_or_newline_re.findall(text)
+
+    def spans(self, line: str) -> list[tuple[int, str]]:
+        """(start offset, text) of every word token of ``line``."""
+        return [(m.start(), m.group()) for m in self.word_re.finditer(line)]
+
+    # ---- all pieces ----------------------------------------------------------------------------------
+    def pieces(self, line: str) -> list[Piece]:
+        """Every piece of ``line`` (tokens and separators); their texts joined give ``line``."""
+        out: list[Piece] = []
+        pos = 0
+        for start, text in self.spans(line):
+            if start > pos:
+                out.extend(self._separators(line, pos, start))
+            out.append(Piece(text, WORD, start))
+            pos = start + len(text)
+        if pos < len(line):
+            out.extend(self._separators(line, pos, len(line)))
+        return out
+
+    def _separators(self, line: str, start: int, end: int) -> Iterable[Piece]:
+        for match in self.sep_re.finditer(line, start, end):
+            text = match.group()
+            yield Piece(text, SPACE if text.isspace() else PUNCT, match.start())
+
+    def split_joiner(self, token: str) -> tuple[str, str] | None:
+        """(before, after) at the first apostrophe or colon of a token (``2023'te`` → ``2023``, ``te``)."""
+        for i, ch in enumerate(token):
+            if (ch in self.apostrophes or ch == ":") and 0 < i < len(token) - 1:
+                return token[:i], token[i + 1 :]
+        return None
+
+    def split_hyphen(self, token: str) -> tuple[str, str] | None:
+        """(everything up to and including the last hyphen, the last part) of a hyphenated token."""
+        for i in range(len(token) - 2, 0, -1):
+            if token[i] in HYPHENS:
+                return token[: i + 1], token[i + 1 :]
+        return None
+
+
+def split_line(line: str, tokenizer: Tokenizer | None = None) -> list[tuple[str, bool]]:
+    """``(text, is_token)`` for every piece of ``line`` (the shape of ``textio.split_text``)."""
+    tok = tokenizer or Tokenizer()
+    return [(p.text, p.is_token) for p in tok.pieces(line)]

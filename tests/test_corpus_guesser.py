@@ -1,0 +1,99 @@
+"""The guesser for unknown words (``guess`` patterns of classes) and the fast analysis path."""
+
+from __future__ import annotations
+
+from pathlib import Path
+
+import pytest
+from toygrammar import TOY_GRAMMAR, write_toy
+
+import morphfst
+from morphfst.compiler import GUESS_OFFSET
+
+GUESS_TOY = TOY_GRAMMAR.replace("noun pos N -> number", "noun pos N -> number guess @cons* @vowel [@vowel @cons]*")
+
+
+@pytest.fixture(scope="module")
+def toy(tmp_path_factory: pytest.TempPathFactory) -> morphfst.Language:
+    assert GUESS_TOY != TOY_GRAMMAR
+    return morphfst.load(write_toy(tmp_path_factory.mktemp("guess"), GUESS_TOY))
+
+
+def test_guessed_analyses_rank_below_lexicon_analyses(toy: morphfst.Language) -> None:
+    known = toy.analyze("kalar")
+    assert [a.text for a in known] == ["ka N;PL;NOM"]
+    assert not known[0].guessed
+    guesses = toy.guess("kalar")
+    assert guesses and all(g.guessed for g in guesses)
+    assert min(g.weight for g in guesses) >= GUESS_OFFSET > max(a.weight for a in known)
+    # The guesser is consulted only when the lexicon gives nothing.
+    assert toy.analyze("kalar", guess=True) == known
+    assert toy.fast.analyze("kalar", guess=True) == known
+
+
+def test_an_unknown_word_gets_a_guessed_stem_and_the_same_rules(toy: morphfst.Language) -> None:
+    assert toy.analyze("tiler") == []
+    guesses = toy.analyze("tiler", guess=True)
+    assert guesses[0].guessed
+    assert guesses[0].text == "ti N;PL;NOM"  # the shortest stem the pattern allows, with a two-letter affix
+    assert guesses[0].segmentation == "ti-ler"
+    # Harmony still applies to guessed stems: a back-vowel plural cannot follow the front stem 'ti'.
+    assert all(g.segmentation != "ti-lar" for g in toy.guess("tilar"))
+    assert [g.text for g in toy.guess("tilar")][0] == "tilar N;SG;NOM"
+    # Words the pattern cannot read (no vowel) get no guess.
+    assert toy.guess("kktt") == []
+
+
+def test_guessed_analyses_serialize_their_mark(toy: morphfst.Language) -> None:
+    g = toy.guess("tiler")[0]
+    assert g.to_dict()["guessed"] is True
+    assert "guessed" not in toy.analyze("kalar")[0].to_dict()
+
+
+def test_a_grammar_without_guess_patterns_guesses_nothing(tmp_path: Path) -> None:
+    lang = morphfst.load(write_toy(tmp_path))
+    assert "guesser" not in lang.fsts
+    assert lang.guess("tiler") == []
+    assert lang.analyze("tiler", guess=True) == []
+
+
+def test_a_pattern_without_letters_is_a_user_error(tmp_path: Path) -> None:
+    bad = TOY_GRAMMAR.replace("noun pos N -> number", "noun pos N -> number guess A A")
+    with pytest.raises(morphfst.UserError, match="guess pattern matches no string of letters"):
+        morphfst.load(write_toy(tmp_path, bad))
+
+
+def test_fast_path_gives_the_runtime_analyses(tur: morphfst.Language) -> None:
+    words = [
+        "evlerde",
+        "odalarda",
+        "kitabı",
+        "gözünü",
+        "evinde",
+        "odaya",
+        "kitapta",
+        "saatler",
+        "topu",
+        "Ankara'da",
+        "kitapçılar",
+        "evlerinden",
+        "kitapçılıklarımızdan",
+        "xyz",
+        "",
+        "ev ev",
+        "çiçeği",
+    ]
+    for word in words:
+        slow = [(a.text, a.segmentation, a.gloss, a.morphs, round(a.weight, 3)) for a in tur.analyze(word)]
+        fast = [(a.text, a.segmentation, a.gloss, a.morphs, round(a.weight, 3)) for a in tur.fast.analyze(word)]
+        assert fast == slow, word
+
+
+def test_turkish_guesses_follow_the_grammar(tur: morphfst.Language) -> None:
+    # 'kalemler' is not in the lexicon: a noun stem and the plural suffix are guessed; the
+    # apostrophe marks the suffix boundary of an unknown proper name.
+    assert "kalemler" not in {e["lemma"] for e in tur.lexicon}
+    best = tur.guess("kalemler")[0]
+    assert (best.lemma, best.segmentation, best.guessed) == ("kalem", "kalem-ler", True)
+    name = tur.guess("Eskişehir'de")[0]
+    assert (name.lemma, name.pos, name.features) == ("eskişehir", "PROPN", ("SG", "LOC"))

@@ -1,0 +1,272 @@
+"""The corpus pipeline: every token and line accounted for, bad input handled, outputs, failures."""
+
+from __future__ import annotations
+
+import json
+import unicodedata
+from pathlib import Path
+
+import pytest
+from corpus_helpers import DyingProcessor, FailingProcessor
+
+import morphfst
+from morphfst.cli import main
+from morphfst.corpus import Options, WorkerFailure, run_corpus
+from morphfst.corpus.reading import chunks, read_blocks
+from morphfst.tokenize import Tokenizer
+
+# Invented demo sentences (our own), mixing lexicon words, names with apostrophes, numbers with
+# suffixes, hyphenated and unknown words, punctuation and CRLF line ends.
+SENTENCES = [
+    "Evlerde kitaplar var. Ankara'da 2023'te TRT:nin haberi!",
+    "",
+    "sarı-kırmızı kalemlerinde, e-posta ve çiçekler...",
+    "Kitapçılar gözünü odaya çevirdi?\r",
+    "   ",
+    "Ahmet’in köyünde 3,5 saat kaldık",
+]
+
+
+def bad_corpus() -> bytes:
+    """Lines with every kind of bad input the pipeline must count and survive."""
+    parts = [s.encode() for s in SENTENCES]
+    parts.append(b"bozuk \xff\xfe bayt \xc3 ve ev")  # invalid UTF-8
+    parts.append(b"NUL\x00bayt\x00 evde")  # NUL bytes
+    parts.append(("ev " * 33_333 + "x").encode())  # a 100,000-character line
+    parts.append(("a" * 100_000).encode())  # a 100,000-character token
+    parts.append(b"")
+    parts.append("son satır kitapta".encode())  # no newline at the end
+    return b"\n".join(parts)
+
+
+def expected_tokens(data: bytes, tok: Tokenizer) -> list[int]:
+    text = unicodedata.normalize("NFC", data.decode("utf-8", errors="replace"))
+    lines = text.split("\n")
+    if text.endswith("\n"):
+        lines.pop()
+    return [len(tok.tokens(line)) for line in lines]
+
+
+@pytest.fixture(scope="module")
+def corpus(tmp_path_factory: pytest.TempPathFactory) -> Path:
+    path = tmp_path_factory.mktemp("corpus") / "bad.txt"
+    path.write_bytes(bad_corpus())
+    return path
+
+
+@pytest.fixture(scope="module")
+def per_line(corpus: Path, tur: morphfst.Language) -> list[int]:
+    return expected_tokens(corpus.read_bytes(), Tokenizer.for_meta(tur.meta))
+
+
+def term_counts(output: Path) -> list[int]:
+    """Tokens per output line of terms/morphs output: terms that do not start with '+'."""
+    lines = output.read_text(encoding="utf-8").split("\n")
+    assert lines[-1] == ""
+    return [sum(1 for t in line.split() if not t.startswith("+")) for line in lines[:-1]]
+
+
+@pytest.mark.parametrize("jobs", [1, 2])
+def test_every_line_and_token_is_kept(
+    tur: morphfst.Language, corpus: Path, per_line: list[int], tmp_path: Path, jobs: int
+) -> None:
+    out = tmp_path / "out.txt"
+    options = Options(mode="terms", term="morphs", chunk_bytes=2048)  # small chunks: many of them
+    run = run_corpus(tur, [str(corpus)], str(out), options, jobs=jobs)
+    assert term_counts(out) == per_line
+    cov = run.coverage
+    assert cov.lines == len(per_line)
+    assert cov.tokens == sum(per_line) == sum(cov.status_tokens)
+    assert cov.replaced_bytes == 3
+    assert cov.nul_bytes == 2
+    assert cov.empty_lines == 2
+    assert cov.long_tokens == 1
+    assert list(tmp_path.iterdir()) == [out]  # no temporary file left
+
+
+def test_one_and_two_processes_give_the_same_bytes(tur: morphfst.Language, corpus: Path, tmp_path: Path) -> None:
+    options = Options(mode="jsonl", chunk_bytes=1024)
+    one = run_corpus(tur, [str(corpus)], str(tmp_path / "one.jsonl"), options, jobs=1)
+    two = run_corpus(tur, [str(corpus)], str(tmp_path / "two.jsonl"), options, jobs=2)
+    assert (tmp_path / "one.jsonl").read_bytes() == (tmp_path / "two.jsonl").read_bytes()
+    assert one.coverage.figures() == two.coverage.figures()
+
+
+def test_jsonl_records(tur: morphfst.Language, corpus: Path, per_line: list[int], tmp_path: Path) -> None:
+    out = tmp_path / "out.jsonl"
+    run_corpus(tur, [str(corpus)], str(out), Options(mode="jsonl"))
+    records = [json.loads(line) for line in out.read_text(encoding="utf-8").splitlines()]
+    assert [r["line"] for r in records] == list(range(1, len(per_line) + 1))
+    assert [len(r["tokens"]) for r in records] == per_line
+    first = {t["token"]: t for t in records[0]["tokens"]}
+    assert first["Evlerde"]["status"] == "analyzed"
+    assert first["Evlerde"]["analyses"][0]["analysis"] == "ev N;PL;LOC"  # the grammar's own inline test
+    assert first["Evlerde"]["start"] == 0
+    assert first["2023'te"]["status"] == "number"
+    assert first["2023'te"]["split"] == ["2023", "te"]
+    statuses = {t["status"] for r in records for t in r["tokens"]}
+    assert statuses <= {"analyzed", "guessed", "unknown", "number"}
+    guessed = [t for r in records for t in r["tokens"] if t["status"] == "guessed"]
+    assert guessed and all(a["guessed"] for t in guessed for a in t["analyses"])
+
+
+def test_term_kinds(tur: morphfst.Language, tmp_path: Path) -> None:
+    src = tmp_path / "in.txt"
+    src.write_text("Evlerde kitapçılar Ankara'da\n", encoding="utf-8")
+    got = {}
+    for term in ("lemma", "stem", "morphs"):
+        out = tmp_path / f"{term}.txt"
+        run_corpus(tur, [str(src)], str(out), Options(mode="terms", term=term))
+        got[term] = out.read_text(encoding="utf-8")
+    assert got["lemma"] == "ev kitap Ankara\n"
+    assert got["stem"] == "ev kitap ankara\n"
+    assert got["morphs"] == "ev +ler +de kitap +çı +lar ankara +da\n"
+
+
+def test_conllu_parsed_by_a_general_reader(tur: morphfst.Language, corpus: Path, per_line: list[int], tmp_path: Path) -> None:
+    # Read back with the 'conllu' package (PyPI), a general-purpose reader of the CoNLL-U format of
+    # Universal Dependencies v2.
+    conllu = pytest.importorskip("conllu")
+    out = tmp_path / "out.conllu"
+    run_corpus(tur, [str(corpus)], str(out), Options(mode="conllu"))
+    sentences = conllu.parse(out.read_text(encoding="utf-8"))
+    words = [t for s in sentences for t in s if t["upos"] not in ("PUNCT", "SYM")]
+    assert len(words) == sum(per_line)
+    first = sentences[0]
+    assert first.metadata["text"] == "Evlerde kitaplar var."
+    evlerde = first[0]
+    assert (evlerde["form"], evlerde["lemma"], evlerde["upos"]) == ("Evlerde", "ev", "NOUN")
+    # FEATS from the grammar's UD mapping of PL and LOC (UD v2 features Number=Plur, Case=Loc).
+    assert evlerde["feats"] == {"Case": "Loc", "Number": "Plur"}
+    assert first[-1]["upos"] == "PUNCT"
+    # SpaceAfter=No (UD v2 MISC) lets the sentence text be rebuilt from its tokens.
+    for sentence in sentences[:3]:
+        rebuilt = "".join(t["form"] + ("" if (t["misc"] or {}).get("SpaceAfter") == "No" else " ") for t in sentence).strip()
+        assert rebuilt == sentence.metadata["text"]
+    ids = [s.metadata["sent_id"] for s in sentences]
+    assert len(ids) == len(set(ids))
+
+
+def test_overlong_lines_are_cut_and_rejoined(tur: morphfst.Language, corpus: Path, per_line: list[int], tmp_path: Path) -> None:
+    out = tmp_path / "out.txt"
+    options = Options(mode="terms", term="lemma", chunk_bytes=4096, max_line_bytes=5000)
+    run = run_corpus(tur, [str(corpus)], str(out), options, jobs=1)
+    assert run.coverage.cut_lines > 0
+    # Lines are cut at white space, so their tokens survive; a 100,000-byte token with no white space
+    # in reach is itself cut into pieces of at most 5,000 bytes (20 pieces), on the same output line.
+    giant = per_line.index(1, 8)
+    expected = per_line[:giant] + [20] + per_line[giant + 1 :]
+    assert term_counts(out) == expected
+
+
+def test_reader_keeps_every_byte_across_ranges() -> None:
+    import io
+
+    data = bad_corpus()
+    cut = [0, 100, 101, 5000, 60_000, len(data)]
+    got = b""
+    for a, b in zip(cut, cut[1:]):
+        handle = io.BytesIO(data)
+        handle.seek(a)
+        got += b"".join(c.data for c in chunks(read_blocks(handle, a, b, block=777), 1, 1000, 3000))
+    assert got == data
+
+
+def test_a_failure_mid_run_leaves_no_output(tur: morphfst.Language, corpus: Path, tmp_path: Path) -> None:
+    out = tmp_path / "out.txt"
+    with pytest.raises(RuntimeError, match="simulated failure"):
+        run_corpus(tur, [str(corpus)], str(out), Options(chunk_bytes=512), jobs=1, processor_class=FailingProcessor)
+    assert list(tmp_path.iterdir()) == []  # neither the final file nor a temporary one
+
+
+def test_a_dead_worker_is_reported(tur: morphfst.Language, corpus: Path, tmp_path: Path) -> None:
+    out = tmp_path / "out.txt"
+    with pytest.raises(WorkerFailure, match="died .*SIGKILL.* while processing lines"):
+        run_corpus(tur, [str(corpus)], str(out), Options(chunk_bytes=512), jobs=2, processor_class=DyingProcessor)
+    assert not out.exists()
+    assert not [p for p in tmp_path.iterdir() if not p.name.startswith(".")]  # nothing that looks whole
+
+
+def test_cli_directory_report_and_manifest(
+    tur: morphfst.Language, corpus: Path, tmp_path: Path, capsys: pytest.CaptureFixture[str]
+) -> None:
+    indir = tmp_path / "in"
+    indir.mkdir()
+    (indir / "a.txt").write_bytes(corpus.read_bytes())
+    (indir / "b.txt").write_text("Evlerde kitaplar var.\n", encoding="utf-8")
+    out = tmp_path / "out"
+    report = tmp_path / "report.json"
+    code = main(["corpus", "-l", tur.path or "tur", str(indir), "-o", str(out), "--report", str(report), "-q"])
+    assert code == 0
+    manifest = json.loads((out / "manifest.json").read_text(encoding="utf-8"))
+    assert [e["output"] for e in manifest["outputs"]] == ["a.txt.terms.txt", "b.txt.terms.txt"]
+    data = json.loads(report.read_text(encoding="utf-8"))
+    assert data["figures"]["tokens"] == manifest["tokens"]
+    assert data["unanalyzed"] and data["unanalyzed"][0]["rank"] == 1
+    tsv = tmp_path / "report.tsv"
+    assert (
+        main(["corpus", "-l", tur.path or "tur", str(indir / "b.txt"), "-o", str(tmp_path / "b.out"), "--report", str(tsv)]) == 0
+    )
+    assert "rank\tword\ttokens\tstatus\tproposal\tsegmentation" in tsv.read_text(encoding="utf-8")
+    assert "coverage report" in capsys.readouterr().err
+
+
+def test_cli_dask_without_the_package(
+    tur: morphfst.Language, corpus: Path, tmp_path: Path, monkeypatch: pytest.MonkeyPatch, capsys: pytest.CaptureFixture[str]
+) -> None:
+    import sys
+
+    monkeypatch.setitem(sys.modules, "distributed", None)  # as if dask.distributed were not installed
+    code = main(["corpus", "-l", tur.path or "tur", str(corpus), "-o", str(tmp_path / "o"), "--dask"])
+    assert code == 2
+    err = capsys.readouterr().err
+    assert "dask.distributed" in err and "pip install" in err
+
+
+def test_dask_local_cluster_keeps_every_token(tur: morphfst.Language, corpus: Path, per_line: list[int], tmp_path: Path) -> None:
+    pytest.importorskip("distributed")
+    local = tmp_path / "local.txt"
+    options = Options(mode="terms", term="morphs")
+    run_corpus(tur, [str(corpus)], str(local), options, jobs=1)
+    out = tmp_path / "dask"
+    run = run_corpus(tur, [str(corpus)], str(out), options, jobs=2, dask=True, partition_bytes=40_000)
+    manifest = json.loads((out / "manifest.json").read_text(encoding="utf-8"))
+    parts = [out / e["output"] for e in manifest["outputs"]]
+    assert len(parts) > 1
+    assert b"".join(p.read_bytes() for p in parts) == local.read_bytes()
+    assert run.coverage.lines == len(per_line)
+    assert run.coverage.tokens == sum(per_line)
+    assert [e["first_line"] for e in manifest["outputs"]][0] == 1
+
+
+def test_progress_bar_shows_bytes_tokens_and_rate_only_on_a_terminal() -> None:
+    import io
+
+    from morphfst.corpus.progress import Progress
+
+    class Terminal(io.StringIO):
+        def isatty(self) -> bool:
+            return True
+
+    shown = Terminal()
+    bar = Progress(10_000_000, stream=shown)
+    bar.update(2_000_000, 300_000)
+    bar.update(2_000_000, 300_000)
+    bar.close()
+    text = shown.getvalue()
+    assert "600,000 tokens" in text and "tokens/s" in text and "B/s" in text and "%" in text
+    piped = io.StringIO()  # not a terminal: nothing is written
+    quiet_bar = Progress(100, stream=piped)
+    quiet_bar.update(10, 10)
+    quiet_bar.close()
+    assert piped.getvalue() == ""
+    assert Progress(100, quiet=True, stream=Terminal()).bar is None
+
+
+def test_a_tiny_cache_gives_the_same_output_and_figures(tur: morphfst.Language, corpus: Path, tmp_path: Path) -> None:
+    big = run_corpus(tur, [str(corpus)], str(tmp_path / "big.jsonl"), Options(mode="jsonl"))
+    tiny_options = Options(mode="jsonl", cache_size=3, cache_chars=500, chunk_bytes=300)  # rotates all the time
+    tiny = run_corpus(tur, [str(corpus)], str(tmp_path / "tiny.jsonl"), tiny_options, jobs=1)
+    assert (tmp_path / "big.jsonl").read_bytes() == (tmp_path / "tiny.jsonl").read_bytes()
+    assert big.coverage.figures() == tiny.coverage.figures()
+    assert big.coverage.types == tiny.coverage.types

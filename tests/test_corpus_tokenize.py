@@ -1,0 +1,88 @@
+"""Tokenization for corpora: the pieces rebuild the text exactly; words, numbers and joiners."""
+
+from __future__ import annotations
+
+from hypothesis import given, settings
+from hypothesis import strategies as st
+
+from morphfst.textio import split_text
+from morphfst.tokenize import Tokenizer, split_line
+
+TOK = Tokenizer(("'", "’"))
+
+# Characters that exercise every branch: letters (with Turkish and Finnish ones), digits, joiners,
+# punctuation, white space of several kinds, control characters and a combining mark.
+ALPHABET = "aeıioöuükltrsşçğäAİIEK019'’-:.,!?… \t\u00a0\x00\x1f\u0307_()\"«»"
+
+
+@settings(max_examples=300, deadline=None)
+@given(st.text(alphabet=ALPHABET, max_size=60))
+def test_pieces_rebuild_the_line(line: str) -> None:
+    pieces = TOK.pieces(line)
+    assert "".join(p.text for p in pieces) == line
+    assert all(p.text for p in pieces)
+    assert [p.text for p in pieces if p.is_token] == TOK.tokens(line)
+    assert [(p.start, p.text) for p in pieces if p.is_token] == TOK.spans(line)
+    offsets = [p.start for p in pieces]
+    assert offsets == sorted(offsets)
+
+
+@settings(max_examples=100, deadline=None)
+@given(st.lists(st.text(alphabet=ALPHABET, max_size=30), min_size=1, max_size=6))
+def test_tokens_and_newlines_agree_with_lines(lines: list[str]) -> None:
+    text = "\n".join(lines) + "\n"
+    items = TOK.tokens_and_newlines(text)
+    per_line: list[list[str]] = [[]]
+    for item in items:
+        if item == "\n":
+            per_line.append([])
+        else:
+            per_line[-1].append(item)
+    assert per_line[:-1] == [TOK.tokens(line) for line in lines]
+
+
+def test_suffixes_after_apostrophes_colons_and_digits_stay_in_the_token() -> None:
+    # Turkish writes case suffixes after an apostrophe on proper names and numbers, and after a
+    # colon on abbreviations (common practice in Turkish orthography).
+    line = "Ankara'da 2023'te TRT:nin haberine göre saat 10:30'da Ankara’dan"
+    assert TOK.tokens(line) == ["Ankara'da", "2023'te", "TRT:nin", "haberine", "göre", "saat", "10:30'da", "Ankara’dan"]
+
+
+def test_hyphens_decimals_and_separators() -> None:
+    line = "sarı-kırmızı e-posta 3.5 ve 1,000... 'alıntı' not:bu -- x_y"
+    pieces = TOK.pieces(line)
+    assert [p.text for p in pieces if p.is_token] == [
+        "sarı-kırmızı",
+        "e-posta",
+        "3.5",
+        "ve",
+        "1,000",
+        "alıntı",
+        "not",
+        "bu",
+        "x",
+        "y",
+    ]
+    assert "..." in [p.text for p in pieces if p.kind == "punct"]  # a run of one punctuation character is one piece
+    assert ":" in [p.text for p in pieces if p.kind == "punct"]  # a colon after a lower-case word separates
+
+
+def test_the_grammar_apostrophes_are_used() -> None:
+    # U+2019 is punctuation: it joins a suffix only when the grammar lists it as an apostrophe.
+    assert Tokenizer(("'",)).tokens("Ankara’da") == ["Ankara", "da"]
+    assert Tokenizer(("’",)).tokens("Ankara’da") == ["Ankara’da"]
+    assert Tokenizer(("’",)).tokens("Ankara'da") == ["Ankara", "da"]
+
+
+def test_split_helpers() -> None:
+    assert TOK.split_joiner("2023'te") == ("2023", "te")
+    assert TOK.split_joiner("trt:nin") == ("trt", "nin")
+    assert TOK.split_joiner("evde") is None
+    assert TOK.split_hyphen("sarı-kırmızı") == ("sarı-", "kırmızı")
+    assert TOK.split_hyphen("ev") is None
+
+
+def test_split_line_has_the_shape_of_the_simple_splitter() -> None:
+    line = "Evlerde, kitaplar var."
+    assert [t for t, w in split_line(line, TOK) if w] == [t for t, w in split_text(line) if w]
+    assert "".join(t for t, _ in split_line(line, TOK)) == line
