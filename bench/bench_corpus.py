@@ -155,7 +155,7 @@ def bench_language(lang_name: str, tokens: int, runs: int, sample: int, workdir:
         fresh_processor = ChunkProcessor(lang, Options())
         fresh_processor.fast = FastAnalyzer(lang)
         contenders: dict[str, Callable[[str], object]] = {
-            "compose": lang._analyze_tuple,
+            "compose": lang._composed,
             "walk": lambda w, fresh=fresh: fresh.bounded.walk(lang.normalize(w)),  # type: ignore[misc]
             "fast": fresh.analyze,
             "pipeline": fresh_processor.analyze_type,

@@ -49,3 +49,23 @@ def test_finnish_generated_forms_analyze_back(fin: morphfst.Language, data: st.D
     feats = f"N;{number};{case}"
     for form in fin.generate(entry["lemma"], feats):
         assert f"{entry['lemma']} {feats}" in [a.text for a in fin.analyze(form.form)]
+
+
+@settings(max_examples=200, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
+@given(word=st.text(alphabet="aeıioöuübcçdgğklmnprsştvyz'", min_size=1, max_size=12))
+def test_arc_walk_agrees_with_composition(tur: morphfst.Language, word: str) -> None:
+    walked = [(a.text, a.segmentation, round(a.weight, 4)) for a in tur.analyze(word)]
+    composed = [(a.text, a.segmentation, round(a.weight, 4)) for a in tur.analyze_composed(word)]
+    assert walked == composed
+
+
+def test_arc_walk_agrees_with_composition_on_generated_words(tur: morphfst.Language, fin: morphfst.Language) -> None:
+    import pynini
+
+    for lang in (tur, fin):
+        surfaces = lang.fsts["analyzer"].copy().project("input")
+        sample = pynini.randgen(surfaces, npath=300, seed=3, max_length=30)
+        for word in set(sample.paths(input_token_type="utf8", output_token_type="utf8").istrings()):
+            walked = [(a.text, a.segmentation, round(a.weight, 4)) for a in lang.analyze(word)]
+            composed = [(a.text, a.segmentation, round(a.weight, 4)) for a in lang.analyze_composed(word)]
+            assert walked == composed, word
