@@ -4,7 +4,6 @@ from __future__ import annotations
 
 import argparse
 import sys
-from collections.abc import Iterator
 
 from ..textio import ReadStats
 from .common import (
@@ -12,11 +11,11 @@ from .common import (
     add_format,
     add_input,
     add_language,
-    input_lines,
     open_language,
     report_stats,
     shorten,
     tsv_field,
+    words_from,
     write_json,
 )
 
@@ -47,14 +46,6 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
     p.set_defaults(func=run)
 
 
-def tokens(args: argparse.Namespace, stats: ReadStats) -> Iterator[str]:
-    if args.words:
-        yield from args.words
-        return
-    for line in input_lines(args, stats):
-        yield from line.split()
-
-
 def run(args: argparse.Namespace) -> int:
     lang = open_language(args)
     stats = ReadStats()
@@ -63,7 +54,7 @@ def run(args: argparse.Namespace) -> int:
     if args.format == "tsv":
         out.write("\t".join(TSV_HEADER) + "\n")
     unknown = 0
-    for word in tokens(args, stats):
+    for word in words_from(args, stats):
         analyses = lang.analyze(word)
         if args.best > 0:
             analyses = analyses[: args.best]

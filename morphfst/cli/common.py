@@ -58,6 +58,22 @@ def input_lines(args: argparse.Namespace, stats: ReadStats) -> Iterator[str]:
             handle.close()
 
 
+def words_from(args: argparse.Namespace, stats: ReadStats) -> Iterator[str]:
+    """The words given as arguments, or else every whitespace-separated token of the input lines."""
+    if args.words:
+        yield from args.words
+        return
+    for line in input_lines(args, stats):
+        yield from line.split()
+
+
+def split_labels(text: str | None) -> list[str]:
+    """Labels given as 'A,B' or 'A;B' on the command line."""
+    if not text:
+        return []
+    return [x.strip() for x in text.replace(";", ",").split(",") if x.strip()]
+
+
 def report_stats(stats: ReadStats, err: TextIO | None = None) -> None:
     err = err or sys.stderr
     if stats.replaced_bytes:

@@ -4,12 +4,11 @@ from __future__ import annotations
 
 import argparse
 import sys
-from collections.abc import Iterator
 
 from ..debug.explain import explain, render_explanation
 from ..debug.session import DebugSession
 from ..textio import ReadStats
-from .common import add_input, add_language, input_lines, report_stats, write_json
+from .common import add_input, add_language, report_stats, words_from, write_json
 
 EXAMPLES = """examples:
   morphfst explain kitabı                    gloss, slot path, underlying form and every rule that fired
@@ -39,18 +38,10 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
     p.set_defaults(func=run)
 
 
-def word_args(args: argparse.Namespace, stats: ReadStats) -> Iterator[str]:
-    if args.words:
-        yield from args.words
-        return
-    for line in input_lines(args, stats):
-        yield from line.split()
-
-
 def run(args: argparse.Namespace) -> int:
     session = DebugSession.open(args.lang)
     stats = ReadStats()
-    for word in word_args(args, stats):
+    for word in words_from(args, stats):
         ex = explain(session, word)
         if args.format == "jsonl":
             data = ex.to_dict()

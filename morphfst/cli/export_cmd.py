@@ -8,7 +8,7 @@ import sys
 
 from ..export import export_unimorph
 from ..paradigm import make_bound
-from .common import add_language, open_language
+from .common import add_language, open_language, split_labels
 
 EXAMPLES = """examples:
   morphfst export -o tur.unimorph.tsv              the whole Turkish lexicon, inflection only (depth 0)
@@ -22,12 +22,6 @@ EXAMPLES = """examples:
 Each line: lemma<TAB>form<TAB>features (UniMorph labels, e.g. ev<TAB>evlerde<TAB>N;PL;LOC); a cell with
 several forms gives one line per form, preferred first; cells with no form give no line.
 """
-
-
-def _labels(text: str | None) -> list[str]:
-    if not text:
-        return []
-    return [x.strip() for x in text.replace(";", ",").split(",") if x.strip()]
 
 
 def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
@@ -53,9 +47,9 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
 
 def run(args: argparse.Namespace) -> int:
     lang = open_language(args)
-    bound = make_bound(lang, args.depth, _labels(args.require), _labels(args.exclude))
+    bound = make_bound(lang, args.depth, split_labels(args.require), split_labels(args.exclude))
     progress = not args.no_progress and (args.output != "-" or sys.stderr.isatty())
-    stats = export_unimorph(lang, args.output, bound, _labels(args.pos), progress=progress)
+    stats = export_unimorph(lang, args.output, bound, split_labels(args.pos), progress=progress)
     if args.stats:
         sys.stderr.write(json.dumps(stats.to_dict(), ensure_ascii=False) + "\n")
     elif args.output != "-":

@@ -11,7 +11,7 @@ from ..export import write_text
 from ..layout import arrange, layout_override
 from ..paradigm import make_bound, paradigms, trial_paradigm
 from ..table_formats import FORMATS, render
-from .common import add_language, open_language
+from .common import add_language, open_language, split_labels
 
 EXAMPLES = """examples:
   morphfst table kitap                          every form of kitap 'book', one table per possessor
@@ -27,12 +27,6 @@ EXAMPLES = """examples:
   morphfst table ev --rows Case --columns Possession --tables Number   another arrangement
   morphfst table ev --width 120                 use 120 terminal columns
 """
-
-
-def _labels(text: str | None) -> list[str]:
-    if not text:
-        return []
-    return [x.strip() for x in text.replace(";", ",").split(",") if x.strip()]
 
 
 def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
@@ -85,7 +79,7 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
 
 def run(args: argparse.Namespace) -> int:
     lang = open_language(args)
-    bound = make_bound(lang, args.depth, _labels(args.require), _labels(args.exclude))
+    bound = make_bound(lang, args.depth, split_labels(args.require), split_labels(args.exclude))
     if args.pos and args.pos not in lang.dimensions.get("pos", []):
         raise UserError(
             f"unknown part of speech {args.pos!r}", hint="parts of speech: " + ", ".join(lang.dimensions.get("pos", []))
@@ -96,7 +90,7 @@ def run(args: argparse.Namespace) -> int:
         raise UserError(f"--width {args.width} is too narrow", hint="give 20 columns or more")
     override = None
     if args.rows or args.columns or args.tables:
-        override = layout_override(lang.meta, "", _labels(args.rows), _labels(args.columns), _labels(args.tables))
+        override = layout_override(lang.meta, "", split_labels(args.rows), split_labels(args.columns), split_labels(args.tables))
     found = []
     for lemma in args.lemmas:
         if args.klass:
@@ -107,7 +101,7 @@ def run(args: argparse.Namespace) -> int:
                     args.klass,
                     pos=args.pos,
                     stem=args.stem,
-                    flags=_labels(args.flags),
+                    flags=split_labels(args.flags),
                     gloss=args.gloss,
                     bound=bound,
                 )
