@@ -384,7 +384,7 @@ class Compiler:
 
 GUESS_SYMBOL = "mark:guess"  # the marker of a guessed analysis (kind "guess"), right after the part of speech
 GUESS_OFFSET = 100.0  # weight added to every guessed analysis
-GUESS_STEM_WEIGHT = 0.1  # weight per letter of a guessed stem
+GUESS_STEM_WEIGHT = 0.3  # weight per letter of a guessed stem: two letters cost more than one more affix
 GUESS_MORPH_WEIGHT = 0.15  # weight per guessed-word affix with a surface form
 
 
