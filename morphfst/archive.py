@@ -15,6 +15,7 @@ from typing import Any
 
 import pynini
 
+from .atomic import publish
 from .errors import Position, UserError
 from .version import FORMAT_VERSION
 
@@ -32,7 +33,7 @@ def save_archive(path: str | Path, fsts: dict[str, pynini.Fst], meta: dict[str, 
             zf.writestr("metadata.json", json.dumps(meta, ensure_ascii=False))
             for name, fst in fsts.items():
                 zf.writestr(f"{name}.fst", fst.write_to_string())
-        os.replace(tmp, path)
+        publish(tmp, path)
     except BaseException:
         Path(tmp).unlink(missing_ok=True)
         raise

@@ -24,6 +24,7 @@ from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any, TextIO
 
+from .atomic import publish
 from .errors import UserError
 from .paradigm import Bound, Cell, CellFiller
 from .runtime import Language
@@ -142,7 +143,7 @@ def atomic_output(path: str | Path) -> Iterator[TextIO]:
     try:
         yield handle
         handle.close()
-        os.replace(tmp, target)
+        publish(tmp, target)
     except BaseException:
         handle.close()
         Path(tmp).unlink(missing_ok=True)

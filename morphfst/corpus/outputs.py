@@ -15,18 +15,10 @@ from collections.abc import Iterator
 from pathlib import Path
 from typing import BinaryIO, TextIO
 
+from ..atomic import publish
 from ..errors import Position, UserError
 
 PART_SUFFIX = ".part"
-
-
-def _file_mode() -> int:
-    mask = os.umask(0)
-    os.umask(mask)
-    return 0o666 & ~mask
-
-
-FILE_MODE = _file_mode()  # what open() would give a new file (mkstemp makes it private)
 
 
 class AtomicFile:
@@ -52,8 +44,7 @@ class AtomicFile:
         self.handle.flush()
         os.fsync(self.handle.fileno())
         self.handle.close()
-        os.chmod(self.tmp, FILE_MODE)
-        os.replace(self.tmp, self.path)
+        publish(self.tmp, self.path)
         self.done = True
         return self.path
 
