@@ -17,6 +17,7 @@ from . import model as m
 from .archive import SUFFIX, load_archive, read_metadata, save_archive
 from .compiler import Compiler
 from .errors import Position, UserError
+from .layout import declared_layouts
 from .lexicon import lexicon_files
 from .loader import load_model
 from .metadata import build_metadata, file_hash, sources_digest
@@ -78,6 +79,7 @@ def compile_grammar(
     compiler = Compiler(grammar)
     built = compiler.build(progress)
     meta = build_metadata(grammar, compiler.space)
+    declared_layouts(meta, None)  # a layout naming an unknown dimension or label is a grammar error
     meta["compile_seconds"] = round(time.perf_counter() - t0, 3)
     meta["timings"] = {k: round(v, 3) for k, v in built.timings.items()}
     if output is None:

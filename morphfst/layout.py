@@ -63,6 +63,7 @@ class LayoutSpec:
     labels: dict[str, str] = field(default_factory=dict)
     origin: str = "derived"  # "declared", "command line" or "derived"
     listing: bool = False  # one row per cell (rows are only the value combinations that occur)
+    line: int = 0  # the grammar line of a declared layout
 
     def label(self, value: str) -> str:
         return self.labels.get(value, value)
@@ -185,11 +186,11 @@ def dimension_index(meta: dict[str, Any]) -> dict[str, str]:
     return {v: d for d, values in meta["dimensions"].items() if d != "pos" for v in values}
 
 
-def declared_layouts(meta: dict[str, Any], pos: str) -> list[LayoutSpec]:
-    """The grammar's layouts for ``pos``, checked against the feature inventory."""
+def declared_layouts(meta: dict[str, Any], pos: str | None) -> list[LayoutSpec]:
+    """The grammar's layouts for ``pos`` (every layout for ``None``), checked against the feature inventory."""
     out = []
     for raw in meta.get("layouts", []):
-        if raw["pos"] != pos:
+        if pos is not None and raw["pos"] != pos:
             continue
         spec = LayoutSpec(
             raw["pos"],
@@ -200,6 +201,7 @@ def declared_layouts(meta: dict[str, Any], pos: str) -> list[LayoutSpec]:
             list(raw["fixed"]),
             dict(raw["labels"]),
             "declared",
+            line=int(raw.get("line", 0)),
         )
         check_layout(meta, spec)
         out.append(spec)
@@ -210,7 +212,13 @@ def check_layout(meta: dict[str, Any], spec: LayoutSpec) -> None:
     """A user error when a layout names an unknown dimension or label, or uses a dimension twice."""
     dims = {d for d in meta["dimensions"] if d != "pos"}
     index = dimension_index(meta)
-    where = Position(meta.get("grammar_path", "")) if spec.origin == "declared" else Position("command line")
+    where = Position(meta.get("grammar_path", ""), spec.line) if spec.origin == "declared" else Position("command line")
+    if spec.origin == "declared" and spec.pos not in meta["dimensions"].get("pos", []):
+        raise UserError(
+            f"layout {spec.title!r}: unknown part of speech {spec.pos!r}",
+            where,
+            hint="parts of speech: " + ", ".join(meta["dimensions"].get("pos", [])),
+        )
     what = f"layout {spec.title!r} ({spec.pos})" if spec.origin == "declared" else "the layout options"
     seen: dict[str, str] = {}
     for role, names in (("rows", spec.rows), ("columns", spec.columns), ("tables", spec.tables)):

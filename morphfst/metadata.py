@@ -122,6 +122,7 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
                 "tables": lay.tables,
                 "fixed": lay.fixed,
                 "labels": lay.labels,
+                "line": lay.pos.line,
             }
             for lay in g.layouts
         ],

@@ -135,3 +135,12 @@ def test_cli_reports_errors_with_exit_code_2_and_no_traceback(
     assert "Traceback" not in err
     assert err.startswith(f"{path}:") and "error:" in err
     assert not (tmp_path / "out.mfc").exists()
+
+
+def test_layout_with_unknown_dimension_is_a_grammar_error(tmp_path: Path, capsys: pytest.CaptureFixture[str]) -> None:
+    grammar = TOY_GRAMMAR + '\nlayout N "declension" {\n  rows Kase\n  columns Number\n}\n'
+    path = write_toy(tmp_path, grammar)
+    code = main(["build", str(path), "-o", str(tmp_path / "out.mfc")])
+    err = capsys.readouterr().err
+    assert code == 2 and "unknown dimension 'Kase'" in err
+    assert f"{path}:{line_of(grammar, 'layout N')}" in err
