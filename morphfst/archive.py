@@ -25,8 +25,13 @@ SUFFIX = ".mfc"
 def save_archive(path: str | Path, fsts: dict[str, pynini.Fst], meta: dict[str, Any]) -> Path:
     """Write the archive atomically; returns its path."""
     path = Path(path)
-    path.parent.mkdir(parents=True, exist_ok=True)
-    fd, tmp = tempfile.mkstemp(prefix=path.name + ".", suffix=".part", dir=path.parent)
+    try:
+        path.parent.mkdir(parents=True, exist_ok=True)
+        fd, tmp = tempfile.mkstemp(prefix=path.name + ".", suffix=".part", dir=path.parent)
+    except OSError as exc:
+        raise UserError(
+            f"cannot write output: {exc.strerror or exc}", Position(str(path)), hint="check the output path"
+        ) from None
     os.close(fd)
     try:
         with zipfile.ZipFile(tmp, "w", compression=zipfile.ZIP_DEFLATED, compresslevel=1) as zf:

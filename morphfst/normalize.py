@@ -30,3 +30,18 @@ def make_normalizer(norm: Normalization) -> Callable[[str], str]:
         return text
 
     return normalize
+
+
+def restore_case(lemma: str, form: str, fold: Callable[[str], str]) -> str:
+    """``form`` with the leading letters that spell the lemma in folded case written as in the lemma
+    (generated forms are in the folded case of the stem: ``ankara'da`` → ``Ankara'da``)."""
+    out = []
+    for i, ch in enumerate(form):
+        if i < len(lemma) and lemma[i] != ch and fold(lemma[i]) == ch:
+            out.append(lemma[i])
+        elif i < len(lemma) and lemma[i] == ch:
+            out.append(ch)
+        else:
+            out.append(form[i:])
+            break
+    return "".join(out)

@@ -26,7 +26,7 @@ from __future__ import annotations
 
 import difflib
 import unicodedata
-from collections.abc import Callable, Iterable, Iterator, Sequence
+from collections.abc import Iterable, Iterator, Sequence
 from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
@@ -36,6 +36,7 @@ import pynini
 from . import model as m
 from .errors import Position, UserError
 from .fstutil import ACYCLIC, TOKEN, acc, is_empty, union
+from .normalize import restore_case
 from .runtime import Language
 
 DEFAULT_MAX_CELLS = 100_000
@@ -378,21 +379,6 @@ class CellFiller:
                 forms = {restore_case(lemma, f, self.lang.normalize): w for f, w in forms.items()}
             cells[i].forms = rank_forms(forms)
         return cells
-
-
-def restore_case(lemma: str, form: str, fold: Callable[[str], str]) -> str:
-    """``form`` with the leading letters that spell the lemma in folded case written as in the lemma
-    (generated forms are in the folded case of the stem: ``ankara'da`` → ``Ankara'da``)."""
-    out = []
-    for i, ch in enumerate(form):
-        if i < len(lemma) and lemma[i] != ch and fold(lemma[i]) == ch:
-            out.append(lemma[i])
-        elif i < len(lemma) and lemma[i] == ch:
-            out.append(ch)
-        else:
-            out.append(form[i:])
-            break
-    return "".join(out)
 
 
 def rank_forms(forms: dict[str, float]) -> list[Variant]:

@@ -16,7 +16,7 @@ import pynini
 from .errors import UserError
 from .fstutil import Arc, Weight, acc, is_empty, paths
 from .model import Normalization
-from .normalize import make_normalizer
+from .normalize import make_normalizer, restore_case
 from .results import Analysis, Form, Morph, Segmentation
 from .symbols import PRIVATE_START, SymbolSpace
 from .walk import FastAnalyzer
@@ -198,6 +198,9 @@ class Language:
         forms = self._generate_from(acc(lemma + "".join(codes)), analysis)
         if not forms and 1 < len(codes) <= 8:
             forms = self._generate_from(acc(lemma) + _permutations(codes), analysis)
+        if forms and self.normalize(lemma) != lemma:
+            # surface stems are in folded case: write the lemma's letters as the lemma does (Ankara'da)
+            forms = [Form(restore_case(lemma, f.form, self.normalize), f.weight, f.analysis) for f in forms]
         return forms
 
     def _generate_from(self, query: pynini.Fst, analysis: str) -> list[Form]:

@@ -90,6 +90,11 @@ def test_empty_input_and_enormous_token(capsys: pytest.CaptureFixture[str], tmp_
     assert code == 0 and out.count("\n") == 1
 
 
+def test_negative_best_is_a_user_error(capsys: pytest.CaptureFixture[str]) -> None:
+    code, out, err = run(capsys, "analyze", "--best", "-1", "evlerde")
+    assert code == 2 and out == "" and "--best" in err
+
+
 def test_missing_input_file(capsys: pytest.CaptureFixture[str], tur: morphfst.Language) -> None:
     code, _, err = run(capsys, "analyze", "-i", "/nonexistent/words.txt")
     assert code == 2 and "cannot read input file" in err
@@ -137,3 +142,24 @@ def test_output_files_get_ordinary_permissions(tmp_path: Path, tur: morphfst.Lan
 
     out = morphfst.compile_grammar(Path(tur.meta["grammar_path"]), tmp_path / "tur.mfc")
     assert stat.S_IMODE(os.stat(out).st_mode) == default_file_mode()
+
+
+@pytest.mark.parametrize(
+    "command",
+    [
+        ["graph", "-o", "{d}"],
+        ["build", "tur", "-o", "{d}"],
+        ["corpus", "{words}", "-q", "-o", "{out}", "--report", "{d}"],
+    ],
+)
+def test_output_to_a_directory_is_a_user_error(
+    capsys: pytest.CaptureFixture[str], tmp_path: Path, tur: morphfst.Language, command: list[str]
+) -> None:
+    d = tmp_path / "taken"
+    d.mkdir()
+    words = tmp_path / "words.txt"
+    words.write_text("evler\n", encoding="utf-8")
+    paths = {"d": str(d), "words": str(words), "out": str(tmp_path / "out.txt")}
+    code, _, err = run(capsys, *[part.format(**paths) for part in command])
+    assert code == 2 and "is a directory" in err and "Traceback" not in err
+    assert list(d.iterdir()) == [] and not [p for p in tmp_path.iterdir() if p.name.endswith(".part")]

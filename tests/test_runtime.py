@@ -36,6 +36,13 @@ def test_generate_accepts_labels_in_any_order(tur: morphfst.Language) -> None:
     assert [f.form for f in tur.generate_text("ev N;PL;LOC")] == ["evlerde"]
 
 
+def test_generated_forms_keep_the_case_of_the_lemma(tur: morphfst.Language) -> None:
+    # the same forms as the inflection table (proper names keep their capitals: common practice)
+    assert [f.form for f in tur.generate("İzmir", "PROPN;SG;LOC")] == ["İzmir'de"]
+    assert [f.form for f in tur.generate("Ahmet", "PROPN;PL;DAT")] == ["Ahmet'lere"]
+    assert [f.form for f in tur.generate("ev", "N;PL;LOC")] == ["evlerde"]
+
+
 def test_unknown_label_is_a_user_error(tur: morphfst.Language) -> None:
     with pytest.raises(UserError) as info:
         tur.generate("ev", "N;PLURAL")

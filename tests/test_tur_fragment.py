@@ -51,10 +51,10 @@ PARADIGM = [
     ("kalp", "N;SG;ACC", "kalbi"),
     ("top", "N;SG;ACC", "topu"),  # monosyllable that keeps its voiceless stop
     ("at", "N;SG;ACC", "atı"),
-    ("Ankara", "PROPN;SG;LOC", "ankara'da"),  # proper names take an apostrophe before suffixes
-    ("Ahmet", "PROPN;SG;DAT", "ahmet'e"),
-    ("Ahmet", "PROPN;SG;LOC", "ahmet'te"),
-    ("Ankara", "PROPN;SG;NOM", "ankara"),
+    ("Ankara", "PROPN;SG;LOC", "Ankara'da"),  # proper names keep their capital and take an apostrophe before suffixes
+    ("Ahmet", "PROPN;SG;DAT", "Ahmet'e"),
+    ("Ahmet", "PROPN;SG;LOC", "Ahmet'te"),
+    ("Ankara", "PROPN;SG;NOM", "Ankara"),
     ("kitap", "N;AGT;N;SG;NOM", "kitapçı"),  # -CI: C -> ç after a voiceless consonant
     ("göz", "N;AGT;N;SG;NOM", "gözcü"),
     ("tuz", "N;PROPR;ADJ", "tuzlu"),

@@ -5,6 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
+from ..errors import UserError
 from ..textio import ReadStats
 from .common import (
     Aligned,
@@ -47,6 +48,8 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
 
 
 def run(args: argparse.Namespace) -> int:
+    if args.best < 0:
+        raise UserError(f"--best must be 0 or more, not {args.best}", hint="--best 1 keeps the best analysis; 0 keeps all")
     lang = open_language(args)
     stats = ReadStats()
     out = sys.stdout
