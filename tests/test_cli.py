@@ -163,3 +163,18 @@ def test_output_to_a_directory_is_a_user_error(
     code, _, err = run(capsys, *[part.format(**paths) for part in command])
     assert code == 2 and "is a directory" in err and "Traceback" not in err
     assert list(d.iterdir()) == [] and not [p for p in tmp_path.iterdir() if p.name.endswith(".part")]
+
+
+def test_unknown_option_of_a_subcommand_points_at_its_help(capsys: pytest.CaptureFixture[str]) -> None:
+    with pytest.raises(SystemExit) as info:
+        main(["info", "--no-such-option"])
+    err = capsys.readouterr().err
+    assert info.value.code == 2
+    assert "usage: morphfst info" in err and "morphfst info --help" in err
+
+
+def test_debugging_tools_refuse_empty_and_overlong_words(capsys: pytest.CaptureFixture[str], tur: morphfst.Language) -> None:
+    code, _, err = run(capsys, "explain", "")
+    assert code == 2 and "empty word" in err
+    code, _, err = run(capsys, "diagnose", "a" * 3000)
+    assert code == 2 and "not a word" in err and "Traceback" not in err

@@ -48,12 +48,17 @@ def build_parser() -> argparse.ArgumentParser:
     sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
     for name in command_modules():
         importlib.import_module(name).register(sub)
+    parser.set_defaults(_subparsers=sub)
     return parser
 
 
 def main(argv: Sequence[str] | None = None) -> int:
     parser = build_parser()
-    args = parser.parse_args(argv)
+    args, extra = parser.parse_known_args(argv)
+    if extra:
+        # report an unknown option with the usage and help hint of the subcommand it was given to
+        owner = args._subparsers.choices.get(args.command, parser) if args.command else parser
+        owner.error("unrecognized arguments: " + " ".join(extra))
     if not getattr(args, "func", None):
         parser.print_help()
         return EXIT_USER_ERROR

@@ -67,6 +67,21 @@ def words_from(args: argparse.Namespace, stats: ReadStats) -> Iterator[str]:
         yield from line.split()
 
 
+def checked_word(word: str) -> str:
+    """A word for the debugging tools: not empty and not longer than the analyzers read."""
+    from ..errors import UserError
+    from ..runtime import MAX_WORD
+
+    if not word.strip():
+        raise UserError("empty word", hint="give the word to look at, e.g. morphfst explain evlerde")
+    if len(word) > MAX_WORD:
+        raise UserError(
+            f"a token of {len(word):,} characters is not a word",
+            hint=f"tokens longer than {MAX_WORD:,} characters get no analysis; give a single word",
+        )
+    return word
+
+
 def split_labels(text: str | None) -> list[str]:
     """Labels given as 'A,B' or 'A;B' on the command line."""
     if not text:

@@ -8,7 +8,7 @@ import sys
 from ..debug.diagnose import diagnose, diagnose_expected, render_diagnosis
 from ..debug.session import DebugSession
 from ..textio import ReadStats
-from .common import add_input, add_language, report_stats, words_from, write_json
+from .common import add_input, add_language, checked_word, report_stats, words_from, write_json
 
 EXAMPLES = """examples:
   morphfst diagnose kitapı                 sound change: the rule behind the difference from kitabı
@@ -58,7 +58,7 @@ def run(args: argparse.Namespace) -> int:
     session = DebugSession.open(args.lang)
     stats = ReadStats()
     rejected = 0
-    for word in words_from(args, stats):
+    for word in map(checked_word, words_from(args, stats)):
         if args.expect:
             d = diagnose_expected(session, word, args.expect)
         else:

@@ -8,7 +8,7 @@ import sys
 from ..debug.explain import explain, render_explanation
 from ..debug.session import DebugSession
 from ..textio import ReadStats
-from .common import add_input, add_language, report_stats, words_from, write_json
+from .common import add_input, add_language, checked_word, report_stats, words_from, write_json
 
 EXAMPLES = """examples:
   morphfst explain kitabı                    gloss, slot path, underlying form and every rule that fired
@@ -41,7 +41,7 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
 def run(args: argparse.Namespace) -> int:
     session = DebugSession.open(args.lang)
     stats = ReadStats()
-    for word in words_from(args, stats):
+    for word in map(checked_word, words_from(args, stats)):
         ex = explain(session, word)
         if args.format == "jsonl":
             data = ex.to_dict()

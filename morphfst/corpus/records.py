@@ -443,9 +443,9 @@ class ChunkProcessor:
 
 
 def _sentence(sent_id: str, ps: list[Any], rows: list[tuple[str, str, str]]) -> str:
-    """One CoNLL-U sentence: its id, its text (control characters shown as U+FFFD) and its rows."""
+    """One CoNLL-U sentence: its id, its text (other whitespace as a space, control characters as U+FFFD) and its rows."""
     text = "".join(p.text for p in ps).strip()
-    text = "".join(ch if ch.isprintable() else "\ufffd" for ch in text)
+    text = "".join(ch if ch.isprintable() else " " if ch.isspace() else "\ufffd" for ch in text)
     body = [f"# sent_id = {sent_id}", f"# text = {text}"]
     for n, (form, cols, misc) in enumerate(rows, start=1):
         body.append(f"{n}\t{form}\t{cols}\t_\t_\t_\t{misc or '_'}")
