@@ -270,3 +270,15 @@ def test_a_tiny_cache_gives_the_same_output_and_figures(tur: morphfst.Language, 
     assert (tmp_path / "big.jsonl").read_bytes() == (tmp_path / "tiny.jsonl").read_bytes()
     assert big.coverage.figures() == tiny.coverage.figures()
     assert big.coverage.types == tiny.coverage.types
+
+
+def test_hyphenated_word_keeps_its_first_part_in_the_gloss(tmp_path: Path) -> None:
+    # the segmentation and the gloss of a word analyzed by its last part must stay aligned morph by morph
+    src = tmp_path / "in.txt"
+    src.write_text("e-posta\n", encoding="utf-8")
+    out = tmp_path / "out.conllu"
+    assert main(["corpus", str(src), "-o", str(out), "-m", "conllu", "-q"]) == 0
+    misc = next(line for line in out.read_text(encoding="utf-8").splitlines() if line.startswith("1\t")).split("\t")[9]
+    fields = dict(item.split("=", 1) for item in misc.split("|"))
+    assert fields["MorphGloss"].startswith("e-")
+    assert fields["MorphSeg"].count("-") == fields["MorphGloss"].count("-")

@@ -199,7 +199,10 @@ class TypeResult:
             best = self.analyses[0]
             lemma = _clean_term(self.prefix + best.lemma)
             cols = f"{lemma}\t{best.upos()}\t{best.final_pos}\t{best.ud_feats()}"
-            items = [f"MorphSeg={_misc_value(self.prefix + best.segmentation)}", f"MorphGloss={_misc_value(best.gloss)}"]
+            items = [
+                f"MorphSeg={_misc_value(self.prefix + best.segmentation)}",
+                f"MorphGloss={_misc_value(self.prefix + best.gloss)}",
+            ]
             if self.status == GUESSED:
                 items.append("MorphGuessed=Yes")
             if len(self.analyses) > 1:
