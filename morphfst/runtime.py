@@ -7,6 +7,7 @@ with glosses and features. Ties are broken by the analysis text, so the order is
 
 from __future__ import annotations
 
+import re
 from collections.abc import Sequence
 from functools import lru_cache
 from typing import Any
@@ -21,6 +22,7 @@ from .results import Analysis, Form, Morph, Segmentation
 from .symbols import PRIVATE_START, SymbolSpace
 from .walk import FastAnalyzer
 
+_UNREADABLE = re.compile(f"[\\x00{chr(PRIVATE_START)}-\\U0010ffff]")  # NUL cuts pynini strings; the rest is ours
 MAX_PATHS = 200
 MAX_WORD = 1000  # longer tokens are not words; they get no analysis
 
@@ -102,7 +104,7 @@ class Language:
 
     def acceptable(self, surface: str) -> bool:
         """False for words the transducers cannot read: empty, too long, or using reserved code points."""
-        return 0 < len(surface) <= MAX_WORD and "\x00" not in surface and all(ord(c) < PRIVATE_START for c in surface)
+        return 0 < len(surface) <= MAX_WORD and _UNREADABLE.search(surface) is None
 
     def _bounded(self, surface: str) -> list[tuple[str, float]]:
         lattice = pynini.compose(acc(surface), self.fsts["segmenter"])
