@@ -14,7 +14,7 @@ from collections.abc import Callable
 from pathlib import Path
 
 from . import model as m
-from .archive import SUFFIX, load_archive, read_metadata, save_archive
+from .archive import SUFFIX, load_archive, save_archive
 from .compiler import Compiler
 from .errors import Position, UserError
 from .layout import declared_layouts
@@ -60,10 +60,10 @@ def find_grammar(name_or_path: str | Path) -> Path:
     )
 
 
-def source_files(grammar_path: Path) -> list[str]:
-    """The grammar file and its lexicon files (for the source hash), without compiling."""
+def source_files(grammar_path: Path) -> tuple[str, list[str]]:
+    """The grammar's name, and the grammar file and its lexicon files (for the source hash), without compiling."""
     grammar = parse_grammar_file(grammar_path)
-    return [str(grammar_path)] + [str(p) for p in lexicon_files(grammar)]
+    return grammar.name, [str(grammar_path)] + [str(p) for p in lexicon_files(grammar)]
 
 
 def compile_grammar(
@@ -103,17 +103,16 @@ def load(name_or_path: str | Path, recompile: bool = False) -> Language:
     """Load a language by shipped name, grammar file or compiled file (compiling when needed)."""
     path = find_grammar(name_or_path)
     if path.suffix == SUFFIX:
-        meta = read_metadata(path)
-        fresh = _fresh(meta)
-        if recompile or fresh is False:
-            compile_grammar(Path(meta["grammar_path"]), path)
         fsts, meta = load_archive(path)
+        if recompile or _fresh(meta) is False:
+            compile_grammar(Path(meta["grammar_path"]), path)
+            fsts, meta = load_archive(path)
         return Language(fsts, meta, str(path))
     try:
-        digest = sources_digest(source_files(path))
+        name, files = source_files(path)
+        digest = sources_digest(files)
     except OSError as exc:
         raise UserError(f"cannot read a source file: {exc}", Position(str(path))) from None
-    name = parse_grammar_file(path).name
     cached = cache_dir() / f"{name}-{digest[:16]}{SUFFIX}"
     if recompile or not cached.exists():
         compile_grammar(path, cached)

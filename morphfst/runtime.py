@@ -18,7 +18,7 @@ from .errors import UserError
 from .fstutil import Arc, Weight, acc, is_empty, paths
 from .model import Normalization
 from .normalize import make_normalizer, restore_case
-from .results import Analysis, Form, Morph, Segmentation
+from .results import Analysis, Form, Segmentation
 from .symbols import PRIVATE_START, SymbolSpace
 from .walk import FastAnalyzer
 
@@ -49,7 +49,6 @@ class Language:
         for entry in meta["lexicon"]:
             self.glosses.setdefault((entry["lemma"], entry["pos"]), entry["gloss"])
         self.plus = self.space.code("+")
-        self._kind = self.space.kinds
         self.analyze_cached = lru_cache(maxsize=65536)(self._analyze_tuple)
         self._fast: FastAnalyzer | None = None
 
@@ -92,15 +91,12 @@ class Language:
         surface = self.normalize(word)
         if not self.acceptable(surface):
             return ()
-        best: dict[tuple[str, str], Analysis] = {}
+        found: list[tuple[str, str, float]] = []
         for bounded, _ in self._bounded(surface):
             lattice = pynini.compose(acc(bounded), self.fsts["bounded"])
-            for _, internal, weight in paths(lattice, MAX_PATHS):
-                analysis = self._decode(surface, internal, bounded, weight)
-                key = (analysis.text, analysis.segmentation)
-                if key not in best or weight < best[key].weight:
-                    best[key] = analysis
-        return tuple(sorted(best.values(), key=_rank))
+            found.extend((bounded, internal, weight) for _, internal, weight in paths(lattice, MAX_PATHS))
+        # the same decoding, deduplication and ranking as the arc walk: only the path search differs
+        return tuple(self.fast.decode_all(surface, found))
 
     def acceptable(self, surface: str) -> bool:
         """False for words the transducers cannot read: empty, too long, or using reserved code points."""
@@ -114,43 +110,6 @@ class Language:
         for _, bounded, weight in paths(lattice, MAX_PATHS):
             found[bounded] = min(weight, found.get(bounded, weight))
         return sorted(found.items(), key=lambda kv: (round(kv[1], 5), kv[0]))
-
-    def _decode(self, surface: str, internal: str, bounded: str, weight: float) -> Analysis:
-        kinds = self._kind
-        name = self.space.name
-        i = 0
-        while i < len(internal) and kinds.get(internal[i]) != "pos":
-            i += 1
-        lemma = internal[:i]
-        pos = name(internal[i]).split(":", 1)[1] if i < len(internal) else "?"
-        features: list[str] = []
-        groups: list[tuple[int, list[str]]] = []
-        for ch in internal[i + 1 :]:
-            kind = kinds.get(ch)
-            label = name(ch).split(":", 1)[1]
-            if kind == "affix":
-                groups.append((int(label), []))
-            else:
-                features.append(label)
-                if groups:
-                    groups[-1][1].append(label)
-        parts = bounded.split(self.plus)
-        nonzero = [a for a, _ in groups if self.affixes[a]["form"]]
-        aligned = len(parts) == len(nonzero) + 1
-        stem_gloss = self.glosses.get((lemma, pos), lemma)
-        morphs = [Morph(parts[0], stem_gloss, (pos,), "stem", lemma)]
-        k = 1
-        for affix_id, labels in groups:
-            info = self.affixes[affix_id]
-            if info["form"]:
-                form = parts[k] if aligned else "?"
-                k += 1
-            else:
-                form = ""
-            morphs.append(
-                Morph(form, info["gloss"], tuple(labels), "affix", "".join(info["form"]), info["slot"], affix_id, info["new_pos"])
-            )
-        return Analysis(surface, lemma, pos, tuple(features), tuple(morphs), weight, self.ud)
 
     def segment(self, word: str) -> list[Segmentation]:
         """Distinct splits of ``word`` into surface morphs, best first, each with its analyses."""
@@ -232,11 +191,6 @@ class Language:
         from .fstutil import size
 
         return {name: dict(zip(("states", "arcs"), size(f))) for name, f in self.fsts.items()}
-
-
-def _rank(a: Analysis) -> tuple[float, str, str]:
-    """Best first: lower weight, then the analysis text and segmentation (deterministic on ties)."""
-    return (round(a.weight, 5), a.text, a.segmentation)
 
 
 def _permutations(codes: list[str]) -> pynini.Fst:

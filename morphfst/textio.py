@@ -7,7 +7,6 @@ replaced bytes is kept so the CLI can report it.
 from __future__ import annotations
 
 import codecs
-import re
 import sys
 import unicodedata
 from collections.abc import Iterator
@@ -66,20 +65,3 @@ def read_lines(handle: BinaryIO, stats: ReadStats) -> Iterator[str]:
             if text.endswith("\r"):
                 text = text[:-1]
         yield unicodedata.normalize("NFC", text)
-
-
-WORD_RE = re.compile(r"[^\W_](?:[^\W_]|['’ʼ](?=[^\W_]))*", re.UNICODE)
-
-
-def split_text(line: str) -> list[tuple[str, bool]]:
-    """Split a line into pieces, each (text, is_word); joining the texts gives the line back."""
-    pieces: list[tuple[str, bool]] = []
-    pos = 0
-    for match in WORD_RE.finditer(line):
-        if match.start() > pos:
-            pieces.append((line[pos : match.start()], False))
-        pieces.append((match.group(), True))
-        pos = match.end()
-    if pos < len(line):
-        pieces.append((line[pos:], False))
-    return pieces

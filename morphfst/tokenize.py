@@ -118,6 +118,6 @@ class Tokenizer:
 
 
 def split_line(line: str, tokenizer: Tokenizer | None = None) -> list[tuple[str, bool]]:
-    """``(text, is_token)`` for every piece of ``line`` (the shape of ``textio.split_text``)."""
+    """``(text, is_token)`` for every piece of ``line``."""
     tok = tokenizer or Tokenizer()
     return [(p.text, p.is_token) for p in tok.pieces(line)]

@@ -226,7 +226,7 @@ class FastAnalyzer:
         surface = self.lang.normalize(word)
         if not self.lang.acceptable(surface):
             return []
-        found = self._decode_all(surface, self.bounded.walk(surface, limit), False)
+        found = self.decode_all(surface, self.bounded.walk(surface, limit), False)
         if not found and guess:
             return self.guess_normalized(surface)
         return found
@@ -248,10 +248,10 @@ class FastAnalyzer:
             # final order (weight, then analysis text) is the same as when everything is decoded.
             bound = round(walked[limit - 1][2], 5)
             walked = [w for w in walked if round(w[2], 5) <= bound]
-        return self._decode_all(surface, walked, True)[:limit]
+        return self.decode_all(surface, walked, True)[:limit]
 
     def decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool = False) -> Analysis:
-        """The same :class:`Analysis` as ``Language._decode``, from precomputed tables.
+        """One :class:`Analysis` from a walked or composed path, through precomputed tables.
 
         The analysis after the lemma (part of speech, affix ids, features) and the affix morphs are
         shared by many words: both are parsed once and kept in dicts.
@@ -323,7 +323,8 @@ class FastAnalyzer:
             out.append(_new_morph(form, gloss, group_labels, "affix", underlying, slot, ident, new_pos))
         return tuple(out)
 
-    def _decode_all(self, surface: str, walked: list[tuple[str, str, float]], guessed: bool) -> list[Analysis]:
+    def decode_all(self, surface: str, walked: list[tuple[str, str, float]], guessed: bool = False) -> list[Analysis]:
+        """Decoded analyses of (bounded surface, internal analysis, weight) paths, deduplicated and ranked."""
         if not walked:
             return []
         decode = self.decode

@@ -5,8 +5,9 @@ from __future__ import annotations
 import argparse
 import sys
 from collections import Counter
+from typing import TextIO
 
-from ..runtime import Language
+from ..results import Segmentation
 from ..textio import ReadStats
 from ..tokenize import Tokenizer, split_line
 from .common import Aligned, add_input, add_language, input_lines, open_language, report_stats, shorten, tsv_field, write_json
@@ -121,7 +122,7 @@ def run(args: argparse.Namespace) -> int:
                     continue
                 segs = lang.segment(text)
                 coverage.add(text, len(segs))
-                _emit_token(args, lang, out, number, text, segs, pieces)
+                _emit_token(args, out, number, text, segs, pieces)
             if args.format == "text":
                 out.write("".join(pieces) + "\n")
     if not args.no_summary:
@@ -131,8 +132,8 @@ def run(args: argparse.Namespace) -> int:
 
 
 def _emit_token(
-    args: argparse.Namespace, lang: Language, out: object, number: int, text: str, segs: list, pieces: list[str]
-) -> None:  # type: ignore[type-arg]
+    args: argparse.Namespace, out: TextIO, number: int, text: str, segs: list[Segmentation], pieces: list[str]
+) -> None:
     best = segs[0] if segs else None
     if args.format == "text":
         if best is None:
@@ -142,6 +143,6 @@ def _emit_token(
             pieces.append(args.sep.join(morphs))
     elif args.format == "tsv":
         lemma = best.analyses[0].lemma if best else ""
-        out.write(f"{number}\t{tsv_field(text)}\t{best.text if best else ''}\t{best.gloss if best else ''}\t{lemma}\n")  # type: ignore[attr-defined]
+        out.write(f"{number}\t{tsv_field(text)}\t{best.text if best else ''}\t{best.gloss if best else ''}\t{lemma}\n")
     else:
-        write_json({"line": number, "word": text, "segmentations": [s.to_dict() for s in segs]}, out)  # type: ignore[arg-type]
+        write_json({"line": number, "word": text, "segmentations": [s.to_dict() for s in segs]}, out)
