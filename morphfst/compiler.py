@@ -26,6 +26,7 @@ import pynini
 from . import model as m
 from .errors import UserError
 from .fstutil import NO_STATE_ID, Arc, Weight, acc, chars, cross, empty, union
+from .stemrules import derive_stems, lemma_to_stem
 from .symbols import SymbolSpace
 from .validate import BOUNDARIES
 
@@ -126,16 +127,17 @@ class Compiler:
         raise TypeError(e)
 
     # ---- rules ----------------------------------------------------------------------------------
-    def rule_fst(self, rule: m.Rule) -> pynini.Fst:
+    def rule_fst(self, rule: m.Rule, cache_key: str | None = None) -> pynini.Fst:
         """One rewrite rule as a transducer over the underlying alphabet (cdrewrite)."""
-        if rule.name in self._rule_cache:
-            return self._rule_cache[rule.name]
+        key = cache_key or rule.name
+        if key in self._rule_cache:
+            return self._rule_cache[key]
         tau = self.rule_tau(rule)
         left = self.expr(rule.left).optimize() if rule.left is not None else acc("")
         right = self.expr(rule.right).optimize() if rule.right is not None else acc("")
         mode: Literal["opt", "obl"] = "opt" if rule.optional else "obl"
         fst = pynini.cdrewrite(tau, left, right, self.sigma_star, direction=rule.direction, mode=mode).optimize()
-        self._rule_cache[rule.name] = fst
+        self._rule_cache[key] = fst
         return fst
 
     def rule_tau(self, rule: m.Rule) -> pynini.Fst:
@@ -268,6 +270,7 @@ class Compiler:
     # ---- the whole ------------------------------------------------------------------------------------
     def bounded(self, entries: list[m.LexEntry], progress: Callable[[str], None] | None = None) -> pynini.Fst:
         """Internal analysis → bounded surface, for the given lexicon entries."""
+        derive_stems(self.g, entries, self)
         groups: dict[frozenset[str], list[m.LexEntry]] = defaultdict(list)
         for e in entries:
             blocked = frozenset(r for f in e.flags for r in self.g.flags[f].blocks)
@@ -351,7 +354,7 @@ class Compiler:
         tags = klass.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == klass.name}) or self.g.pos_tags
         tail = union(acc(s.code(f"pos:{t}")) for t in tags) + acc(mark)
         after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""
-        return cross("", s.code(m.WORD_START)) + stem + cross(tail, after) + pynini.accep("", weight=GUESS_OFFSET)
+        return lemma_to_stem(self, klass, stem) + cross(tail, after) + pynini.accep("", weight=GUESS_OFFSET)
 
     def guesser(self) -> pynini.Fst | None:
         """Bounded surface → internal analysis of guessed words (``None`` when no class has a guess pattern).

@@ -198,7 +198,7 @@ def _entry(
                 f"symbol {sym!r} of stem {stem_text!r} is not in the alphabet",
                 "add it to the grammar's letters, or give an underlying stem in the stem column",
             )
-    entry = m.LexEntry(lemma, klass, pos_tag, row["gloss"], weight, stem, flags, pos)
+    entry = m.LexEntry(lemma, klass, pos_tag, row["gloss"], weight, stem, flags, pos, stem_given=bool(row.get("stem")))
     return entry, count
 
 

@@ -8,6 +8,7 @@ from . import model as m
 from .errors import Position, UserError
 from .lexicon import read_lexicon
 from .normalize import make_normalizer
+from .stemrules import derive_stems
 from .syntax import parse_grammar_file
 from .validate import validate
 
@@ -27,6 +28,7 @@ def load_model(path: str | Path, extra_entries: list[m.LexEntry] | None = None) 
     grammar.lexicon = read_lexicon(grammar, fold)
     if extra_entries:
         grammar.lexicon.extend(extra_entries)
+    derive_stems(grammar, grammar.lexicon)
     if not grammar.lexicon:
         raise UserError("the lexicon is empty", Position(grammar.path), hint="add a lexicon line naming a TSV file or directory")
     return grammar

@@ -117,6 +117,7 @@ class StemClass:
     apostrophe: bool
     guess: Expr | None
     pos: Position
+    stems: list[str] = field(default_factory=list)  # stem-rule groups that turn a lemma into its stem
 
 
 @dataclass
@@ -221,6 +222,7 @@ class LexEntry:
     stem: list[str]  # underlying stem symbols
     flags: list[str]
     pos: Position
+    stem_given: bool = True  # False: the stem is the folded lemma, to be rewritten by the class's stem rules
 
 
 @dataclass
@@ -243,6 +245,8 @@ class Grammar:
     slots: dict[str, Slot] = field(default_factory=dict)
     constraints: list[Constraint] = field(default_factory=list)
     rules: list[Rule] = field(default_factory=list)
+    stem_rules: dict[str, list[Rule]] = field(default_factory=dict)  # named groups (``stems NAME { ... }``)
+    labels: dict[str, str] = field(default_factory=dict)  # layout labels shared by every layout
     normalization: Normalization = field(default_factory=Normalization)
     tests: list[TestCase] = field(default_factory=list)
     layouts: list[Layout] = field(default_factory=list)

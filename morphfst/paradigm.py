@@ -558,7 +558,11 @@ def trial_entry(
                 where,
                 hint="give the underlying stem with --stem, using the grammar's letters and archiphonemes",
             )
-    return m.LexEntry(lemma, klass, pos, gloss, 0.0, symbols, list(flags), where)
+    from .stemrules import derive_stems
+
+    entry = m.LexEntry(lemma, klass, pos, gloss, 0.0, symbols, list(flags), where, stem_given=stem is not None)
+    derive_stems(grammar, [entry])
+    return entry
 
 
 def compile_entry(lang: Language, entry_args: dict[str, Any]) -> tuple[Language, m.LexEntry]:

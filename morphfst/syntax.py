@@ -72,6 +72,8 @@ def parse_grammar_file(path: str | Path) -> m.Grammar:
 def parse_grammar_text(text: str, filename: str = "<grammar>") -> m.Grammar:
     """Parse grammar source text into a :class:`Grammar` (lexicons are not read here)."""
     text = unicodedata.normalize("NFC", text)
+    if text.startswith("\ufeff"):  # a byte-order mark, as some editors write one
+        text = text[1:]
     if not text.endswith("\n"):
         text += "\n"
     lines = text.split("\n")
@@ -81,6 +83,7 @@ def parse_grammar_text(text: str, filename: str = "<grammar>") -> m.Grammar:
         raise _syntax_error(exc, filename, lines) from None
     builder = _Builder(filename, lines)
     builder.build(tree)
+    builder.finish()
     return builder.grammar
 
 
@@ -169,6 +172,11 @@ class _Builder:
     def unquote(tok: Any) -> str:
         return str(tok)[1:-1]
 
+    def finish(self) -> None:
+        """Steps that need the whole grammar: shared layout labels under each layout's own."""
+        for layout in self.grammar.layouts:
+            layout.labels = {**self.grammar.labels, **layout.labels}
+
     def build(self, tree: Tree) -> None:
         for stmt in tree.children:
             if not isinstance(stmt, Tree):
@@ -183,6 +191,64 @@ class _Builder:
         toks = node.children
         self.grammar.name = str(toks[0])
         self.grammar.title = self.unquote(toks[1]) if len(toks) > 1 else str(toks[0])
+
+    def do_include(self, node: Tree) -> None:
+        """Read another grammar file in place: its statements join this grammar where the line stands."""
+        pos = self.pos_of(node)
+        target = Path(self.filename).parent / self.unquote(node.children[0])
+        chain = getattr(self, "_chain", [str(Path(self.filename).resolve())])
+        if str(target.resolve()) in chain:
+            raise UserError(
+                f"include cycle: {target} includes itself",
+                pos,
+                hint="an included file must not include a file that includes it",
+                source_line=self.line_text(pos),
+            )
+        try:
+            raw = target.read_bytes()
+        except OSError as exc:
+            raise UserError(
+                f"cannot read included file: {exc.strerror or exc}",
+                pos,
+                hint=f"the path is relative to the including file's folder; looked for {target}",
+                source_line=self.line_text(pos),
+            ) from None
+        try:
+            text = unicodedata.normalize("NFC", raw.decode("utf-8"))
+        except UnicodeDecodeError as exc:
+            raise UserError(
+                "included file is not valid UTF-8",
+                Position(str(target), raw[: exc.start].count(b"\n") + 1),
+                hint="save it as UTF-8",
+            ) from None
+        if text.startswith("\ufeff"):
+            text = text[1:]
+        if not text.endswith("\n"):
+            text += "\n"
+        lines = text.split("\n")
+        try:
+            tree = _parser().parse(text)
+        except UnexpectedInput as exc:
+            raise _syntax_error(exc, str(target), lines) from None
+        saved = (self.filename, self.lines)
+        self.filename, self.lines = str(target), lines
+        self._chain = [*chain, str(target.resolve())]
+        self.grammar.sources.append(str(target))
+        try:
+            self.build(tree)
+        finally:
+            self.filename, self.lines = saved
+            self._chain = chain
+
+    def do_labels_block(self, node: Tree) -> None:
+        for d in node.children:
+            self.grammar.labels[str(d.children[0])] = self.unquote(d.children[1])
+
+    def do_stems_block(self, node: Tree) -> None:
+        name = str(node.children[0])
+        if name in self.grammar.stem_rules:
+            raise UserError(f"stem rules {name} declared twice", self.pos_of(node), hint="give each stems block its own name")
+        self.grammar.stem_rules[name] = [self._rule(d) for d in node.children[1:]]
 
     def do_lexicon_decl(self, node: Tree) -> None:
         for tok in node.children:
@@ -268,6 +334,7 @@ class _Builder:
             nexts: list[str] = []
             apostrophe = False
             guess: m.Expr | None = None
+            stems: list[str] = []
             for part in d.children[1:]:
                 if isinstance(part, Token):
                     nexts.append(str(part))
@@ -277,9 +344,11 @@ class _Builder:
                     apostrophe = True
                 elif part.data == "opt_guess":
                     guess = self.expr(part.children[0])
+                elif part.data == "opt_stems":
+                    stems.extend(str(t) for t in part.children)
             if name in self.grammar.classes:
                 raise UserError(f"class {name} declared twice", self.pos_of(d))
-            self.grammar.classes[name] = m.StemClass(name, nexts, pos_allowed, apostrophe, guess, self.pos_of(d))
+            self.grammar.classes[name] = m.StemClass(name, nexts, pos_allowed, apostrophe, guess, self.pos_of(d), stems)
 
     def do_slot(self, node: Tree) -> None:
         name = str(node.children[0])
@@ -335,33 +404,35 @@ class _Builder:
 
     def do_rules_block(self, node: Tree) -> None:
         for d in node.children:
-            pos = self.pos_of(d)
-            name = str(d.children[0])
-            direction = "ltr"
-            optional = False
-            weight = 0.0
-            exprs: list[Any] = []
-            context: Tree | None = None
-            for part in d.children[1:]:
-                if isinstance(part, Tree) and part.data in {"o_ltr", "o_rtl", "o_sim"}:
-                    direction = str(part.data)[2:]
-                elif isinstance(part, Tree) and part.data == "o_optional":
-                    optional = True
-                elif isinstance(part, Tree) and part.data == "o_weight":
-                    weight = float(str(part.children[0]))
-                elif isinstance(part, Tree) and part.data == "context":
-                    context = part
-                else:
-                    exprs.append(part)
-            target = self.expr(exprs[0])
-            replacement = self.expr(exprs[1])
-            left: m.Expr | None = None
-            right: m.Expr | None = None
-            if context is not None:
-                left, right = self._context(context)
-            self.grammar.rules.append(
-                m.Rule(name, target, replacement, left, right, direction, optional, weight, pos, self.line_text(pos))  # type: ignore[arg-type]
-            )
+            self.grammar.rules.append(self._rule(d))
+
+    def _rule(self, d: Tree) -> m.Rule:
+        """One rule line (of a rules block or a stems block) as a model rule."""
+        pos = self.pos_of(d)
+        name = str(d.children[0])
+        direction = "ltr"
+        optional = False
+        weight = 0.0
+        exprs: list[Any] = []
+        context: Tree | None = None
+        for part in d.children[1:]:
+            if isinstance(part, Tree) and part.data in {"o_ltr", "o_rtl", "o_sim"}:
+                direction = str(part.data)[2:]
+            elif isinstance(part, Tree) and part.data == "o_optional":
+                optional = True
+            elif isinstance(part, Tree) and part.data == "o_weight":
+                weight = float(str(part.children[0]))
+            elif isinstance(part, Tree) and part.data == "context":
+                context = part
+            else:
+                exprs.append(part)
+        target = self.expr(exprs[0])
+        replacement = self.expr(exprs[1])
+        left: m.Expr | None = None
+        right: m.Expr | None = None
+        if context is not None:
+            left, right = self._context(context)
+        return m.Rule(name, target, replacement, left, right, direction, optional, weight, pos, self.line_text(pos))  # type: ignore[arg-type]
 
     def _context(self, node: Tree) -> tuple[m.Expr | None, m.Expr | None]:
         left: m.Expr | None = None

@@ -37,6 +37,7 @@ def validate(grammar: m.Grammar) -> None:
     _check_reachability(grammar)
     _check_constraints(grammar)
     _check_rules(grammar)
+    _check_stem_rules(grammar)
     for index, affix in enumerate(grammar.affixes):
         affix.ident = index
 
@@ -192,10 +193,28 @@ def _check_constraints(g: m.Grammar) -> None:
                 )
 
 
+def _check_stem_rules(g: m.Grammar) -> None:
+    """Stem-rule groups resolve like rules; every class names only declared groups."""
+    for group in g.stem_rules.values():
+        _resolve_rule_list(g, group)
+    for klass in g.classes.values():
+        for name in klass.stems:
+            if name not in g.stem_rules:
+                raise _err(
+                    f"class {klass.name} names undeclared stem rules {name!r}",
+                    klass.pos,
+                    _near(name, sorted(g.stem_rules)) or "declare them in a block 'stems NAME { rule ... }'",
+                )
+
+
 def _check_rules(g: m.Grammar) -> None:
+    _resolve_rule_list(g, g.rules)
+
+
+def _resolve_rule_list(g: m.Grammar, rules: list[m.Rule]) -> None:
     known = set(underlying_alphabet(g))
     seen: dict[str, Position] = {}
-    for index, rule in enumerate(g.rules):
+    for index, rule in enumerate(rules):
         if rule.name in seen:
             raise _err(
                 f"rule {rule.name} is defined twice",
@@ -207,7 +226,7 @@ def _check_rules(g: m.Grammar) -> None:
         def fix(e: m.Expr | None, role: str, rule: m.Rule = rule) -> m.Expr | None:
             return None if e is None else _resolve(e, g, known, rule, role)
 
-        g.rules[index] = replace(
+        rules[index] = replace(
             rule,
             target=fix(rule.target, "target"),  # type: ignore[arg-type]
             replacement=fix(rule.replacement, "replacement"),  # type: ignore[arg-type]

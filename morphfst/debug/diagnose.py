@@ -27,6 +27,7 @@ from typing import Any
 import pynini
 
 from .. import model as m
+from ..errors import UserError
 from ..fstutil import acc, cross, is_empty, paths, union
 from .explain import explain_analysis, render_derivation
 from .morphotactics import Break, constraint_violations, find_break
@@ -359,8 +360,12 @@ def _expected_entry(session: DebugSession, surface: str, lemma: str, pos: str) -
     variants: list[list[str]] = [[]] + [[f] for f in g.flags]
     for klass in classes:
         for flags in variants:
-            entry = m.LexEntry(lemma, klass.name, pos, "?", 0.0, stem, flags, m.Position("<guess>"))
-            if verify_entry(session, surface, entry):
+            entry = m.LexEntry(lemma, klass.name, pos, "?", 0.0, list(stem), flags, m.Position("<guess>"), stem_given=False)
+            try:
+                verified = verify_entry(session, surface, entry)
+            except UserError:  # the class's stem rules do not fit this lemma
+                continue
+            if verified:
                 file = _lexicon_file(session, klass.name)
                 return LexiconFinding(
                     lemma,
@@ -771,13 +776,13 @@ def lexicon_finding(session: DebugSession, surface: str) -> LexiconFinding | Non
     klass, flags, internal, _ = found[0]
     lemma, pos, ids = session.decode_internal(internal)
     stem = lemma
-    entry = m.LexEntry(lemma, klass, pos, "?", 0.0, list(stem), flags, m.Position("<guess>"))
+    entry = m.LexEntry(lemma, klass, pos, "?", 0.0, list(stem), flags, m.Position("<guess>"), stem_given=False)
     file = _lexicon_file(session, klass)
     bounded = _segmentation(session, entry, ids, surface)
     alternatives = []
     for k2, f2, int2, _ in found[1:]:
         lem2, pos2, ids2 = session.decode_internal(int2)
-        e2 = m.LexEntry(lem2, k2, pos2, "?", 0.0, list(lem2), f2, m.Position("<guess>"))
+        e2 = m.LexEntry(lem2, k2, pos2, "?", 0.0, list(lem2), f2, m.Position("<guess>"), stem_given=False)
         extra = f" (flags {','.join(f2)})" if f2 else ""
         alternatives.append(f"{session.analysis_text(int2)}  {_segmentation(session, e2, ids2, surface)}  class {k2}{extra}")
     return LexiconFinding(
