@@ -61,9 +61,11 @@ def find_grammar(name_or_path: str | Path) -> Path:
 
 
 def source_files(grammar_path: Path) -> tuple[str, list[str]]:
-    """The grammar's name, and the grammar file and its lexicon files (for the source hash), without compiling."""
+    """The grammar's name, and the grammar file, the files it includes and its lexicon files (for the
+    source hash), without compiling."""
     grammar = parse_grammar_file(grammar_path)
-    return grammar.name, [str(grammar_path)] + [str(p) for p in lexicon_files(grammar)]
+    included = [str(p) for p in grammar.sources[1:]]
+    return grammar.name, [str(grammar_path), *included] + [str(p) for p in lexicon_files(grammar)]
 
 
 def compile_grammar(

@@ -275,7 +275,10 @@ class Compiler:
         for e in entries:
             blocked = frozenset(r for f in e.flags for r in self.g.flags[f].blocks)
             groups[blocked].append(e)
-        filt = self.constraint_filter({ch for e in entries for ch in e.lemma})
+        open_classes = [c for c in self.g.classes.values() if c.open is not None]
+        if open_classes:
+            groups.setdefault(frozenset(), [])
+        filt = self.constraint_filter({ch for e in entries for ch in e.lemma} | set(self.letter_codes))
         final = self.final_step()
         results = []
         for blocked, group in sorted(groups.items(), key=lambda kv: sorted(kv[0])):
@@ -283,6 +286,8 @@ class Compiler:
             for e in group:
                 by_class[tuple(self.g.classes[e.klass].next)].append(e)
             parts = [self.stem_fst(es) + self.slot_graph(list(starts)) for starts, es in by_class.items()]
+            if not blocked:
+                parts += [self.open_stem_fst(c) + self.slot_graph(list(c.next)) for c in open_classes]
             fst = union(parts).optimize()
             if filt is not None:
                 fst = pynini.compose(filt, fst)
@@ -325,6 +330,27 @@ class Compiler:
         for fst in (analyzer, generator, segmenter, bounded_analyzer):
             fst.arcsort("ilabel")
         return {"analyzer": analyzer, "generator": generator, "segmenter": segmenter, "bounded": bounded_analyzer}
+
+    def open_stem_fst(self, klass: m.StemClass) -> pynini.Fst:
+        """The stems of an open class: every string of letters its ``open`` pattern accepts is a lemma
+        (numbers written in digits), through the class's stem rules, like a lexicon stem."""
+        assert klass.open is not None
+        s = self.space
+        try:
+            pattern = self.expr(klass.open).optimize()
+        except KeyError as exc:
+            raise UserError(
+                f"class {klass.name}: the open pattern names an unknown symbol or set {exc.args[0]!r}",
+                klass.pos,
+                hint="an open pattern is written with the grammar's letters and @sets",
+            ) from None
+        stem = pynini.intersect(pattern, chars(self.letter_codes).closure().optimize()).optimize()
+        if stem.start() == NO_STATE_ID:
+            raise UserError(f"class {klass.name}: the open pattern matches no string of letters", klass.pos)
+        tags = klass.pos_allowed or self.g.pos_tags
+        after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""
+        tail = cross(union(acc(s.code(f"pos:{t}")) for t in tags), after)
+        return lemma_to_stem(self, klass, stem) + tail
 
     # ---- the guesser for unknown words ----------------------------------------------------------------
     def guess_stem_fst(self, klass: m.StemClass) -> pynini.Fst | None:

@@ -118,6 +118,7 @@ class StemClass:
     guess: Expr | None
     pos: Position
     stems: list[str] = field(default_factory=list)  # stem-rule groups that turn a lemma into its stem
+    open: Expr | None = None  # an open class: every string of letters this pattern accepts is a stem
 
 
 @dataclass

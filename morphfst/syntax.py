@@ -335,6 +335,7 @@ class _Builder:
             apostrophe = False
             guess: m.Expr | None = None
             stems: list[str] = []
+            open_pattern: m.Expr | None = None
             for part in d.children[1:]:
                 if isinstance(part, Token):
                     nexts.append(str(part))
@@ -346,9 +347,11 @@ class _Builder:
                     guess = self.expr(part.children[0])
                 elif part.data == "opt_stems":
                     stems.extend(str(t) for t in part.children)
+                elif part.data == "opt_open":
+                    open_pattern = self.expr(part.children[0])
             if name in self.grammar.classes:
                 raise UserError(f"class {name} declared twice", self.pos_of(d))
-            self.grammar.classes[name] = m.StemClass(name, nexts, pos_allowed, apostrophe, guess, self.pos_of(d), stems)
+            self.grammar.classes[name] = m.StemClass(name, nexts, pos_allowed, apostrophe, guess, self.pos_of(d), stems, open_pattern)
 
     def do_slot(self, node: Tree) -> None:
         name = str(node.children[0])
