@@ -1,20 +1,33 @@
 """Find, compile, cache and load languages.
 
 ``load(name_or_path)`` accepts a shipped grammar name (``tur``), a grammar file (``*.mfg``) or a
-compiled file (``*.mfc``). Compiled files are cached under ``$MORPHFST_CACHE`` (default
-``~/.cache/morphfst``) by a hash of the compiler version and every source file, so loading reuses
-the compiled file while the sources are unchanged and recompiles when any of them changes.
+compiled file (``*.mfc``). A shipped name always means the grammar shipped inside the package (found
+with :mod:`importlib.resources`); names that are not shipped are also looked up in the folders of
+``$MORPHFST_GRAMMARS``. A grammar of one's own is given as a path.
+
+Grammars are compiled into a cache under ``$MORPHFST_CACHE`` (default ``~/.cache/morphfst``), keyed
+by a hash of the compiler version and every source file, so loading reuses the compiled file while
+the sources are unchanged and recompiles when any of them changes. A damaged cache entry (checksum)
+is reported in one line and rebuilt; only the newest :data:`CACHE_KEEP` entries per language are
+kept. When the cache cannot be written the language is compiled in memory. A compiled file named by
+the user is loaded as it is, never recompiled or overwritten.
 """
 
 from __future__ import annotations
 
 import os
+import re
+import sys
 import time
 from collections.abc import Callable
+from importlib import resources
 from pathlib import Path
+from typing import Any
+
+import pynini
 
 from . import model as m
-from .archive import SUFFIX, load_archive, save_archive
+from .archive import SUFFIX, DamagedArchive, load_archive, save_archive
 from .compiler import Compiler
 from .errors import Position, UserError
 from .layout import declared_layouts
@@ -26,13 +39,32 @@ from .syntax import parse_grammar_file
 
 GRAMMAR_SUFFIX = ".mfg"
 PACKAGE_ROOT = Path(__file__).resolve().parent.parent
+CACHE_KEEP = 3  # compiled files kept per language name in the cache
+_CACHE_NAME = re.compile(rf"(.+)-[0-9a-f]{{16}}{re.escape(SUFFIX)}\Z")
+
+
+def shipped_grammar_dir() -> Path | None:
+    """The folder of the shipped grammars: inside the installed package (a wheel maps the repository's
+    top-level ``grammars/`` and ``lexicons/`` into ``morphfst/``), or the checkout's ``grammars/`` for
+    an editable install."""
+    packaged = resources.files("morphfst").joinpath("grammars")
+    if isinstance(packaged, Path) and packaged.is_dir():
+        return packaged
+    checkout = PACKAGE_ROOT / "grammars"
+    return checkout if checkout.is_dir() and (PACKAGE_ROOT / "pyproject.toml").is_file() else None
 
 
 def grammar_dirs() -> list[Path]:
-    """Where grammar names are looked up, in order."""
-    dirs = [Path(p) for p in os.environ.get("MORPHFST_GRAMMARS", "").split(os.pathsep) if p]
-    dirs += [Path.cwd() / "grammars", PACKAGE_ROOT / "grammars"]
+    """Where grammar names are looked up, in order: the shipped grammars, then ``$MORPHFST_GRAMMARS``."""
+    shipped = shipped_grammar_dir()
+    dirs = [shipped] if shipped else []
+    dirs += [Path(p) for p in os.environ.get("MORPHFST_GRAMMARS", "").split(os.pathsep) if p]
     return list(dict.fromkeys(dirs))
+
+
+def shipped_names() -> list[str]:
+    shipped = shipped_grammar_dir()
+    return sorted(p.stem for p in shipped.glob(f"*{GRAMMAR_SUFFIX}")) if shipped else []
 
 
 def cache_dir() -> Path:
@@ -42,21 +74,28 @@ def cache_dir() -> Path:
     return Path(os.environ.get("XDG_CACHE_HOME", Path.home() / ".cache")) / "morphfst"
 
 
+def warn(message: str) -> None:
+    """One line on standard error (the CLI and the library report cache events the same way)."""
+    sys.stderr.write(message.rstrip("\n") + "\n")
+
+
 def find_grammar(name_or_path: str | Path) -> Path:
     """The grammar or compiled file that ``name_or_path`` names."""
     path = Path(name_or_path)
-    if path.suffix in {GRAMMAR_SUFFIX, SUFFIX} or os.sep in str(name_or_path):
-        if path.exists():
+    if path.suffix in {GRAMMAR_SUFFIX, SUFFIX} or os.sep in str(name_or_path) or "/" in str(name_or_path):
+        if path.is_file():
             return path
         raise UserError(f"no such file: {path}", hint="give a grammar (.mfg), a compiled file (.mfc) or a shipped grammar name")
     for directory in grammar_dirs():
         candidate = directory / f"{name_or_path}{GRAMMAR_SUFFIX}"
-        if candidate.exists():
+        if candidate.is_file():
             return candidate
-    shipped = sorted({p.stem for d in grammar_dirs() if d.is_dir() for p in d.glob(f"*{GRAMMAR_SUFFIX}")})
+    known = sorted({p.stem for d in grammar_dirs() if d.is_dir() for p in d.glob(f"*{GRAMMAR_SUFFIX}")})
     raise UserError(
         f"unknown language {str(name_or_path)!r}",
-        hint=("shipped grammars: " + ", ".join(shipped)) if shipped else "give the path of a grammar file",
+        hint=("shipped grammars: " + ", ".join(known) + "; a grammar of your own is given as a path")
+        if known
+        else "give the path of a grammar file",
     )
 
 
@@ -68,14 +107,12 @@ def source_files(grammar_path: Path) -> tuple[str, list[str]]:
     return grammar.name, [str(grammar_path), *included] + [str(p) for p in lexicon_files(grammar)]
 
 
-def compile_grammar(
+def compile_in_memory(
     grammar_path: str | Path,
-    output: str | Path | None = None,
     progress: Callable[[str], None] | None = None,
     extra_entries: list[m.LexEntry] | None = None,
-) -> Path:
-    """Compile a grammar and its lexicons into one compiled file; returns the file's path."""
-    grammar_path = Path(grammar_path)
+) -> tuple[dict[str, pynini.Fst], dict[str, Any]]:
+    """Compile a grammar and its lexicons; returns the transducers and the metadata."""
     t0 = time.perf_counter()
     grammar = load_model(grammar_path, extra_entries)
     compiler = Compiler(grammar)
@@ -84,9 +121,23 @@ def compile_grammar(
     declared_layouts(meta, None)  # a layout naming an unknown dimension or label is a grammar error
     meta["compile_seconds"] = round(time.perf_counter() - t0, 3)
     meta["timings"] = {k: round(v, 3) for k, v in built.timings.items()}
+    return built.fsts, meta
+
+
+def compile_grammar(
+    grammar_path: str | Path,
+    output: str | Path | None = None,
+    progress: Callable[[str], None] | None = None,
+    extra_entries: list[m.LexEntry] | None = None,
+) -> Path:
+    """Compile a grammar and its lexicons into one compiled file; returns the file's path."""
+    fsts, meta = compile_in_memory(grammar_path, progress, extra_entries)
     if output is None:
-        output = cache_dir() / f"{grammar.name}-{meta['digest'][:16]}{SUFFIX}"
-    return save_archive(output, built.fsts, meta)
+        output = cache_dir() / f"{meta['name']}-{meta['digest'][:16]}{SUFFIX}"
+        saved = save_archive(output, fsts, meta)
+        prune_cache(meta["name"], keep=saved)
+        return saved
+    return save_archive(output, fsts, meta)
 
 
 def _fresh(meta: dict[str, object]) -> bool | None:
@@ -96,19 +147,104 @@ def _fresh(meta: dict[str, object]) -> bool | None:
         path = Path(src["path"])
         if not path.exists():
             return None
-        if file_hash(path) != src["sha256"]:
-            return False
+        try:
+            if file_hash(path) != src["sha256"]:
+                return False
+        except OSError:
+            return None
     return True
 
 
+# ---- the cache ----------------------------------------------------------------------------------------
+
+
+def cache_entries(directory: Path | None = None) -> list[Path]:
+    """The compiled files in the cache, newest first."""
+    directory = directory or cache_dir()
+    try:
+        found = [p for p in directory.iterdir() if _CACHE_NAME.match(p.name) and p.is_file()]
+    except OSError:
+        return []
+    return sorted(found, key=_mtime, reverse=True)
+
+
+def _mtime(path: Path) -> float:
+    try:
+        return path.stat().st_mtime
+    except OSError:
+        return 0.0
+
+
+def prune_cache(name: str, keep: Path | None = None, newest: int = CACHE_KEEP) -> list[Path]:
+    """Remove all but the ``newest`` compiled files of language ``name`` from the cache (never ``keep``)."""
+    mine = [p for p in cache_entries() if (match := _CACHE_NAME.match(p.name)) and match.group(1) == name]
+    if keep is not None:
+        mine = [p for p in mine if p != keep]
+        newest -= 1
+    removed: list[Path] = []
+    for path in mine[max(newest, 0) :]:
+        try:
+            path.unlink()
+            removed.append(path)
+        except OSError:
+            pass
+    return removed
+
+
+def clear_cache() -> list[Path]:
+    """Remove every compiled file (and leftover temporary file) from the cache."""
+    removed: list[Path] = []
+    directory = cache_dir()
+    try:
+        names = list(directory.iterdir())
+    except OSError:
+        return removed
+    for path in names:
+        if _CACHE_NAME.match(path.name) or (path.name.startswith(".") and path.name.endswith(".part") and SUFFIX in path.name):
+            try:
+                path.unlink()
+                removed.append(path)
+            except OSError as exc:
+                raise UserError(
+                    f"cannot remove {path}: {exc.strerror or exc}", hint="check the cache directory's permissions"
+                ) from None
+    return removed
+
+
+def _with_current_sources(meta: dict[str, Any], grammar_path: Path, files: list[str]) -> dict[str, Any]:
+    """The metadata with the paths of the sources loaded now (a cache entry may have been compiled from
+    another copy of the same files: the cache is keyed by content)."""
+    meta = dict(meta)
+    old = [str(s.get("path", "")) for s in meta.get("sources") or []]
+    new = [str(Path(p).resolve()) for p in files]
+    meta["grammar_path"] = str(grammar_path.resolve())
+    meta["sources"] = [{"path": p, "sha256": file_hash(p)} for p in new]
+    if len(old) == len(new):
+        moved = dict(zip(old, new))
+
+        def relocated(entry: dict[str, Any]) -> dict[str, Any]:
+            file = entry.get("file")
+            if not file:
+                return entry
+            return entry | {"file": moved.get(file) or moved.get(str(Path(file).resolve()), file)}
+
+        meta["lexicon"] = [relocated(e) for e in meta.get("lexicon") or []]
+    return meta
+
+
 def load(name_or_path: str | Path, recompile: bool = False) -> Language:
-    """Load a language by shipped name, grammar file or compiled file (compiling when needed)."""
+    """Load a language by shipped name, grammar file or compiled file (compiling when needed).
+
+    A compiled file (``.mfc``) is loaded as it is: if its sources changed since it was compiled a
+    warning says so, but it is never recompiled or overwritten (``recompile`` is ignored for it)."""
     path = find_grammar(name_or_path)
     if path.suffix == SUFFIX:
         fsts, meta = load_archive(path)
-        if recompile or _fresh(meta) is False:
-            compile_grammar(Path(meta["grammar_path"]), path)
-            fsts, meta = load_archive(path)
+        if _fresh(meta) is False:
+            warn(
+                f"warning: {path}: its sources changed after it was compiled; loading it as it is "
+                f"(rebuild it with 'morphfst build {meta.get('grammar_path', 'GRAMMAR')} -o {path}')"
+            )
         return Language(fsts, meta, str(path))
     try:
         name, files = source_files(path)
@@ -116,7 +252,25 @@ def load(name_or_path: str | Path, recompile: bool = False) -> Language:
     except OSError as exc:
         raise UserError(f"cannot read a source file: {exc}", Position(str(path))) from None
     cached = cache_dir() / f"{name}-{digest[:16]}{SUFFIX}"
-    if recompile or not cached.exists():
-        compile_grammar(path, cached)
-    fsts, meta = load_archive(cached)
-    return Language(fsts, meta, str(cached))
+    loaded: tuple[dict[str, pynini.Fst], dict[str, Any]] | None = None
+    if not recompile and cached.is_file():
+        try:
+            loaded = load_archive(cached)
+        except DamagedArchive as exc:
+            warn(f"warning: {cached}: damaged cache entry ({exc.message.partition('(')[2].rstrip(')')}); rebuilding it")
+        except UserError:
+            pass  # another format: rebuilt below
+    where: str | None = str(cached)
+    if loaded is None:
+        loaded = compile_in_memory(path)
+        try:
+            save_archive(cached, *loaded)
+            prune_cache(name, keep=cached)
+        except UserError as exc:
+            where = None
+            warn(
+                f"warning: cannot write the compiled-file cache {cache_dir()} ({exc.message.partition(': ')[2].split(';')[0]}); "
+                "compiled in memory for this run only; set MORPHFST_CACHE to a writable directory to reuse compiled files"
+            )
+    fsts, meta = loaded
+    return Language(fsts, _with_current_sources(meta, path, files), where)

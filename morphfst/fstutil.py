@@ -67,6 +67,14 @@ def paths(fst: pynini.Fst, limit: int = 1000) -> list[tuple[str, str, float]]:
         return []
     if not fst.properties(ACYCLIC, True) == ACYCLIC:
         fst = pynini.shortestpath(fst, nshortest=limit)
+    out = _read_paths(fst, limit + 1)
+    if len(out) > limit:
+        # more paths than the limit: take the best ones, so the limit never drops the best analysis
+        out = _read_paths(pynini.shortestpath(fst, nshortest=limit), limit)
+    return out
+
+
+def _read_paths(fst: pynini.Fst, limit: int) -> list[tuple[str, str, float]]:
     out: list[tuple[str, str, float]] = []
     it = fst.paths(input_token_type=TOKEN, output_token_type=TOKEN)
     while not it.done():

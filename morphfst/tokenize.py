@@ -1,7 +1,9 @@
 """Splitting text into word tokens and separator pieces, so that the pieces rebuild the text exactly.
 
-A **token** is a run of letters and digits (Unicode categories L, N and the combining marks that
-follow a letter), joined into one token across:
+A **token** is a run of letters and digits (Unicode general categories L and N) together with the
+combining marks that follow them (category M, taken from Python's Unicode database for every script:
+Tamil வீடுகளில், Devanagari, Kannada, Thai ... stay one token) and zero-width (non-)joiners inside a
+word, joined into one token across:
 
 - an apostrophe of the language followed by more letters: ``Ankara'da``, ``2023'te``, ``Ankara’da``;
 - a hyphen followed by more letters: ``sarı-kırmızı``, ``e-posta``;
@@ -14,19 +16,40 @@ white-space runs are one piece, a run of one repeated punctuation character (``.
 piece, any other character is a piece of its own. Joining the texts of all pieces gives the line back.
 
 The apostrophes come from the grammar's ``normalize`` block (``apostrophes ...``); the rest follows
-the Unicode character classes (common practice for word-boundary splitting of Latin-script text).
+the Unicode general categories. This is not the word-boundary algorithm of Unicode's UAX #29: scripts
+written without spaces between words (Chinese, Japanese, Thai) are not split into words.
 """
 
 from __future__ import annotations
 
 import re
+import unicodedata
 from collections.abc import Iterable, Sequence
 from dataclasses import dataclass
+from functools import lru_cache
 from typing import Any
 
 DEFAULT_APOSTROPHES = ("'", "\u2019", "\u02bc")  # ASCII apostrophe, right single quotation mark, modifier letter apostrophe
 HYPHENS = "-\u2010\u2011"  # hyphen-minus, hyphen, non-breaking hyphen
-COMBINING = "\u0300-\u036f\u1ab0-\u1aff\u1dc0-\u1dff\u20d0-\u20ff\ufe20-\ufe2f"
+ZERO_WIDTH_JOINERS = "\u200c\u200d"  # zero-width non-joiner and joiner, inside words of Indic and Arabic scripts
+
+
+@lru_cache(maxsize=1)
+def combining_marks() -> str:
+    """A regular-expression class body of every combining mark (Unicode general category M: Mn, Mc,
+    Me) known to this Python's Unicode database, for every script. Marks live in planes 0-3 and in
+    plane 14's variation selectors, which is all that is scanned (about 20 ms, once per process)."""
+    category = unicodedata.category
+    spans: list[tuple[int, int]] = []
+    for cp in (*range(0x300, 0x40000), *range(0xE0000, 0xE1000)):
+        if category(chr(cp))[0] == "M":
+            if spans and spans[-1][1] == cp - 1:
+                spans[-1] = (spans[-1][0], cp)
+            else:
+                spans.append((cp, cp))
+    return "".join(re.escape(chr(a)) if a == b else f"{re.escape(chr(a))}-{re.escape(chr(b))}" for a, b in spans)
+
+
 _UPPER = re.escape("".join(c for c in map(chr, range(0x10000)) if c.isupper()))  # upper-case letters of the BMP
 
 WORD = "word"
@@ -54,7 +77,7 @@ class Tokenizer:
         self.apostrophes = tuple(dict.fromkeys(a for a in apostrophes if a)) or DEFAULT_APOSTROPHES
         apos = "".join(re.escape(a) for a in self.apostrophes)
         joiner = (
-            rf"[{COMBINING}]+"  # combining marks after a letter
+            rf"[{combining_marks()}{ZERO_WIDTH_JOINERS}]+"  # combining marks (and zero-width joiners) after a letter
             rf"|[{apos}{re.escape(HYPHENS)}](?=[^\W_])"  # apostrophe or hyphen before more letters
             rf"|(?<=[{_UPPER}\d]):(?=[^\W_])"  # colon after an abbreviation or a number
             r"|(?<=\d)[.,](?=\d)"  # decimal point or digit group separator

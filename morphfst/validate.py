@@ -35,6 +35,7 @@ def validate(grammar: m.Grammar) -> None:
     _check_flags(grammar)
     _check_slots(grammar)
     _check_reachability(grammar)
+    _check_zero_cycles(grammar)
     _check_constraints(grammar)
     _check_rules(grammar)
     _check_stem_rules(grammar)
@@ -178,6 +179,42 @@ def _check_reachability(g: m.Grammar) -> None:
                 slot.pos,
                 "list it after a class's '->' or in another slot's followers, or delete it",
             )
+
+
+def _check_zero_cycles(g: m.Grammar) -> None:
+    """A cycle of zero morphs in the slot graph would give every word infinitely many analyses (the
+    analyzer could loop through it without reading a letter): a located error at its first affix."""
+    edges: dict[str, list[tuple[m.Affix, str]]] = {}
+    for slot in g.slots.values():
+        for affix in slot.affixes:
+            if not affix.form:
+                for target in affix.next if affix.next is not None else slot.next:
+                    if target != m.END_SLOT and target in g.slots:
+                        edges.setdefault(slot.name, []).append((affix, target))
+    state: dict[str, int] = {}  # 1: on the current path, 2: done
+    path: list[tuple[str, m.Affix]] = []
+
+    def visit(name: str) -> None:
+        state[name] = 1
+        for affix, target in edges.get(name, []):
+            path.append((name, affix))
+            if state.get(target) == 1:
+                cycle = path[next(i for i, (n, _) in enumerate(path) if n == target) :]
+                first = cycle[0][1]
+                route = " -> ".join(n for n, _ in cycle) + f" -> {target}"
+                raise _err(
+                    f"a cycle of zero morphs in the slot graph: {route}",
+                    first.pos,
+                    "a word could pass through these slots forever without a letter; give one of these affixes a form, or end the cycle",
+                )
+            if state.get(target) is None:
+                visit(target)
+            path.pop()
+        state[name] = 2
+
+    for name in g.slots:
+        if state.get(name) is None:
+            visit(name)
 
 
 def _check_constraints(g: m.Grammar) -> None:

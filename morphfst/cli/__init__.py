@@ -75,6 +75,21 @@ def main(argv: Sequence[str] | None = None) -> int:
         devnull = os.open(os.devnull, os.O_WRONLY)
         os.dup2(devnull, sys.stdout.fileno())
         return 0
+    except OSError as exc:
+        # a failed write or read outside the commands' own checks (standard output on a full disk, ...)
+        _quiet_stdout()
+        where = f"{exc.filename}: " if exc.filename else ""
+        sys.stderr.write(f"{where}error: {exc.strerror or exc}\n")
+        return EXIT_USER_ERROR
+
+
+def _quiet_stdout() -> None:
+    """Drop what is still buffered for standard output (its flush at exit would fail the same way)."""
+    try:
+        devnull = os.open(os.devnull, os.O_WRONLY)
+        os.dup2(devnull, sys.stdout.fileno())
+    except (OSError, ValueError):
+        pass
 
 
 def entry_point() -> None:

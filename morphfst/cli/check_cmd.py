@@ -12,7 +12,7 @@ from ..debug.testing import TEST_SUFFIX, read_test_file, render_report, run_test
 
 EXAMPLES = f"""examples:
   morphfst check                                  the inline tests of the default grammar (tur)
-  morphfst check -l grammars/tur.mfg tests/tur{TEST_SUFFIX}
+  morphfst check -l grammars/tur.mfg tests/grammar/tur_core{TEST_SUFFIX}
   morphfst check tests/grammar/                   every *{TEST_SUFFIX} file of a directory (grammar named in the files)
   morphfst check --diagnose --strict-coverage     say why failing words are rejected; fail when a rule never fires
   morphfst check -f json > report.json            the whole report as JSON

@@ -21,7 +21,9 @@ def add_language(parser: argparse.ArgumentParser) -> None:
         "--lang",
         default="tur",
         metavar="LANG",
-        help="shipped grammar name, grammar file (.mfg) or compiled file (.mfc); default: tur",
+        help="a shipped language (tur, fin: always the grammar shipped with morphfst), or the path of a grammar "
+        "(.mfg) or compiled file (.mfc, loaded as it is); names not shipped are also looked up in the folders "
+        "of $MORPHFST_GRAMMARS, and the file used is then printed; default: tur",
     )
 
 
@@ -45,6 +47,11 @@ def add_format(parser: argparse.ArgumentParser) -> None:
 
 
 def open_language(args: argparse.Namespace) -> Language:
+    from ..build import find_grammar, shipped_names
+
+    name = str(args.lang)
+    if name not in shipped_names() and "/" not in name and not name.endswith((".mfg", ".mfc")):
+        sys.stderr.write(f"note: language {name!r} is {find_grammar(name)} (from $MORPHFST_GRAMMARS)\n")
     return load(args.lang, recompile=getattr(args, "recompile", False))
 
 
@@ -64,7 +71,7 @@ def words_from(args: argparse.Namespace, stats: ReadStats) -> Iterator[str]:
         yield from args.words
         return
     for line in input_lines(args, stats):
-        yield from line.split()
+        yield from line.replace("\x00", " ").split()  # a NUL separates words, as in segment and corpus
 
 
 def checked_word(word: str) -> str:

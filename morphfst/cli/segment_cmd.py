@@ -3,20 +3,28 @@
 from __future__ import annotations
 
 import argparse
+import contextlib
+import os
 import sys
+import unicodedata
 from collections import Counter
-from typing import TextIO
+from collections.abc import Iterator
+from typing import BinaryIO, TextIO
 
+from ..corpus.progress import Progress
+from ..corpus.reading import CHUNK_BYTES, MAX_LINE_BYTES, Chunk, chunks, read_blocks
+from ..corpus.records import decode
 from ..results import Segmentation
-from ..textio import ReadStats
+from ..runtime import Language
+from ..textio import ReadStats, open_binary
 from ..tokenize import Tokenizer, split_line
-from .common import Aligned, add_input, add_language, input_lines, open_language, report_stats, shorten, tsv_field, write_json
+from .common import Aligned, add_input, add_language, open_language, report_stats, shorten, tsv_field, write_json
 
 EXAMPLES = """examples:
   morphfst segment evlerinden kitapçılar          words given on the command line
-  morphfst segment -i demo/tur.txt                a text: same lines, words split into morphs
-  morphfst segment -i demo/tur.txt --sep ' +'     morphs as separate terms for an indexer
-  morphfst segment -i demo/tur.txt -f jsonl       one JSON object per token, all segmentations
+  morphfst segment -i demo/tur_library.txt        a text: same lines, words split into morphs
+  morphfst segment -i demo/tur_library.txt --sep ' +'  morphs as separate terms for an indexer
+  morphfst segment -i demo/tur_library.txt -f jsonl  one JSON object per token, all segmentations
 """
 
 
@@ -114,21 +122,75 @@ def run(args: argparse.Namespace) -> int:
     else:
         if args.format == "tsv":
             out.write("line\tword\tsegmentation\tgloss\tlemma\n")
-        for number, line in enumerate(input_lines(args, stats), start=1):
-            pieces = []
-            for text, is_word in split_line(line, tokenizer):
-                if not is_word:
-                    pieces.append(text)
-                    continue
-                segs = lang.segment(text)
-                coverage.add(text, len(segs))
-                _emit_token(args, out, number, text, segs, pieces)
-            if args.format == "text":
-                out.write("".join(pieces) + "\n")
+        _segment_text(args, lang, tokenizer, coverage, stats, out)
     if not args.no_summary:
         sys.stderr.write(coverage.summary())
     report_stats(stats)
     return 0
+
+
+CACHE_TYPES = 200_000  # word types whose segmentations are kept (the cache is emptied when full)
+
+
+def _segment_text(
+    args: argparse.Namespace, lang: Language, tokenizer: Tokenizer, coverage: Coverage, stats: ReadStats, out: TextIO
+) -> None:
+    """Segment a text with the corpus pipeline's streaming path: chunks of whole lines read in binary
+    (overlong lines cut at white space, constant memory), a cache per word type, and a progress bar on
+    standard error when it is a terminal."""
+    handle = open_binary(args.input)
+    size = None
+    if handle is not sys.stdin.buffer:
+        with contextlib.suppress(OSError):
+            size = os.fstat(handle.fileno()).st_size
+    progress = Progress(size, quiet=args.no_summary)
+    cache: dict[str, list[Segmentation]] = {}
+    try:
+        for chunk in _chunks_of(handle):
+            text, replaced = decode(chunk.data)
+            stats.bytes += len(chunk.data)
+            stats.replaced_bytes += replaced
+            stats.nul_bytes += chunk.data.count(b"\x00")
+            lines = text.split("\n")
+            ended = text.endswith("\n")
+            if ended:
+                lines.pop()
+            tokens = 0
+            for i, raw_line in enumerate(lines):
+                last = i == len(lines) - 1
+                line_end = not (last and chunk.continues)
+                if line_end:
+                    stats.lines += 1
+                line = unicodedata.normalize("NFC", raw_line[:-1] if raw_line.endswith("\r") and line_end else raw_line)
+                pieces: list[str] = []
+                for piece, is_word in split_line(line, tokenizer):
+                    if not is_word:
+                        pieces.append(piece)
+                        continue
+                    segs = cache.get(piece)
+                    if segs is None:
+                        if len(cache) >= CACHE_TYPES:
+                            cache.clear()
+                        segs = cache[piece] = lang.segment(piece)
+                    coverage.add(piece, len(segs))
+                    tokens += 1
+                    _emit_token(args, out, chunk.first_line + i, piece, segs, pieces)
+                if args.format == "text":
+                    out.write("".join(pieces) + ("\n" if line_end else ""))
+            progress.update(len(chunk.data), tokens)
+    finally:
+        progress.close()
+        if handle is not sys.stdin.buffer:
+            handle.close()
+
+
+def _chunks_of(handle: BinaryIO) -> Iterator[Chunk]:
+    """Chunks of whole lines; one line at a time when a person types at a terminal."""
+    if handle is sys.stdin.buffer and sys.stdin.isatty():
+        for index, raw in enumerate(iter(handle.readline, b"")):
+            yield Chunk(index, index + 1, raw)
+        return
+    yield from chunks(read_blocks(handle), 1, CHUNK_BYTES, MAX_LINE_BYTES)
 
 
 def _emit_token(

@@ -13,7 +13,9 @@ a worker that dies (killed, out of memory, crashed) closes it, and the main proc
 from __future__ import annotations
 
 import multiprocessing as mp
+import os
 import sys
+import time
 import traceback
 from collections import deque
 from collections.abc import Callable, Iterator
@@ -69,8 +71,36 @@ def source_chunks(source: Source, options: Options) -> Iterator[Chunk]:
         yield from chunks(read_blocks(handle, block=options.chunk_bytes), 1, options.chunk_bytes, options.max_line_bytes)
 
 
-def _worker_main(path: str, options: Options, processor_class: type[ChunkProcessor], tasks: Any, results: Any) -> None:
+def _end_with_parent(parent: int) -> None:
+    """Make this worker end when the process that started it dies (even by SIGKILL): the kernel's
+    parent-death signal on Linux, and a thread that watches the parent's id everywhere."""
+    import ctypes
+    import signal
+    import threading
+
+    try:
+        libc = ctypes.CDLL(None, use_errno=True)
+        libc.prctl(1, int(signal.SIGKILL), 0, 0, 0)  # PR_SET_PDEATHSIG
+    except (OSError, AttributeError):
+        pass
+
+    def watch() -> None:
+        while True:
+            if os.getppid() != parent:
+                os._exit(1)
+            time.sleep(0.5)
+
+    if os.getppid() != parent:
+        os._exit(1)
+    threading.Thread(target=watch, name="morphfst-parent-watch", daemon=True).start()
+
+
+def _worker_main(
+    path: str, options: Options, processor_class: type[ChunkProcessor], tasks: Any, results: Any, parent: int = 0
+) -> None:
     """A worker process: load the compiled language once, then process chunks until told to stop."""
+    if parent:
+        _end_with_parent(parent)
     try:
         processor = processor_class(load_compiled(path), options)
     except BaseException:
@@ -111,7 +141,9 @@ class Workers:
         for _ in range(jobs):
             tasks = ctx.Queue()
             reader, writer = ctx.Pipe(duplex=False)
-            proc = ctx.Process(target=_worker_main, args=(path, options, processor_class, tasks, writer), daemon=True)
+            proc = ctx.Process(
+                target=_worker_main, args=(path, options, processor_class, tasks, writer, os.getpid()), daemon=True
+            )
             proc.start()
             writer.close()  # only the worker holds the write end: its death closes the pipe
             self.procs.append(proc)

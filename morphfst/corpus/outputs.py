@@ -1,8 +1,10 @@
 """Output files that never look whole before they are: written to a temporary name, renamed when complete.
 
-The temporary file sits beside the final one, named ``.<name>.<random>.part``; if the run fails or
-is interrupted it is removed, and if the process is killed outright only that hidden ``.part`` file
-remains, never a file with the final name.
+The temporary file sits beside the final one, named ``.<name>.<pid>-<random>.part``; if the run fails
+or is interrupted it is removed, and if the process is killed outright only that hidden ``.part`` file
+remains, never a file with the final name; the next run writing the same output removes it
+(:func:`morphfst.atomic.clean_stale_parts`). A failed write (a full disk, a read-only file system) is
+one :class:`UserError` and leaves nothing behind.
 """
 
 from __future__ import annotations
@@ -10,15 +12,13 @@ from __future__ import annotations
 import contextlib
 import os
 import sys
-import tempfile
 from collections.abc import Iterator
 from pathlib import Path
 from typing import BinaryIO, TextIO
 
-from ..atomic import publish
-from ..errors import Position, UserError
+from ..atomic import PART_SUFFIX, create_temp, discard, publish, write_error
 
-PART_SUFFIX = ".part"
+__all__ = ["PART_SUFFIX", "AtomicFile", "StdoutSink", "atomic_text", "open_sink"]
 
 
 class AtomicFile:
@@ -26,33 +26,37 @@ class AtomicFile:
 
     def __init__(self, path: str | Path) -> None:
         self.path = Path(path)
-        try:
-            self.path.parent.mkdir(parents=True, exist_ok=True)
-            fd, tmp = tempfile.mkstemp(prefix=f".{self.path.name}.", suffix=PART_SUFFIX, dir=self.path.parent)
-        except OSError as exc:
-            raise UserError(
-                f"cannot write output: {exc.strerror or exc}", Position(str(self.path)), hint="check the output path"
-            ) from None
-        self.tmp = Path(tmp)
+        fd, self.tmp = create_temp(self.path)
         self.handle: BinaryIO = os.fdopen(fd, "wb", buffering=1024 * 1024)
         self.done = False
 
     def write(self, data: bytes) -> None:
-        self.handle.write(data)
+        try:
+            self.handle.write(data)
+        except OSError as exc:
+            self.abort()
+            raise write_error(exc, self.path) from None
 
     def commit(self) -> Path:
-        self.handle.flush()
-        os.fsync(self.handle.fileno())
-        self.handle.close()
-        publish(self.tmp, self.path)
+        try:
+            self.handle.flush()
+            os.fsync(self.handle.fileno())
+            self.handle.close()
+            publish(self.tmp, self.path)
+        except OSError as exc:
+            self.abort()
+            raise write_error(exc, self.path) from None
+        except BaseException:
+            self.abort()
+            raise
         self.done = True
         return self.path
 
     def abort(self) -> None:
         if not self.done:
-            with contextlib.suppress(OSError):
+            with contextlib.suppress(OSError, ValueError):
                 self.handle.close()
-            self.tmp.unlink(missing_ok=True)
+            discard(self.tmp)
             self.done = True
 
 

@@ -103,7 +103,15 @@ def compiled_file(lang: Language, directory: str | Path | None = None) -> str:
     import shutil
     import tempfile
 
-    folder = tempfile.mkdtemp(prefix="morphfst-", dir=directory)
+    from ..atomic import pid_alive
+
+    # a run killed outright leaves its folder: remove those of processes that are gone (only ours)
+    base = Path(directory or tempfile.gettempdir())
+    for old in base.glob("morphfst-workers-*-*"):
+        pid = old.name.split("-")[2]
+        if pid.isdigit() and not pid_alive(int(pid)):
+            shutil.rmtree(old, ignore_errors=True)
+    folder = tempfile.mkdtemp(prefix=f"morphfst-workers-{os.getpid()}-", dir=directory)
     atexit.register(shutil.rmtree, folder, True)  # removed when this process ends
     target = Path(folder) / f"{lang.name}{SUFFIX}"
     save_archive(target, lang.fsts, lang.meta)

@@ -16,8 +16,8 @@ from dataclasses import asdict, dataclass, field
 from pathlib import Path
 from typing import Any
 
-from ..atomic import publish
-from ..errors import Position, UserError
+from ..atomic import write_bytes_atomic
+from ..errors import UserError
 from ..runtime import Language
 
 FORMATS = ("dot", "svg", "png")
@@ -206,16 +206,5 @@ def write_graph(lang: Any, output: str | Path, fmt: str | None = None, rankdir: 
     fmt = fmt or (output.suffix[1:].lower() if output.suffix[1:].lower() in FORMATS else "dot")
     text = slot_graph_dot(lang, rankdir)
     data = text.encode("utf-8") if fmt == "dot" else render(text, fmt)
-    tmp = output.with_name(output.name + ".part")
-    try:
-        tmp.write_bytes(data)
-        publish(tmp, output)
-    except OSError as exc:
-        tmp.unlink(missing_ok=True)
-        raise UserError(
-            f"cannot write output: {exc.strerror or exc}", Position(str(output)), hint="check the output path"
-        ) from None
-    except BaseException:
-        tmp.unlink(missing_ok=True)
-        raise
+    write_bytes_atomic(output, data)
     return output
