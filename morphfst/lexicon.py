@@ -1,7 +1,9 @@
 """Read lexicon files: UTF-8 TSV with a header line, ``#`` comments and blank lines.
 
 Columns (by header name, any order): ``lemma``, ``class``, ``pos``, ``gloss`` (required) and
-``weight``, ``count``, ``stem``, ``flags`` (optional). A count becomes a tropical weight
+``weight``, ``count``, ``stem``, ``flags`` (optional). The evidence columns that ``morphfst harvest``
+writes after them (``score``, ``attested``, ``tokens``, ``examples``, ``runner_up``) are accepted and
+ignored, so a reviewed harvest file can be placed among the lexicon files as it is. A count becomes a tropical weight
 ``-ln(count / total)`` over the entries that give counts; an explicit weight is used as it is.
 """
 
@@ -18,6 +20,7 @@ from .syntax import parse_form
 
 REQUIRED = ("lemma", "class", "pos", "gloss")
 OPTIONAL = ("weight", "count", "stem", "flags")
+EVIDENCE = ("score", "attested", "tokens", "examples", "runner_up")  # written by morphfst harvest; ignored here
 
 
 def lexicon_files(grammar: m.Grammar) -> list[Path]:
@@ -82,7 +85,7 @@ def _read_file(path: Path, grammar: m.Grammar, fold: Callable[[str], str]) -> li
     except UnicodeDecodeError as exc:
         bad_line = raw[: exc.start].count(b"\n") + 1
         raise UserError("lexicon file is not valid UTF-8", Position(str(path), bad_line), hint="save it as UTF-8") from None
-    text = unicodedata.normalize("NFC", text)
+    text = unicodedata.normalize("NFC", text.removeprefix("\ufeff"))  # a byte-order mark from an editor
     header: list[str] | None = None
     out: list[tuple[m.LexEntry, float | None]] = []
     for number, line in enumerate(text.splitlines(), start=1):
@@ -92,7 +95,7 @@ def _read_file(path: Path, grammar: m.Grammar, fold: Callable[[str], str]) -> li
         if header is None:
             header = [f.strip().lower() for f in fields]
             for name in header:
-                if name not in REQUIRED + OPTIONAL:
+                if name not in REQUIRED + OPTIONAL + EVIDENCE:
                     raise UserError(
                         f"unknown column {name!r} in the header",
                         Position(str(path), number, _column(line, header.index(name))),
@@ -144,6 +147,8 @@ def _entry(
     lemma = row["lemma"]
     if not lemma:
         raise fail("lemma", "empty lemma", "every line needs a lemma in the first column")
+    if not row["gloss"]:
+        raise fail("gloss", "empty gloss", "every line needs an English gloss (it is shown in Leipzig glosses)")
     klass = row["class"]
     if klass not in grammar.classes:
         near = _nearest(klass, list(grammar.classes))
