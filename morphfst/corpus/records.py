@@ -14,8 +14,9 @@ Output modes (one record per input token, line structure kept):
     by the affix morphs with a leading ``+`` (``kitap +lar +da``); a token is thus a term without
     ``+`` and its morphs. Punctuation is dropped.
 ``jsonl``
-    one JSON object per input line: ``{"line": N, "tokens": [...]}``, each token with its text, start
-    offset (in the decoded, NFC-normalized line), status and every ranked analysis.
+    one JSON object per input line: ``{"line": N, "tokens": [...]}``, each token with its text, its
+    offsets in the decoded, NFC-normalized line (``start`` and ``end`` in characters, ``start_byte``
+    and ``end_byte`` in UTF-8 bytes; ends are exclusive), status and every ranked analysis.
 ``conllu``
     CoNLL-U (Universal Dependencies v2): sentences split at ``. ! ? …`` and at line ends, LEMMA,
     UPOS, XPOS (the grammar's part of speech) and FEATS (the grammar's UD mapping); punctuation rows
@@ -396,9 +397,18 @@ class ChunkProcessor:
             number = chunk.first_line + offset
             part = chunk.part if offset == 0 else 0
             items = []
+            ascii_line = line.isascii()
+            char_at = byte_at = 0  # byte offsets counted incrementally from the previous token
             for start, tok in spans(line):
                 every.append(tok)
-                items.append(f'{{{get(tok) or miss(tok)},"start":{start}}}')
+                end = start + len(tok)
+                if ascii_line:
+                    bstart, bend = start, end
+                else:
+                    bstart = byte_at + len(line[char_at:start].encode("utf-8"))
+                    bend = bstart + len(tok.encode("utf-8"))
+                    char_at, byte_at = end, bend
+                items.append(f'{{{get(tok) or miss(tok)},"start":{start},"end":{end},"start_byte":{bstart},"end_byte":{bend}}}')
             head = f'{{"line":{number},"part":{part},' if part else f'{{"line":{number},'
             out.append(f'{head}"tokens":[{",".join(items)}]}}\n')
         return "".join(out), every
