@@ -1,0 +1,362 @@
+"""The Finnish grammar (grammars/fin.mfg) against handbook paradigms.
+
+Sources for the expected forms: Karlsson, F., Finnish: An Essential Grammar (3rd ed., Routledge, 2018),
+the chapters on consonant gradation, noun inflection (the cases, the plural, stem types), the
+possessive suffixes, the comparison of adjectives, pronouns, and the verb (present, past,
+conditional, potential, imperative, passive, negation, infinitives and participles); the inflection
+types follow the numbered types of the standard word list of the Institute for the Languages of
+Finland (Kotus). Every value below was written from memory of those tables, not copied from the
+book; checks that rest on no single source say "common practice". The grammar is compiled once per
+test session (the ``fin`` fixture of conftest.py).
+"""
+
+from __future__ import annotations
+
+import pytest
+
+import morphfst
+
+KARLSSON = "Karlsson, Finnish: An Essential Grammar (3rd ed., 2018)"
+
+CASES = ["NOM", "GEN", "PRT", "ESS", "TRANS", "IN+ESS", "IN+ABL", "IN+ALL", "AT+ESS", "AT+ABL", "AT+ALL"]
+
+
+def table(lemma: str, number: str, forms: str, pos: str = "N") -> list[tuple[str, str, str]]:
+    """One number of a nominal paradigm, the eleven forms in the order of CASES."""
+    words = forms.split()
+    assert len(words) == len(CASES)
+    return [(lemma, f"{pos};{number};{case}", word) for case, word in zip(CASES, words)]
+
+
+def cells(lemma: str, pos: str, pairs: str) -> list[tuple[str, str, str]]:
+    """Cells written as 'FEATURES=form FEATURES=form ...'."""
+    out = []
+    for pair in pairs.split():
+        feats, form = pair.split("=")
+        out.append((lemma, f"{pos};{feats}", form))
+    return out
+
+
+# Complete nominal paradigms, cases in the order NOM GEN PRT ESS TRANS INE ELA ILL ADE ABL ALL; the
+# first form generated (the usual one) must be the handbook's.
+PARADIGMS = (
+    # Karlsson (3rd ed., 2018), noun inflection, o-stem without gradation (type 1) — from memory
+    table("talo", "SG", "talo talon taloa talona taloksi talossa talosta taloon talolla talolta talolle")
+    + table("talo", "PL", "talot talojen taloja taloina taloiksi taloissa taloista taloihin taloilla taloilta taloille")
+    # Karlsson (3rd ed., 2018), consonant gradation t : d (type 1F) — from memory
+    + table("katu", "SG", "katu kadun katua katuna kaduksi kadussa kadusta katuun kadulla kadulta kadulle")
+    + table("katu", "PL", "kadut katujen katuja katuina kaduiksi kaduissa kaduista katuihin kaduilla kaduilta kaduille")
+    # Karlsson (3rd ed., 2018), gradating a-stem kk : k with a dropping before the plural i (type 9A) — from memory
+    + table("kukka", "SG", "kukka kukan kukkaa kukkana kukaksi kukassa kukasta kukkaan kukalla kukalta kukalle")
+    + table("kukka", "PL", "kukat kukkien kukkia kukkina kukiksi kukissa kukista kukkiin kukilla kukilta kukille")
+    # Karlsson (3rd ed., 2018), gradation pp : p and the plural a : o (type 9B) — from memory
+    + table("kauppa", "SG", "kauppa kaupan kauppaa kauppana kaupaksi kaupassa kaupasta kauppaan kaupalla kaupalta kaupalle")
+    + table(
+        "kauppa",
+        "PL",
+        "kaupat kauppojen kauppoja kauppoina kaupoiksi kaupoissa kaupoista kauppoihin kaupoilla kaupoilta kaupoille",
+    )
+    # Karlsson (3rd ed., 2018), e-stems: kivi : kive- (type 7) — from memory
+    + table("kivi", "SG", "kivi kiven kiveä kivenä kiveksi kivessä kivestä kiveen kivellä kiveltä kivelle")
+    + table("kivi", "PL", "kivet kivien kiviä kivinä kiviksi kivissä kivistä kiviin kivillä kiviltä kiville")
+    # Karlsson (3rd ed., 2018), two-syllable i-stem: i becomes e before the plural i (type 5) — from memory
+    + table("risti", "SG", "risti ristin ristiä ristinä ristiksi ristissä rististä ristiin ristillä ristiltä ristille")
+    + table(
+        "risti", "PL", "ristit ristien ristejä risteinä risteiksi risteissä risteistä risteihin risteillä risteiltä risteille"
+    )
+    # Karlsson (3rd ed., 2018), the käsi type: käsi : käde- : kät- : käs- (type 27) — from memory
+    + table("käsi", "SG", "käsi käden kättä kätenä kädeksi kädessä kädestä käteen kädellä kädeltä kädelle")
+    + table("käsi", "PL", "kädet käsien käsiä käsinä käsiksi käsissä käsistä käsiin käsillä käsiltä käsille")
+    # Karlsson (3rd ed., 2018), nouns in -nen: nainen : naise- : nais- (type 38) — from memory
+    + table("nainen", "SG", "nainen naisen naista naisena naiseksi naisessa naisesta naiseen naisella naiselta naiselle")
+    + table("nainen", "PL", "naiset naisten naisia naisina naisiksi naisissa naisista naisiin naisilla naisilta naisille")
+    # Karlsson (3rd ed., 2018), nouns in -us/-ys with t : d and the plural -uksi- (type 40) — from memory
+    + table(
+        "vapaus",
+        "SG",
+        "vapaus vapauden vapautta vapautena vapaudeksi vapaudessa vapaudesta vapauteen vapaudella vapaudelta vapaudelle",
+    )
+    + table(
+        "vapaus",
+        "PL",
+        "vapaudet vapauksien vapauksia vapauksina vapauksiksi vapauksissa vapauksista vapauksiin vapauksilla vapauksilta vapauksille",
+    )
+    # Karlsson (3rd ed., 2018), nouns in -as with a long vowel stem and inverted gradation ng : nk (type 41G) — from memory
+    + table(
+        "rengas", "SG", "rengas renkaan rengasta renkaana renkaaksi renkaassa renkaasta renkaaseen renkaalla renkaalta renkaalle"
+    )
+    + table(
+        "rengas",
+        "PL",
+        "renkaat renkaiden renkaita renkaina renkaiksi renkaissa renkaista renkaisiin renkailla renkailta renkaille",
+    )
+    # Karlsson (3rd ed., 2018), three-syllable a-stem with its two plural genitives (type 11): omenoiden
+    # is the usual one, omenien the other — from memory
+    + table("omena", "SG", "omena omenan omenaa omenana omenaksi omenassa omenasta omenaan omenalla omenalta omenalle")
+    + table(
+        "omena", "PL", "omenat omenoiden omenoita omenoina omenoiksi omenoissa omenoista omenoihin omenoilla omenoilta omenoille"
+    )
+    # Karlsson (3rd ed., 2018), nouns in -e with a latent consonant and inverted gradation t : d (type 48F) — from memory
+    + table("sade", "SG", "sade sateen sadetta sateena sateeksi sateessa sateesta sateeseen sateella sateelta sateelle")
+    + table("sade", "PL", "sateet sateiden sateita sateina sateiksi sateissa sateista sateisiin sateilla sateilta sateille")
+    # Karlsson (3rd ed., 2018), one-syllable long vowels; illative -hVn, partitive -tA (type 18) — from memory
+    + table("maa", "SG", "maa maan maata maana maaksi maassa maasta maahan maalla maalta maalle")
+    + table("maa", "PL", "maat maiden maita maina maiksi maissa maista maihin mailla mailta maille")
+    # Karlsson (3rd ed., 2018), the personal pronouns, minä with the accusative minut — from memory
+    + table("minä", "SG", "minä minun minua minuna minuksi minussa minusta minuun minulla minulta minulle", pos="PRON")
+    + [("minä", "PRON;SG;ACC", "minut")]
+    # Karlsson (3rd ed., 2018), the demonstrative pronouns, se : ne — from memory
+    + table("se", "SG", "se sen sitä sinä siksi siinä siitä siihen sillä siltä sille", pos="PRON")
+    + table("se", "PL", "ne niiden niitä niinä niiksi niissä niistä niihin niillä niiltä niille", pos="PRON")
+)
+
+# Verb paradigms of five types: present, past, conditional, imperative, passive, infinitives,
+# participles and the connegative (the form after en, et, ei ...).
+FINITE = "IND;PRS;1;SG={} IND;PRS;2;SG={} IND;PRS;3;SG={} IND;PRS;1;PL={} IND;PRS;2;PL={} IND;PRS;3;PL={}"
+VERBS = (
+    # Karlsson (3rd ed., 2018), verb type 1 (Kotus 52), sanoa — from memory
+    cells("sanoa", "V", FINITE.format("sanon", "sanot", "sanoo", "sanomme", "sanotte", "sanovat"))
+    + cells(
+        "sanoa",
+        "V",
+        "NFIN=sanoa IND;PST;1;SG=sanoin IND;PST;3;SG=sanoi COND;3;SG=sanoisi POT;3;SG=sanonee IMP;2;SG=sano "
+        "IMP;2;PL=sanokaa IMP;3;SG=sanokoon IND;PRS;NEG=sano IMP;NEG=sanoko PASS;IND;PRS=sanotaan "
+        "PASS;IND;PST=sanottiin PASS;COND=sanottaisiin PASS;IND;PRS;NEG=sanota NFIN;INF2;IN+ESS=sanoessa "
+        "NFIN;INF3;IN+ESS=sanomassa V.PTCP;ACT;PRS;ADJ;SG;NOM=sanova V.PTCP;ACT;PST;ADJ;SG;NOM=sanonut "
+        "V.PTCP;PASS;PST;ADJ;SG;NOM=sanottu V.PTCP;PASS;PRS;ADJ;SG;NOM=sanottava",
+    )
+    # Karlsson (3rd ed., 2018), verb type 1 with gradation tt : t and the past a : ∅ (Kotus 53C), ottaa — from memory
+    + cells("ottaa", "V", FINITE.format("otan", "otat", "ottaa", "otamme", "otatte", "ottavat"))
+    + cells(
+        "ottaa",
+        "V",
+        "IND;PST;1;SG=otin IND;PST;3;SG=otti COND;1;SG=ottaisin IMP;2;SG=ota IMP;2;PL=ottakaa IND;PRS;NEG=ota "
+        "PASS;IND;PRS=otetaan PASS;IND;PST=otettiin V.PTCP;ACT;PST;ADJ;SG;NOM=ottanut V.PTCP;PASS;PST;ADJ;SG;NOM=otettu",
+    )
+    # Karlsson (3rd ed., 2018), verb type 1 with e-stem and gradation k : ∅ (Kotus 58D), lukea — from memory
+    + cells("lukea", "V", FINITE.format("luen", "luet", "lukee", "luemme", "luette", "lukevat"))
+    + cells("lukea", "V", "IND;PST;1;SG=luin IND;PST;3;SG=luki PASS;IND;PRS=luetaan NFIN;INF2;IN+ESS=lukiessa")
+    # Karlsson (3rd ed., 2018), verb type 3, consonant stem (Kotus 67), tulla — from memory
+    + cells("tulla", "V", FINITE.format("tulen", "tulet", "tulee", "tulemme", "tulette", "tulevat"))
+    + cells(
+        "tulla",
+        "V",
+        "NFIN=tulla IND;PST;3;SG=tuli COND;3;SG=tulisi POT;3;SG=tullee IMP;2;SG=tule IMP;2;PL=tulkaa "
+        "IND;PRS;NEG=tule IMP;NEG=tulko PASS;IND;PRS=tullaan PASS;IND;PST=tultiin PASS;IND;PRS;NEG=tulla "
+        "NFIN;INF2;IN+ESS=tullessa NFIN;INF3;IN+ESS=tulemassa V.PTCP;ACT;PST;ADJ;SG;NOM=tullut "
+        "V.PTCP;ACT;PST;ADJ;PL;NOM=tulleet V.PTCP;PASS;PST;ADJ;SG;NOM=tultu",
+    )
+    # Karlsson (3rd ed., 2018), verb type 3, juosta : juokse- (Kotus 70) — from memory
+    + cells("juosta", "V", FINITE.format("juoksen", "juokset", "juoksee", "juoksemme", "juoksette", "juoksevat"))
+    + cells(
+        "juosta",
+        "V",
+        "NFIN=juosta IND;PST;3;SG=juoksi PASS;IND;PRS=juostaan PASS;IND;PST=juostiin "
+        "V.PTCP;ACT;PST;ADJ;SG;NOM=juossut IMP;2;PL=juoskaa",
+    )
+    # Karlsson (3rd ed., 2018), verb type 4, salata : salaa- (Kotus 73) and hypätä with pp : p — from memory
+    + cells("salata", "V", FINITE.format("salaan", "salaat", "salaa", "salaamme", "salaatte", "salaavat"))
+    + cells(
+        "salata",
+        "V",
+        "NFIN=salata IND;PST;3;SG=salasi COND;3;SG=salaisi PASS;IND;PRS=salataan PASS;IND;PST=salattiin "
+        "V.PTCP;ACT;PST;ADJ;SG;NOM=salannut",
+    )
+    + cells("hypätä", "V", "IND;PRS;1;SG=hyppään NFIN=hypätä IND;PST;3;SG=hyppäsi PASS;IND;PRS=hypätään")
+    # Karlsson (3rd ed., 2018), verb type 5, valita : valitse- (Kotus 69) — from memory
+    + cells(
+        "valita",
+        "V",
+        "IND;PRS;1;SG=valitsen IND;PST;3;SG=valitsi NFIN=valita PASS;IND;PST=valittiin V.PTCP;ACT;PST;ADJ;SG;NOM=valinnut",
+    )
+    # Karlsson (3rd ed., 2018), the irregular nähdä and tehdä (Kotus 71) — from memory
+    + cells(
+        "nähdä",
+        "V",
+        "IND;PRS;1;SG=näen IND;PRS;3;SG=näkee IND;PST;1;SG=näin PASS;IND;PRS=nähdään V.PTCP;ACT;PST;ADJ;SG;NOM=nähnyt",
+    )
+    # Karlsson (3rd ed., 2018), monosyllabic stems (Kotus 62-64) — from memory
+    + cells("saada", "V", "IND;PRS;1;SG=saan IND;PRS;3;SG=saa IND;PST;1;SG=sain COND;3;SG=saisi PASS;IND;PST=saatiin")
+    + cells("juoda", "V", "IND;PST;3;SG=joi PASS;IND;PRS=juodaan")
+    # Karlsson (3rd ed., 2018), the past tense with t : s (tietää, tuntea) — from memory
+    + cells("tietää", "V", "IND;PST;1;SG=tiesin IND;PRS;1;SG=tiedän")
+    + cells("tuntea", "V", "IND;PST;3;SG=tunsi IND;PRS;1;SG=tunnen")
+)
+
+# Single cells of the other stem types.
+CELLS = [
+    # Karlsson (3rd ed., 2018), nominal stem types — from memory
+    ("ovi", "N;PL;PRT", "ovia"),
+    ("tiili", "N;SG;PRT", "tiiltä"),
+    ("toimi", "N;SG;PRT", "tointa"),
+    ("lapsi", "N;SG;PRT", "lasta"),
+    ("lapsi", "N;PL;GEN", "lasten"),
+    ("veitsi", "N;SG;PRT", "veistä"),
+    ("kynsi", "N;SG;GEN", "kynnen"),
+    ("sisar", "N;SG;GEN", "sisaren"),
+    ("tytär", "N;SG;GEN", "tyttären"),
+    ("tytär", "N;SG;PRT", "tytärtä"),
+    ("kytkin", "N;SG;GEN", "kytkimen"),
+    ("onneton", "ADJ;SG;GEN", "onnettoman"),
+    ("lämmin", "ADJ;SG;GEN", "lämpimän"),
+    ("lämmin", "ADJ;SG;PRT", "lämmintä"),
+    ("vasen", "ADJ;SG;GEN", "vasemman"),
+    ("vastaus", "N;SG;GEN", "vastauksen"),
+    ("vastaus", "N;PL;PRT", "vastauksia"),
+    ("vieras", "N;SG;IN+ALL", "vieraaseen"),
+    ("hammas", "N;SG;GEN", "hampaan"),
+    ("mies", "N;SG;GEN", "miehen"),
+    ("mies", "N;PL;GEN", "miesten"),
+    ("ohut", "ADJ;SG;GEN", "ohuen"),
+    ("kevät", "N;SG;GEN", "kevään"),
+    ("kuollut", "ADJ;SG;GEN", "kuolleen"),
+    ("kuollut", "ADJ;PL;PRT", "kuolleita"),
+    ("askel", "N;SG;GEN", "askelen"),
+    ("huone", "N;SG;IN+ALL", "huoneeseen"),
+    ("vapaa", "ADJ;SG;IN+ALL", "vapaaseen"),
+    ("korkea", "ADJ;PL;PRT", "korkeita"),
+    ("laatikko", "N;PL;PRT", "laatikoita"),
+    ("paperi", "N;PL;PRT", "papereita"),
+    ("kulkija", "N;PL;PRT", "kulkijoita"),
+    ("palvelu", "N;PL;GEN", "palvelujen"),
+    ("valtio", "N;SG;PRT", "valtiota"),
+    ("jalka", "N;SG;GEN", "jalan"),
+    ("aika", "N;SG;GEN", "ajan"),
+    ("uusi", "ADJ;SG;GEN", "uuden"),
+    ("pieni", "ADJ;SG;PRT", "pientä"),
+    # Karlsson (3rd ed., 2018), numerals — from memory
+    ("kaksi", "NUM;SG;GEN", "kahden"),
+    ("kaksi", "NUM;SG;PRT", "kahta"),
+    ("tuhat", "NUM;SG;GEN", "tuhannen"),
+    ("kolmas", "NUM;SG;GEN", "kolmannen"),
+    ("kolmas", "NUM;SG;PRT", "kolmatta"),
+    # Karlsson (3rd ed., 2018), comparison of adjectives — from memory
+    ("iso", "ADJ;CMPR;SG;NOM", "isompi"),
+    ("iso", "ADJ;CMPR;SG;GEN", "isomman"),
+    ("iso", "ADJ;SPRL;SG;NOM", "isoin"),
+    ("iso", "ADJ;SPRL;SG;GEN", "isoimman"),
+    ("vanha", "ADJ;CMPR;SG;NOM", "vanhempi"),
+    ("vanha", "ADJ;SPRL;SG;NOM", "vanhin"),
+    ("pieni", "ADJ;CMPR;SG;NOM", "pienempi"),
+    # Karlsson (3rd ed., 2018), possessive suffixes — from memory
+    ("talo", "N;SG;IN+ESS;PSS1S", "talossani"),
+    ("talo", "N;SG;IN+ESS;PSS3S", "talossaan"),
+    ("talo", "N;SG;NOM;PSS3S", "talonsa"),
+    ("käsi", "N;SG;NOM;PSS1P", "kätemme"),
+    ("nainen", "N;SG;NOM;PSS1S", "naiseni"),
+    ("talo", "N;PL;COM;PSS3S", "taloineen"),
+    # Karlsson (3rd ed., 2018), the clitics — from memory
+    ("talo", "N;SG;NOM;KIN", "talokin"),
+    ("talo", "N;SG;IN+ESS;KAAN", "talossakaan"),
+    ("tulla", "V;IND;PRS;3;SG;KO", "tuleeko"),
+    ("tulla", "V;IND;PRS;3;SG;KO;HAN", "tuleekohan"),
+    # Karlsson (3rd ed., 2018), the negative verb — from memory
+    ("ei", "AUX;NEG;IND;1;SG", "en"),
+    ("ei", "AUX;NEG;IND;3;PL", "eivät"),
+    ("ei", "AUX;NEG;IMP;2;SG", "älä"),
+    ("ei", "AUX;NEG;IMP;2;PL", "älkää"),
+    ("ei", "AUX;NEG;IND;3;SG;KA", "eikä"),
+    ("olla", "V;IND;PRS;3;SG", "on"),
+    ("olla", "V;IND;PRS;3;PL", "ovat"),
+]
+
+ALL = PARADIGMS + VERBS + CELLS
+
+
+@pytest.mark.parametrize("lemma, features, surface", ALL)
+def test_generation_matches_the_handbook(fin: morphfst.Language, lemma: str, features: str, surface: str) -> None:
+    forms = [f.form for f in fin.generate(lemma, features)]
+    assert forms and forms[0] == surface, forms
+
+
+@pytest.mark.parametrize("lemma, features, surface", ALL)
+def test_analysis_matches_the_handbook(fin: morphfst.Language, lemma: str, features: str, surface: str) -> None:
+    assert f"{lemma} {features}" in [a.text for a in fin.analyze(surface)]
+
+
+# Karlsson (3rd ed., 2018), the plural genitive and partitive of longer stems — from memory: both
+# variants are standard, the usual one first
+VARIANTS = [
+    ("omena", "N;PL;GEN", ["omenoiden", "omenien"]),
+    ("omena", "N;PL;PRT", ["omenoita", "omenia"]),
+    ("laatikko", "N;PL;GEN", ["laatikoiden", "laatikkojen"]),
+    ("nainen", "N;PL;GEN", ["naisten", "naisien"]),
+    ("korkea", "ADJ;SG;PRT", ["korkeaa", "korkeata"]),
+    ("talo", "N;SG;IN+ESS;PSS3S", ["talossaan", "talossansa"]),
+]
+
+
+@pytest.mark.parametrize("lemma, features, expected", VARIANTS)
+def test_variants_are_ranked_usual_first(fin: morphfst.Language, lemma: str, features: str, expected: list[str]) -> None:
+    forms = [f.form for f in fin.generate(lemma, features)]
+    assert forms[: len(expected)] == expected
+
+
+# Wrong forms: gradation in the wrong syllable, broken harmony, wrong allomorph or stem.
+# Karlsson (3rd ed., 2018), gradation, harmony and stem-type chapters — from memory
+WRONG = [
+    "katussa",  # kadussa
+    "kadua",  # katua
+    "kaduun",  # katuun
+    "tyttössä",  # tytössä
+    "talossä",  # talossa
+    "kivissa",  # kivissä
+    "kivejä",  # kiviä
+    "kätessä",  # kädessä
+    "kätiä",  # käsiä
+    "kalaissa",  # kaloissa
+    "koiroja",  # koiria
+    "maaan",  # maahan
+    "huoneessen",  # huoneeseen
+    "talonni",  # taloni
+    "naisenen",  # naisen
+    "nainenta",  # naista
+    "vapausta",  # vapautta
+    "renkasta",  # rengasta
+    "rengaan",  # renkaan
+    "tytärän",  # tyttären
+    "sateta",  # sadetta
+    "ottan",  # otan
+    "oti",  # otti
+    "lukin",  # luin
+    "tiedin",  # tiesin
+    "tuletaan",  # tullaan
+    "juosen",  # juoksen
+    "näken",  # näen
+    "salatan",  # salaan
+    "otettaan",  # otetaan
+    "kysynut",  # kysynyt
+    "öihiin",  # öihin
+]
+
+
+@pytest.mark.parametrize("word", WRONG)
+def test_wrong_forms_are_rejected(fin: morphfst.Language, word: str) -> None:
+    assert fin.analyze(word) == []
+
+
+def test_stems_come_from_the_type(fin: morphfst.Language) -> None:
+    # common practice: the lexicon gives lemma and type; the stem rules write the underlying stem
+    stems = {e["lemma"]: e for e in fin.lexicon if e["pos"] in ("N", "ADJ", "V")}
+    assert stems["katu"]["class"] == "1F" and stems["nainen"]["class"] == "38"
+    best = fin.analyze("kaduissa")[0]
+    assert best.text == "katu N;PL;IN+ESS"
+    assert best.segmentation == "kadu-i-ssa"
+    assert best.gloss == "street-PL-INE"
+    assert best.ud_feats() == "Case=Ine|Number=Plur"
+
+
+def test_colon_before_suffixes_of_abbreviations_and_digits(fin: morphfst.Language) -> None:
+    # common practice (Finnish orthography): EU:n, EU:ssa, 5:tä
+    assert "EU PROPN;SG;GEN" in [a.text for a in fin.analyze("EU:n")]
+    assert "EU PROPN;SG;IN+ESS" in [a.text for a in fin.analyze("EU:ssa")]
+    assert "5 NUM;SG;PRT" in [a.text for a in fin.analyze("5:tä")]
+
+
+def test_the_ud_mapping_covers_every_label(fin: morphfst.Language) -> None:
+    # common practice: every feature label maps to UD v2 FEATS or UPOS
+    best = fin.analyze("talossanikin")[0]
+    assert best.text == "talo N;SG;IN+ESS;PSS1S;KIN"
+    feats = best.ud_feats()
+    assert "Case=Ine" in feats and "Person[psor]=1" in feats and "Clitic=Kin" in feats
+    assert fin.analyze("otettiin")[0].ud_feats() == "Mood=Ind|Tense=Past|Voice=Pass"
