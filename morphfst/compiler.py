@@ -268,8 +268,11 @@ class Compiler:
         return union(parts).closure().optimize()
 
     # ---- the whole ------------------------------------------------------------------------------------
-    def bounded(self, entries: list[m.LexEntry], progress: Callable[[str], None] | None = None) -> pynini.Fst:
-        """Internal analysis → bounded surface, for the given lexicon entries."""
+    def bounded(
+        self, entries: list[m.LexEntry], progress: Callable[[str], None] | None = None, lenient: bool = True
+    ) -> pynini.Fst:
+        """Internal analysis → bounded surface, for the given lexicon entries (without the ``lenient``
+        rules when ``lenient`` is False: the machine generation is made from)."""
         derive_stems(self.g, entries, self)
         groups: dict[frozenset[str], list[m.LexEntry]] = defaultdict(list)
         for e in entries:
@@ -292,7 +295,7 @@ class Compiler:
             if filt is not None:
                 fst = pynini.compose(filt, fst)
             for rule in self.g.rules:
-                if rule.name in blocked:
+                if rule.name in blocked or (rule.lenient and not lenient):
                     continue
                 if progress:
                     progress(rule.name)
@@ -306,9 +309,10 @@ class Compiler:
         timings: dict[str, float] = {}
         t0 = time.perf_counter()
         bounded = self.bounded(self.g.lexicon, progress)
+        strict = self.bounded(self.g.lexicon, progress, lenient=False) if any(r.lenient for r in self.g.rules) else None
         timings["lexicon_rules"] = time.perf_counter() - t0
         t1 = time.perf_counter()
-        fsts = self.derive(bounded)
+        fsts = self.derive(bounded, strict)
         timings["derive"] = time.perf_counter() - t1
         t2 = time.perf_counter()
         guesser = self.guesser()
@@ -317,13 +321,15 @@ class Compiler:
             timings["guesser"] = time.perf_counter() - t2
         return CompiledFsts(self.space, fsts, timings)
 
-    def derive(self, bounded: pynini.Fst) -> dict[str, pynini.Fst]:
-        """The four saved transducers from the bounded machine."""
+    def derive(self, bounded: pynini.Fst, strict: pynini.Fst | None = None) -> dict[str, pynini.Fst]:
+        """The four saved transducers from the bounded machine; the generator comes from ``strict``
+        (the machine without lenient rules) when there is one."""
         delete = self.delete_boundaries()
         gen_internal = pynini.compose(bounded, delete).optimize()
         analyzer = gen_internal.copy().invert().optimize()
         affix_labels = [(ord(c), 0) for c, k in self.space.kinds.items() if k == "affix"]
-        generator = gen_internal.copy().relabel_pairs(ipairs=affix_labels).optimize()
+        source = gen_internal if strict is None else pynini.compose(strict, delete).optimize()
+        generator = source.copy().relabel_pairs(ipairs=affix_labels).optimize()
         surfaces = bounded.copy().project("output").optimize()
         segmenter = pynini.compose(delete.copy().invert(), surfaces).optimize()
         bounded_analyzer = bounded.copy().invert().optimize()

@@ -16,15 +16,14 @@ from __future__ import annotations
 
 import os
 import sys
-import tempfile
 import time
 from collections.abc import Callable, Iterator, Sequence
-from contextlib import contextmanager
+from contextlib import contextmanager, suppress
 from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any, TextIO
 
-from .atomic import publish
+from .atomic import create_temp, discard, publish, write_error
 from .errors import UserError
 from .paradigm import Bound, Cell, CellFiller
 from .runtime import Language
@@ -115,7 +114,7 @@ def iter_cells(
 
 def iter_unimorph(lang: Language, bound: Bound | None = None, pos: Sequence[str] = ()) -> Iterator[tuple[str, str, str]]:
     """(lemma, form, features) for every form of every entry, preferred variant first in each cell."""
-    for _, cells in iter_cells(lang, bound or Bound(), pos):
+    for _, cells in iter_cells(lang, bound or Bound(layout_only=True), pos):
         for cell in cells:
             for v in cell.forms:
                 yield cell.lemma, v.form, cell.features
@@ -124,29 +123,31 @@ def iter_unimorph(lang: Language, bound: Bound | None = None, pos: Sequence[str]
 @contextmanager
 def atomic_output(path: str | Path) -> Iterator[TextIO]:
     """A text file written under a temporary name in the same directory and renamed when complete;
-    removed if anything goes wrong. ``-`` writes to standard output."""
+    removed if anything goes wrong (a failed write is one :class:`UserError`). ``-`` writes to
+    standard output."""
     if str(path) == "-":
         yield sys.stdout
         sys.stdout.flush()
         return
     target = Path(path)
-    if target.is_dir():
-        raise UserError(f"{target} is a directory", hint="give a file name for the output")
     directory = target.parent if str(target.parent) else Path(".")
     if not directory.is_dir():
         raise UserError(f"no such directory: {directory}", hint="create it first, or write elsewhere")
-    try:
-        fd, tmp = tempfile.mkstemp(prefix=f".{target.name}.", suffix=".part", dir=directory)
-    except OSError as exc:
-        raise UserError(f"cannot write in {directory}: {exc.strerror or exc}") from None
+    fd, tmp = create_temp(target)
     handle = os.fdopen(fd, "w", encoding="utf-8", newline="\n", buffering=1 << 16)
     try:
         yield handle
         handle.close()
         publish(tmp, target)
+    except OSError as exc:
+        with suppress(OSError):
+            handle.close()
+        discard(tmp)
+        raise write_error(exc, target) from None
     except BaseException:
-        handle.close()
-        Path(tmp).unlink(missing_ok=True)
+        with suppress(OSError):
+            handle.close()
+        discard(tmp)
         raise
 
 
@@ -169,7 +170,7 @@ def export_unimorph(
 
     ``progress`` shows a tqdm progress bar on standard error.
     """
-    bound = bound or Bound()
+    bound = bound or Bound(layout_only=True)
     pos = check_pos(lang, pos)
     stats = ExportStats(path=str(output))
     index = lexicon_index(lang, pos)

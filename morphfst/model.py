@@ -176,6 +176,7 @@ class Rule:
     weight: float
     pos: Position
     text: str
+    lenient: bool = False  # accepted when analyzing, never used when generating (spelling tolerance)
 
 
 @dataclass

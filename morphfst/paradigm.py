@@ -56,9 +56,12 @@ class Bound:
     require: frozenset[str] = frozenset()  # every cell carries all of these labels
     exclude: frozenset[str] = frozenset()  # no cell carries any of these labels
     max_cells: int = DEFAULT_MAX_CELLS
+    layout_only: bool = False  # keep only cells whose labels belong to the dimensions of the pos's layout
 
     def describe(self) -> str:
         parts = [f"depth {self.depth}"]
+        if self.layout_only:
+            parts.append("layout dimensions only")
         if self.require:
             parts.append("with " + ",".join(sorted(self.require)))
         if self.exclude:
@@ -72,6 +75,7 @@ def make_bound(
     require: Iterable[str] = (),
     exclude: Iterable[str] = (),
     max_cells: int = DEFAULT_MAX_CELLS,
+    layout_only: bool = False,
 ) -> Bound:
     """A :class:`Bound` with its labels checked against the language's feature inventory."""
     if depth < 0:
@@ -84,7 +88,26 @@ def make_bound(
                 f"unknown feature label {label!r} in the feature filter",
                 hint=(f"did you mean {near[0]!r}? " if near else "") + "labels: " + " ".join(sorted(known)),
             )
-    return Bound(depth, frozenset(require), frozenset(exclude), max_cells)
+    return Bound(depth, frozenset(require), frozenset(exclude), max_cells, layout_only)
+
+
+def layout_labels(meta: dict[str, Any], pos: str) -> set[str] | None:
+    """The labels of the dimensions that the layouts of ``pos`` lay out (rows, columns, sub-tables and
+    fixed labels), or ``None`` when the grammar has no layout for ``pos``.
+
+    A broad grammar's full paradigm includes stacked copulas, voices and the like (tens of thousands
+    of cells for one Turkish verb); a table shows what its layout names, unless asked for more.
+    """
+    dims = meta.get("dimensions", {})
+    layouts = [lay for lay in meta.get("layouts", []) if lay["pos"] == pos]
+    if not layouts:
+        return None
+    labels: set[str] = set()
+    for lay in layouts:
+        for name in [*lay["rows"], *lay["columns"], *lay["tables"]]:
+            labels.update(dims.get(name, []))
+        labels.update(lay.get("fixed", []))
+    return labels
 
 
 @dataclass(frozen=True)
@@ -128,6 +151,16 @@ def cell_templates(meta: dict[str, Any], klass: str, pos: str, bound: Bound) -> 
     path: list[int] = []
     names: list[str | None] = []
     depth = 0
+    allowed_by_pos: dict[str, set[str] | None] = {}
+
+    def allowed() -> set[str] | None:
+        """The labels the current part of speech's layout allows (the last part of speech on the path)."""
+        if not bound.layout_only:
+            return None
+        current = next(t for t, is_pos in zip(reversed(tags), reversed(mask)) if is_pos)
+        if current not in allowed_by_pos:
+            allowed_by_pos[current] = layout_labels(meta, current)
+        return allowed_by_pos[current]
 
     def emit() -> None:
         key = tuple(tags)
@@ -158,6 +191,9 @@ def cell_templates(meta: dict[str, Any], klass: str, pos: str, bound: Bound) -> 
                 labels = list(affix["features"])
                 new_pos = affix.get("new_pos")
                 if bound.exclude and (bound.exclude.intersection(labels) or new_pos in bound.exclude):
+                    continue
+                limit = allowed()
+                if limit is not None and not new_pos and not limit.issuperset(labels):
                     continue
                 if new_pos and depth + 1 > bound.depth:
                     continue
@@ -428,7 +464,7 @@ def paradigms(
     forms in the generator; each is then compiled on its own from the grammar source (when the source
     is there) so that each reading shows only its own forms.
     """
-    bound = bound or Bound()
+    bound = bound or Bound(layout_only=True)
     entries = find_entries(lang, lemma)
     if pos:
         entries = [e for e in entries if e["pos"] == pos]
@@ -581,7 +617,8 @@ def compile_entry(lang: Language, entry_args: dict[str, Any]) -> tuple[Language,
     grammar = load_model(path)
     entry = trial_entry(grammar, **entry_args)
     compiler = Compiler(grammar)
-    fsts = compiler.derive(compiler.bounded([entry]))
+    strict = compiler.bounded([entry], lenient=False) if any(r.lenient for r in grammar.rules) else None
+    fsts = compiler.derive(compiler.bounded([entry]), strict)
     meta = build_metadata(grammar, compiler.space)
     meta["lexicon"] = [
         {
@@ -611,7 +648,7 @@ def trial_paradigm(
 ) -> Paradigm:
     """The paradigm of a word given with its class (and optionally part of speech, stem and flags),
     whether or not it is in the lexicon: the entry is compiled on its own with the grammar source."""
-    bound = bound or Bound()
+    bound = bound or Bound(layout_only=True)
     trial, entry = compile_entry(
         lang, {"lemma": lemma, "klass": klass, "pos": pos, "stem": stem, "flags": list(flags), "gloss": gloss}
     )
@@ -649,7 +686,7 @@ def paradigm_data(
         paradigm_data(tur, "ev")[0]["cells"][0]      # {'analysis': 'ev N;SG;PSS1S;NOM', 'forms': [...], ...}
         paradigm_data(tur, "kalem", klass="noun", tables=True)[0]["sections"]
     """
-    bound = make_bound(lang, depth, require, exclude)
+    bound = make_bound(lang, depth, require, exclude, layout_only=True)
     if klass:
         found = [trial_paradigm(lang, lemma, klass, pos=pos, stem=stem, flags=flags, bound=bound)]
     else:

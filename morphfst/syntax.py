@@ -351,7 +351,9 @@ class _Builder:
                     open_pattern = self.expr(part.children[0])
             if name in self.grammar.classes:
                 raise UserError(f"class {name} declared twice", self.pos_of(d))
-            self.grammar.classes[name] = m.StemClass(name, nexts, pos_allowed, apostrophe, guess, self.pos_of(d), stems, open_pattern)
+            self.grammar.classes[name] = m.StemClass(
+                name, nexts, pos_allowed, apostrophe, guess, self.pos_of(d), stems, open_pattern
+            )
 
     def do_slot(self, node: Tree) -> None:
         name = str(node.children[0])
@@ -416,6 +418,7 @@ class _Builder:
         direction = "ltr"
         optional = False
         weight = 0.0
+        lenient = False
         exprs: list[Any] = []
         context: Tree | None = None
         for part in d.children[1:]:
@@ -425,6 +428,8 @@ class _Builder:
                 optional = True
             elif isinstance(part, Tree) and part.data == "o_weight":
                 weight = float(str(part.children[0]))
+            elif isinstance(part, Tree) and part.data == "o_lenient":
+                lenient = True
             elif isinstance(part, Tree) and part.data == "context":
                 context = part
             else:
@@ -435,7 +440,7 @@ class _Builder:
         right: m.Expr | None = None
         if context is not None:
             left, right = self._context(context)
-        return m.Rule(name, target, replacement, left, right, direction, optional, weight, pos, self.line_text(pos))  # type: ignore[arg-type]
+        return m.Rule(name, target, replacement, left, right, direction, optional, weight, pos, self.line_text(pos), lenient)  # type: ignore[arg-type]
 
     def _context(self, node: Tree) -> tuple[m.Expr | None, m.Expr | None]:
         left: m.Expr | None = None

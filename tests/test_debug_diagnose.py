@@ -220,11 +220,12 @@ def test_diagnosis_on_turkish(tur: morphfst.Language) -> None:
     d = diagnose(tur, "kitapı")
     assert d.layer == "sound change"
     assert d.sound_change is not None and d.sound_change.rule is not None
-    assert d.sound_change.rule["name"] == "final_voicing"
-    # The case suffix cannot precede the plural in Turkish (common practice): the slot graph says so.
-    d = diagnose(tur, "evdeler")
+    assert d.sound_change.rule["name"] == "voicing"
+    # A possessive cannot precede the plural in Turkish (common practice): *evimlerde. The longest
+    # prefix the slot graph accepts is ev-im-ler (with the copula's 3PL), after which a case is wanted.
+    d = diagnose(tur, "evimlerde")
     assert d.layer == "morphotactics" and d.morphotactics is not None
-    assert (d.morphotactics.after, d.morphotactics.wanted) == ("case", "number")
+    assert (d.morphotactics.after, d.morphotactics.wanted) == ("predicate", "case")
 
 
 def test_expected_analysis_each_layer(grammars: dict[str, DebugSession]) -> None:

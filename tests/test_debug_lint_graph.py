@@ -157,7 +157,7 @@ def test_dot_structure(tur: morphfst.Language) -> None:
     assert re.search(r'^  "class:noun" \[shape=house', text, flags=re.M)
     assert '"end" [shape=doublecircle' in text
     # entry edges are bold, derivational edges dashed and labelled with the new part of speech, from an affix port
-    assert '"class:noun" -> "slot:derive" [style=bold];' in text
+    assert '"class:noun" -> "slot:nderive" [style=bold];' in text
     dashed = [e for e in edges if "style=dashed" in e[3]]
     assert dashed and all(port.startswith("a") for _, port, _, _ in dashed)
     assert all('label="⇒ ' in attrs for *_, attrs in dashed)

@@ -33,8 +33,13 @@ def test_generated_forms_analyze_back(tur: morphfst.Language, nouns: list[str], 
 @settings(max_examples=150, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
 @given(word=st.text(alphabet="aeıioöuübcçdgğklmnprsştvyz'", min_size=1, max_size=12))
 def test_every_analysis_generates_the_word(tur: morphfst.Language, word: str) -> None:
+    # The grammar's lenient rules accept an apostrophe left out of a name or written after a common
+    # noun, which generation never produces: compare spellings without apostrophes.
+    def plain(form: str) -> str:
+        return tur.normalize(form).replace("'", "")
+
     for analysis in tur.analyze(word):
-        assert word in [f.form for f in tur.generate(analysis.lemma, analysis.tags)]
+        assert plain(word) in [plain(f.form) for f in tur.generate(analysis.lemma, analysis.tags)]
         assert "".join(m.form for m in analysis.morphs) == word
 
 
@@ -54,9 +59,13 @@ def test_finnish_generated_forms_analyze_back(fin: morphfst.Language, data: st.D
 @settings(max_examples=200, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
 @given(word=st.text(alphabet="aeıioöuübcçdgğklmnprsştvyz'", min_size=1, max_size=12))
 def test_arc_walk_agrees_with_composition(tur: morphfst.Language, word: str) -> None:
-    walked = [(a.text, a.segmentation, round(a.weight, 4)) for a in tur.analyze(word)]
-    composed = [(a.text, a.segmentation, round(a.weight, 4)) for a in tur.analyze_composed(word)]
-    assert walked == composed
+    assert_same(tur.analyze(word), tur.analyze_composed(word), word)
+
+
+def assert_same(walked: list[morphfst.Analysis], composed: list[morphfst.Analysis], word: str) -> None:
+    """The same analyses and segmentations in the same order, with weights equal up to float summation order."""
+    assert [(a.text, a.segmentation) for a in walked] == [(a.text, a.segmentation) for a in composed], word
+    assert all(abs(a.weight - b.weight) < 1e-3 for a, b in zip(walked, composed)), word
 
 
 def test_arc_walk_agrees_with_composition_on_generated_words(tur: morphfst.Language, fin: morphfst.Language) -> None:
@@ -66,6 +75,4 @@ def test_arc_walk_agrees_with_composition_on_generated_words(tur: morphfst.Langu
         surfaces = lang.fsts["analyzer"].copy().project("input")
         sample = pynini.randgen(surfaces, npath=300, seed=3, max_length=30)
         for word in set(sample.paths(input_token_type="utf8", output_token_type="utf8").istrings()):
-            walked = [(a.text, a.segmentation, round(a.weight, 4)) for a in lang.analyze(word)]
-            composed = [(a.text, a.segmentation, round(a.weight, 4)) for a in lang.analyze_composed(word)]
-            assert walked == composed, word
+            assert_same(lang.analyze(word), lang.analyze_composed(word), word)

@@ -40,6 +40,9 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
     p.add_argument("--with", dest="require", metavar="LABELS", help="only forms whose features include all these labels")
     p.add_argument("--without", dest="exclude", metavar="LABELS", help="leave out forms with any of these labels")
     p.add_argument("--pos", metavar="POS", help="only entries of these parts of speech (comma-separated)")
+    p.add_argument(
+        "--all-cells", action="store_true", help="every cell within the depth, not only the dimensions of the grammar's layouts"
+    )
     p.add_argument("--no-progress", action="store_true", help="no progress bar on standard error")
     p.add_argument("--stats", action="store_true", help="print what was written as JSON on standard error")
     p.set_defaults(func=run)
@@ -47,8 +50,8 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
 
 def run(args: argparse.Namespace) -> int:
     lang = open_language(args)
-    bound = make_bound(lang, args.depth, split_labels(args.require), split_labels(args.exclude))
-    progress = not args.no_progress and (args.output != "-" or sys.stderr.isatty())
+    bound = make_bound(lang, args.depth, split_labels(args.require), split_labels(args.exclude), layout_only=not args.all_cells)
+    progress = not args.no_progress and sys.stderr.isatty()  # never \r frames in a log
     stats = export_unimorph(lang, args.output, bound, split_labels(args.pos), progress=progress)
     if args.stats:
         sys.stderr.write(json.dumps(stats.to_dict(), ensure_ascii=False) + "\n")

@@ -63,6 +63,11 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
     bound.add_argument("--with", dest="require", metavar="LABELS", help="only cells carrying all these labels (comma-separated)")
     bound.add_argument("--without", dest="exclude", metavar="LABELS", help="leave out cells carrying any of these labels")
     bound.add_argument(
+        "--all-cells",
+        action="store_true",
+        help="every cell within the depth, not only those whose labels the layout lays out (stacked copulas, voices...)",
+    )
+    bound.add_argument(
         "--pos", metavar="POS", help="only the reading with this part of speech (or the part of speech of a new word)"
     )
     new = p.add_argument_group("a word not in the lexicon")
@@ -79,7 +84,10 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
 
 def run(args: argparse.Namespace) -> int:
     lang = open_language(args)
-    bound = make_bound(lang, args.depth, split_labels(args.require), split_labels(args.exclude))
+    custom = bool(args.rows or args.columns or args.tables)
+    bound = make_bound(
+        lang, args.depth, split_labels(args.require), split_labels(args.exclude), layout_only=not (args.all_cells or custom)
+    )
     if args.pos and args.pos not in lang.dimensions.get("pos", []):
         raise UserError(
             f"unknown part of speech {args.pos!r}", hint="parts of speech: " + ", ".join(lang.dimensions.get("pos", []))

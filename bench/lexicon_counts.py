@@ -1,0 +1,93 @@
+"""Lexicon counts from a word list: give each lexicon entry the summed frequency of the words it analyzes.
+
+Each word of the wordfreq list (ranks 1 to 20,000 only; higher ranks are kept for evaluation and are
+never read) is analyzed without the guesser; its frequency (per billion words) is shared equally by
+the lemmas (lemma and part of speech) of its best-weighted analyses. The totals are written into the
+``count`` column of the language's lexicon files, which the compiler turns into tropical weights
+``-ln(count / total)``: frequent lemmas then rank first among competing analyses.
+
+Run it twice: the first pass ranks readings without counts, the second with the first pass's counts.
+
+    python bench/lexicon_counts.py --lang tur            # rewrites lexicons/tur/*.tsv in place
+    python bench/lexicon_counts.py --lang fin --dry-run  # prints the 30 most frequent lemmas only
+"""
+
+from __future__ import annotations
+
+import argparse
+import collections
+import sys
+from pathlib import Path
+
+ROOT = Path(__file__).resolve().parent.parent
+sys.path.insert(0, str(ROOT))
+
+import morphfst  # noqa: E402
+from morphfst.build import find_grammar  # noqa: E402
+from morphfst.lexicon import lexicon_files  # noqa: E402
+from morphfst.syntax import parse_grammar_file  # noqa: E402
+
+DEV_RANKS = 20_000
+WORDFREQ_CODES = {"tur": "tr", "fin": "fi"}
+
+
+def lemma_counts(lang: morphfst.Language, code: str) -> collections.Counter[tuple[str, str]]:
+    from wordfreq import top_n_list, word_frequency
+
+    counts: collections.Counter[tuple[str, str]] = collections.Counter()
+    for word in top_n_list(code, DEV_RANKS):
+        analyses = lang.analyze(word)
+        if not analyses:
+            continue
+        best = analyses[0].weight
+        lemmas = {(a.lemma, a.pos) for a in analyses if abs(a.weight - best) < 1e-6}
+        share = word_frequency(word, code) * 1e9 / len(lemmas)
+        for key in lemmas:
+            counts[key] += share
+    return counts
+
+
+def rewrite(path: Path, counts: collections.Counter[tuple[str, str]]) -> int:
+    """Write the counts into one lexicon file (adding a count column if it has none); returns entries counted."""
+    lines = path.read_text(encoding="utf-8").splitlines()
+    header_index = next(i for i, line in enumerate(lines) if line.strip() and not line.lstrip().startswith("#"))
+    header = lines[header_index].split("\t")
+    if "count" not in header:
+        header.append("count")
+        lines[header_index] = "\t".join(header)
+    col = header.index("count")
+    lemma_col, pos_col = header.index("lemma"), header.index("pos")
+    counted = 0
+    for i in range(header_index + 1, len(lines)):
+        line = lines[i]
+        if not line.strip() or line.lstrip().startswith("#"):
+            continue
+        fields = line.split("\t")
+        fields += [""] * (len(header) - len(fields))
+        total = counts.get((fields[lemma_col], fields[pos_col]), 0.0)
+        fields[col] = str(max(1, round(total))) if total >= 0.5 else ""
+        counted += bool(fields[col])
+        lines[i] = "\t".join(fields)
+    path.write_text("\n".join(lines) + "\n", encoding="utf-8")
+    return counted
+
+
+def main(argv: list[str] | None = None) -> int:
+    ap = argparse.ArgumentParser(description=__doc__.split("\n\n")[0])
+    ap.add_argument("--lang", default="tur", help="shipped language name (default tur)")
+    ap.add_argument("--dry-run", action="store_true", help="print the most frequent lemmas, write nothing")
+    args = ap.parse_args(argv)
+    grammar_path = find_grammar(args.lang)
+    lang = morphfst.load(grammar_path)
+    counts = lemma_counts(lang, WORDFREQ_CODES.get(lang.name, lang.name))
+    if args.dry_run:
+        for (lemma, pos), n in counts.most_common(30):
+            print(f"{lemma}\t{pos}\t{n:,.0f}")
+        return 0
+    for path in lexicon_files(parse_grammar_file(grammar_path)):
+        print(f"{path.name}: {rewrite(path, counts):,} entries counted")
+    return 0
+
+
+if __name__ == "__main__":
+    raise SystemExit(main())

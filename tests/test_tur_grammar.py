@@ -1,0 +1,345 @@
+"""The shipped Turkish grammar against grammar-handbook paradigms.
+
+Sources named beside each table:
+  G&K  Göksel, A. & Kerslake, C., Turkish: A Comprehensive Grammar (Routledge, 2005)
+  L    Lewis, G., Turkish Grammar, 2nd ed. (Oxford University Press, 2000)
+Every form below was written from memory of those books' tables and rules, not copied from them
+("from memory"); where a form is the plain spelling rule of the language it says "common practice".
+Each check generates the form from the analysis (the first, preferred form must be the expected one)
+and analyzes the form back (the analysis must be among the results).
+"""
+
+from __future__ import annotations
+
+import pytest
+
+import morphfst
+
+CASES = ["NOM", "ACC", "DAT", "LOC", "ABL", "GEN", "INS"]
+
+
+def noun_paradigm(lemma: str, sg: list[str], pl: list[str]) -> list[tuple[str, str, str]]:
+    return [(lemma, f"N;SG;{c}", f) for c, f in zip(CASES, sg)] + [(lemma, f"N;PL;{c}", f) for c, f in zip(CASES, pl)]
+
+
+PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
+    # 1-4: a noun of each harmony class, both numbers, seven cases (G&K ch. 8 and 14; from memory)
+    "front unrounded (ev)": noun_paradigm(
+        "ev",
+        ["ev", "evi", "eve", "evde", "evden", "evin", "evle"],
+        ["evler", "evleri", "evlere", "evlerde", "evlerden", "evlerin", "evlerle"],
+    ),
+    "back unrounded, vowel-final (oda)": noun_paradigm(
+        "oda",
+        ["oda", "odayı", "odaya", "odada", "odadan", "odanın", "odayla"],
+        ["odalar", "odaları", "odalara", "odalarda", "odalardan", "odaların", "odalarla"],
+    ),
+    "front rounded (göz)": noun_paradigm(
+        "göz",
+        ["göz", "gözü", "göze", "gözde", "gözden", "gözün", "gözle"],
+        ["gözler", "gözleri", "gözlere", "gözlerde", "gözlerden", "gözlerin", "gözlerle"],
+    ),
+    "back rounded (okul)": noun_paradigm(
+        "okul",
+        ["okul", "okulu", "okula", "okulda", "okuldan", "okulun", "okulla"],
+        ["okullar", "okulları", "okullara", "okullarda", "okullardan", "okulların", "okullarla"],
+    ),
+    # 5: a voicing stem: final p, ç, t, k voice before a vowel, D devoices after them (G&K 2.4; L II)
+    "voicing stem (kitap)": noun_paradigm(
+        "kitap",
+        ["kitap", "kitabı", "kitaba", "kitapta", "kitaptan", "kitabın", "kitapla"],
+        ["kitaplar", "kitapları", "kitaplara", "kitaplarda", "kitaplardan", "kitapların", "kitaplarla"],
+    )
+    + [("ağaç", "N;SG;ACC", "ağacı"), ("çocuk", "N;SG;DAT", "çocuğa"), ("renk", "N;SG;ACC", "rengi")],
+    # 6: non-voicing stems: monosyllables and flagged loans keep the stop (G&K 2.4.1; from memory)
+    "non-voicing stems (at, top, devlet)": noun_paradigm(
+        "at",
+        ["at", "atı", "ata", "atta", "attan", "atın", "atla"],
+        ["atlar", "atları", "atlara", "atlarda", "atlardan", "atların", "atlarla"],
+    )
+    + [("top", "N;SG;ACC", "topu"), ("devlet", "N;SG;ACC", "devleti"), ("devlet", "N;SG;DAT", "devlete")],
+    # 7: vowel loss before a vowel-initial suffix (G&K 2.3.2; L II; from memory)
+    "vowel loss (ağız, burun, şehir, oğul)": [
+        ("ağız", "N;SG;NOM", "ağız"),
+        ("ağız", "N;SG;ACC", "ağzı"),
+        ("ağız", "N;SG;DAT", "ağza"),
+        ("ağız", "N;SG;LOC", "ağızda"),
+        ("ağız", "N;SG;PSS1S;NOM", "ağzım"),
+        ("ağız", "N;PL;NOM", "ağızlar"),
+        ("burun", "N;SG;ACC", "burnu"),
+        ("burun", "N;SG;ABL", "burundan"),
+        ("şehir", "N;SG;DAT", "şehre"),
+        ("şehir", "N;SG;GEN", "şehrin"),
+        ("şehir", "N;PL;NOM", "şehirler"),
+        ("oğul", "N;SG;PSS3S;NOM", "oğlu"),
+    ],
+    # 8: geminate stems, single at the end and before a consonant (G&K 2.3.1; from memory)
+    "doubling (hak, his, sır)": [
+        ("hak", "N;SG;NOM", "hak"),
+        ("hak", "N;SG;ACC", "hakkı"),
+        ("hak", "N;SG;DAT", "hakka"),
+        ("hak", "N;SG;LOC", "hakta"),
+        ("hak", "N;PL;NOM", "haklar"),
+        ("hak", "N;SG;PSS1S;NOM", "hakkım"),
+        ("his", "N;SG;ACC", "hissi"),
+        ("sır", "N;SG;ACC", "sırrı"),
+        ("sır", "N;PL;NOM", "sırlar"),
+    ],
+    # 9: possessives with case, the pronominal n after the third person (G&K ch. 14; from memory)
+    "possessives (ev, oda)": [
+        ("ev", "N;SG;PSS1S;NOM", "evim"),
+        ("ev", "N;SG;PSS2S;NOM", "evin"),
+        ("ev", "N;SG;PSS3S;NOM", "evi"),
+        ("ev", "N;SG;PSS1P;NOM", "evimiz"),
+        ("ev", "N;SG;PSS2P;NOM", "eviniz"),
+        ("ev", "N;SG;PSS3P;NOM", "evleri"),
+        ("ev", "N;SG;PSS3S;ACC", "evini"),
+        ("ev", "N;SG;PSS3S;DAT", "evine"),
+        ("ev", "N;SG;PSS3S;LOC", "evinde"),
+        ("ev", "N;PL;PSS1P;ABL", "evlerimizden"),
+        ("oda", "N;SG;PSS1S;NOM", "odam"),
+        ("oda", "N;SG;PSS3S;NOM", "odası"),
+        ("oda", "N;SG;PSS3S;LOC", "odasında"),
+        ("su", "N;SG;PSS3S;NOM", "suyu"),  # the irregular buffer y of su (G&K 14.1; from memory)
+        ("su", "N;SG;GEN", "suyun"),
+    ],
+    # 10: personal pronouns (G&K 18.1; L V; from memory)
+    "personal pronouns (ben, sen, o, biz)": [
+        ("ben", "PRO;SG;NOM", "ben"),
+        ("ben", "PRO;SG;ACC", "beni"),
+        ("ben", "PRO;SG;DAT", "bana"),
+        ("ben", "PRO;SG;LOC", "bende"),
+        ("ben", "PRO;SG;ABL", "benden"),
+        ("ben", "PRO;SG;GEN", "benim"),
+        ("ben", "PRO;INS", "benimle"),
+        ("sen", "PRO;SG;DAT", "sana"),
+        ("sen", "PRO;SG;GEN", "senin"),
+        ("o", "PRO;SG;ACC", "onu"),
+        ("o", "PRO;SG;DAT", "ona"),
+        ("o", "PRO;SG;LOC", "onda"),
+        ("o", "PRO;SG;ABL", "ondan"),
+        ("o", "PRO;SG;GEN", "onun"),
+        ("o", "PRO;PL;NOM", "onlar"),
+        ("o", "PRO;PL;DAT", "onlara"),
+        ("biz", "PRO;SG;GEN", "bizim"),
+        ("biz", "PRO;SG;ACC", "bizi"),
+    ],
+    # 11: demonstrative pronouns (G&K 18.2; from memory)
+    "demonstratives (bu, şu)": [
+        ("bu", "PRO;SG;NOM", "bu"),
+        ("bu", "PRO;SG;ACC", "bunu"),
+        ("bu", "PRO;SG;DAT", "buna"),
+        ("bu", "PRO;SG;LOC", "bunda"),
+        ("bu", "PRO;SG;ABL", "bundan"),
+        ("bu", "PRO;SG;GEN", "bunun"),
+        ("bu", "PRO;INS", "bununla"),
+        ("bu", "PRO;PL;NOM", "bunlar"),
+        ("şu", "PRO;SG;ACC", "şunu"),
+        ("şu", "PRO;PL;LOC", "şunlarda"),
+    ],
+    # 12-14: a verb of each aorist class with its negative (G&K 8.2.3 and 21.2; L VIII; from memory)
+    "aorist -Ar (yapmak)": [
+        ("yapmak", "V;HAB;1;SG", "yaparım"),
+        ("yapmak", "V;HAB;2;SG", "yaparsın"),
+        ("yapmak", "V;HAB;3;SG", "yapar"),
+        ("yapmak", "V;HAB;1;PL", "yaparız"),
+        ("yapmak", "V;HAB;2;PL", "yaparsınız"),
+        ("yapmak", "V;HAB;3;PL", "yaparlar"),
+        ("yapmak", "V;NEG;HAB;1;SG", "yapmam"),
+        ("yapmak", "V;NEG;HAB;2;SG", "yapmazsın"),
+        ("yapmak", "V;NEG;HAB;3;SG", "yapmaz"),
+        ("yapmak", "V;NEG;HAB;1;PL", "yapmayız"),
+        ("yapmak", "V;NEG;HAB;3;PL", "yapmazlar"),
+    ],
+    "aorist -Ir on a listed monosyllable (gelmek, almak, görmek)": [
+        ("gelmek", "V;HAB;1;SG", "gelirim"),
+        ("gelmek", "V;HAB;3;SG", "gelir"),
+        ("gelmek", "V;HAB;3;PL", "gelirler"),
+        ("gelmek", "V;NEG;HAB;3;SG", "gelmez"),
+        ("almak", "V;HAB;3;SG", "alır"),
+        ("görmek", "V;HAB;3;SG", "görür"),
+        ("olmak", "V;HAB;3;SG", "olur"),
+    ],
+    "aorist -Ir/-r on longer stems (çalışmak, okumak)": [
+        ("çalışmak", "V;HAB;3;SG", "çalışır"),
+        ("çalışmak", "V;HAB;1;PL", "çalışırız"),
+        ("okumak", "V;HAB;3;SG", "okur"),
+        ("okumak", "V;HAB;1;SG", "okurum"),
+        ("okumak", "V;NEG;HAB;3;SG", "okumaz"),
+        ("beklemek", "V;HAB;3;SG", "bekler"),
+    ],
+    # 15: the whole finite conjugation of gelmek in the third person singular and the first person
+    # (G&K ch. 8 and 21; L VIII-XI; from memory)
+    "tenses, aspects and moods (gelmek)": [
+        ("gelmek", "V;NFIN;NOM", "gelmek"),
+        ("gelmek", "V;PROG;1;SG", "geliyorum"),
+        ("gelmek", "V;PROG;3;PL", "geliyorlar"),
+        ("gelmek", "V;NEG;PROG;3;SG", "gelmiyor"),
+        ("gelmek", "V;PST;1;SG", "geldim"),
+        ("gelmek", "V;PST;1;PL", "geldik"),
+        ("gelmek", "V;PST;2;PL", "geldiniz"),
+        ("gelmek", "V;FUT;1;SG", "geleceğim"),
+        ("gelmek", "V;FUT;3;SG", "gelecek"),
+        ("gelmek", "V;NFH;3;SG", "gelmiş"),
+        ("gelmek", "V;NFH;1;SG", "gelmişim"),
+        ("gelmek", "V;COND;1;SG", "gelsem"),
+        ("gelmek", "V;OBLIG;3;SG", "gelmeli"),
+        ("gelmek", "V;OPT;1;SG", "geleyim"),
+        ("gelmek", "V;OPT;1;PL", "gelelim"),
+        ("gelmek", "V;IMP;2;SG", "gel"),
+        ("gelmek", "V;IMP;3;SG", "gelsin"),
+        ("gelmek", "V;IMP;3;PL", "gelsinler"),
+        ("gelmek", "V;POT;HAB;3;SG", "gelebilir"),
+        ("gelmek", "V;NEG;POT;HAB;3;SG", "gelemez"),
+        ("gelmek", "V;PROG;PST;1;SG", "geliyordum"),  # stacked tense and aspect (G&K 21.4)
+        ("gelmek", "V;FUT;PST;3;SG", "gelecekti"),
+        ("gelmek", "V;NFH;PST;3;SG", "gelmişti"),
+        ("gelmek", "V;PROG;NFH;3;SG", "geliyormuş"),
+        ("gelmek", "V;HAB;COND;3;SG", "gelirse"),
+    ],
+    # 16: the d/t alternation of gitmek and etmek, the raised e of demek and yemek (G&K 2.4; from memory)
+    "irregular verb stems (gitmek, etmek, demek, yemek)": [
+        ("gitmek", "V;PROG;3;SG", "gidiyor"),
+        ("gitmek", "V;HAB;3;SG", "gider"),
+        ("gitmek", "V;PST;3;SG", "gitti"),
+        ("gitmek", "V;FUT;1;SG", "gideceğim"),
+        ("etmek", "V;PROG;3;SG", "ediyor"),
+        ("demek", "V;PROG;3;SG", "diyor"),
+        ("demek", "V;FUT;3;SG", "diyecek"),
+        ("demek", "V;PST;3;SG", "dedi"),
+        ("demek", "V;HAB;3;SG", "der"),
+        ("yemek", "V;PROG;3;SG", "yiyor"),
+    ],
+    # 17: voices, stacked: causatives (-DIr, -t), passives (-Il, -n, -In) (G&K ch. 8.2.1-2; L XII)
+    "causative and passive stacks": [
+        ("yapmak", "V;CAUS;PST;3;SG", "yaptırdı"),
+        ("yapmak", "V;CAUS;CAUS;PST;3;SG", "yaptırttı"),
+        ("yapmak", "V;PASS;PST;3;SG", "yapıldı"),
+        ("yapmak", "V;CAUS;PASS;PST;3;SG", "yaptırıldı"),
+        ("okumak", "V;CAUS;PST;3;SG", "okuttu"),
+        ("okumak", "V;CAUS;CAUS;PST;3;SG", "okutturdu"),
+        ("okumak", "V;PASS;PST;3;SG", "okundu"),
+        ("okumak", "V;CAUS;PASS;PST;3;SG", "okutuldu"),
+        ("ölmek", "V;CAUS;PST;3;SG", "öldürdü"),
+        ("bilmek", "V;PASS;HAB;3;SG", "bilinir"),
+    ],
+    # 18: participles with possessive and case; verbal nouns and converbs (G&K ch. 24-26; from memory)
+    "participles, verbal nouns and converbs (gelmek)": [
+        ("gelmek", "V;V.PTCP;PST;ADJ;SG;PSS1S;NOM", "geldiğim"),
+        ("gelmek", "V;V.PTCP;PST;ADJ;SG;PSS1S;ACC", "geldiğimi"),
+        ("gelmek", "V;V.PTCP;PST;ADJ;SG;PSS3S;LOC", "geldiğinde"),
+        ("gelmek", "V;V.PTCP;PST;ADJ;PL;PSS3S;ACC", "geldiklerini"),
+        ("gelmek", "V;V.PTCP;PST;ADJ;ABL", "geldikten"),
+        ("gelmek", "V;V.PTCP;FUT;ADJ;SG;PSS3S;ACC", "geleceğini"),
+        ("gelmek", "V;V.PTCP;ADJ;SG;NOM", "gelen"),
+        ("gelmek", "V;V.PTCP;ADJ;PL;DAT", "gelenlere"),
+        ("gelmek", "V;V.MSDR;N;SG;PSS3S;ACC", "gelmesini"),
+        ("gelmek", "V;NEG;V.MSDR;N;SG;PSS3S;NOM", "gelmemesi"),
+        ("gelmek", "V;V.CVB;SEQ", "gelip"),
+        ("gelmek", "V;V.CVB;MANR", "gelerek"),
+        ("gelmek", "V;V.CVB;WHEN", "gelince"),
+        ("gelmek", "V;V.CVB;WTHT", "gelmeden"),
+        ("gelmek", "V;V.CVB;ASLONG", "geldikçe"),
+        ("okumak", "V;V.CVB;SEQ", "okuyup"),
+    ],
+    # 19: the copula on a noun, and the relative -ki (G&K ch. 12 and 13.2.2; from memory)
+    "copula and -ki on nominals (öğretmen, ev)": [
+        ("öğretmen", "N;SG;NOM;1;SG", "öğretmenim"),
+        ("öğretmen", "N;SG;NOM;2;PL", "öğretmensiniz"),
+        ("öğretmen", "N;SG;NOM;PST;3;SG", "öğretmendi"),
+        ("öğretmen", "N;SG;NOM;PST;1;PL", "öğretmendik"),
+        ("öğretmen", "N;SG;NOM;NFH;3;SG", "öğretmenmiş"),
+        ("öğretmen", "N;SG;NOM;COND;3;SG", "öğretmense"),
+        ("öğretmen", "N;SG;NOM;ASSR", "öğretmendir"),
+        ("öğretmen", "N;SG;NOM;V.CVB;WHILE", "öğretmenken"),
+        ("oda", "N;SG;LOC;PST;3;SG", "odadaydı"),
+        ("ev", "N;SG;LOC;1;SG", "evdeyim"),
+        ("ev", "N;SG;LOC;RELZ;NOM", "evdeki"),
+        ("ev", "N;SG;LOC;RELZ;PL;NOM", "evdekiler"),
+        ("ev", "N;SG;LOC;RELZ;ACC", "evdekini"),
+        ("ben", "PRO;SG;GEN;RELZ;ACC", "benimkini"),
+    ],
+    # 20: numerals in words and digits (G&K ch. 15; apostrophe before suffixes on digits: common practice)
+    "numerals": [
+        ("iki", "NUM;SG;NOM", "iki"),
+        ("dört", "NUM;SG;PSS3S;NOM", "dördü"),
+        ("beş", "NUM;ORD;ADJ;SG;NOM", "beşinci"),
+        ("üç", "NUM;ORD;ADJ;SG;NOM", "üçüncü"),
+        ("iki", "NUM;DISTR;ADJ", "ikişer"),
+        ("2023", "NUM;SG;LOC", "2023'te"),
+        ("5", "NUM;ORD;ADJ;SG;NOM", "5'inci"),
+        ("6", "NUM;SG;DAT", "6'ya"),
+        ("1990", "NUM;SG;ABL", "1990'dan"),
+        ("100", "NUM;SG;ACC", "100'ü"),
+    ],
+    # 21: proper names take the apostrophe before suffixes and keep their final stop (common practice)
+    "proper names": [
+        ("Ankara", "PROPN;SG;LOC", "Ankara'da"),
+        ("Ankara", "PROPN;SG;DAT", "Ankara'ya"),
+        ("İstanbul", "PROPN;SG;ABL", "İstanbul'dan"),
+        ("Ahmet", "PROPN;SG;DAT", "Ahmet'e"),
+        ("Ahmet", "PROPN;SG;GEN", "Ahmet'in"),
+    ],
+}
+
+CASES_FLAT = [(name, *row) for name, rows in PARADIGMS.items() for row in rows]
+
+
+def test_at_least_twelve_complete_paradigms() -> None:
+    assert len(PARADIGMS) >= 12
+    assert len(CASES_FLAT) >= 250
+
+
+@pytest.mark.parametrize("paradigm, lemma, features, surface", CASES_FLAT)
+def test_generation_matches_the_handbook(tur: morphfst.Language, paradigm: str, lemma: str, features: str, surface: str) -> None:
+    forms = [f.form for f in tur.generate(lemma, features)]
+    assert forms and forms[0] == surface, f"{paradigm}: {lemma} {features} gave {forms}"
+
+
+@pytest.mark.parametrize("paradigm, lemma, features, surface", CASES_FLAT)
+def test_analysis_matches_the_handbook(tur: morphfst.Language, paradigm: str, lemma: str, features: str, surface: str) -> None:
+    analyses = [a.text for a in tur.analyze(surface)]
+    assert f"{lemma} {features}" in analyses, f"{paradigm}: {surface} gave {analyses}"
+
+
+# Forms a grammar of Turkish must reject (G&K ch. 2: harmony, voicing, vowel loss; common practice).
+REJECTED = [
+    "evlar",  # back suffix vowel after a front stem
+    "odalerde",  # front suffix vowel after a back stem
+    "gözlar",  # back suffix vowel after a front rounded stem
+    "kitapı",  # a voicing stem left unvoiced
+    "ağaçı",
+    "ağızı",  # vowel loss not applied
+    "burunu",
+    "hakı",  # the geminate not written
+    "evimlerde",  # possessive before number: wrong order
+    "evdelerim",  # person marked twice after a case
+    "evdeim",  # the copula's buffer y left out
+    "gelar",  # wrong aorist vowel for a listed -Ir verb
+    "yapır",  # wrong aorist vowel for a one-syllable -Ar verb
+    "gitiyor",  # the d of gitmek not voiced
+    "okuyorlardılar",  # person marked twice
+]
+
+
+@pytest.mark.parametrize("word", REJECTED)
+def test_rejected_forms(tur: morphfst.Language, word: str) -> None:
+    assert tur.analyze(word) == []
+
+
+def test_usual_reading_first(tur: morphfst.Language) -> None:
+    # kitabı: the accusative ranks before 'his/her book' (common practice in analyzers' ranking)
+    assert [a.text for a in tur.analyze("kitabı")][:2] == ["kitap N;SG;ACC", "kitap N;SG;PSS3S;NOM"]
+    # a lexicon word before a derivation that spells it: gözlük 'glasses' before göz-lük
+    assert tur.analyze("gözlük")[0].lemma == "gözlük"
+
+
+def test_informal_spellings_are_accepted_but_never_generated(tur: morphfst.Language) -> None:
+    assert "Ankara PROPN;SG;LOC" in [a.text for a in tur.analyze("ankarada")]  # apostrophe left out
+    assert [f.form for f in tur.generate("Ankara", "PROPN;SG;LOC")] == ["Ankara'da"]
+    assert [f.form for f in tur.generate("ev", "N;SG;LOC")] == ["evde"]
+
+
+def test_circumflex_is_normalized(tur: morphfst.Language) -> None:
+    # â, î, û are written in some loans (kâğıt, hâlâ); they are read as a, i, u (common practice)
+    assert tur.analyze("kâğıdı") and tur.analyze("kâğıdı")[0].lemma in {"kağıt", "kâğıt"}
