@@ -452,7 +452,8 @@ def _section(
         if not rkeys or not ckeys:
             continue
         grid_cells = [[lookup.get((tkey, r, c)) for c in ckeys] for r in rkeys]
-        gtitle = ", ".join(spec.value_label(d, val) for d, val in zip(tables, tkey))
+        # a value labelled "" (e.g. 'label Mood.none ""') is left out of the title
+        gtitle = ", ".join(x for x in (spec.value_label(d, val) for d, val in zip(tables, tkey)) if x)
         grids.append(
             Grid(
                 title=gtitle,

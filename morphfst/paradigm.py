@@ -75,7 +75,7 @@ def make_bound(
     require: Iterable[str] = (),
     exclude: Iterable[str] = (),
     max_cells: int = DEFAULT_MAX_CELLS,
-    layout_only: bool = False,
+    layout_only: bool = True,
 ) -> Bound:
     """A :class:`Bound` with its labels checked against the language's feature inventory."""
     if depth < 0:
