@@ -4,7 +4,9 @@ Each word of the wordfreq list (ranks 1 to 20,000 only; higher ranks are kept fo
 never read) is analyzed without the guesser; its frequency (per billion words) is shared equally by
 the lemmas (lemma and part of speech) of its best-weighted analyses. The totals are written into the
 ``count`` column of the language's lexicon files, which the compiler turns into tropical weights
-``-ln(count / total)``: frequent lemmas then rank first among competing analyses.
+``-ln(count / total)``: frequent lemmas then rank first among competing analyses. An entry whose words
+are not in the list gets half the smallest count seen (simple smoothing), so that a rare lexicon word
+still ranks above a derivation from a frequent stem that spells it.
 
 Run it twice: the first pass ranks readings without counts, the second with the first pass's counts.
 
@@ -47,7 +49,7 @@ def lemma_counts(lang: morphfst.Language, code: str) -> collections.Counter[tupl
     return counts
 
 
-def rewrite(path: Path, counts: collections.Counter[tuple[str, str]]) -> int:
+def rewrite(path: Path, counts: collections.Counter[tuple[str, str]], floor: int) -> int:
     """Write the counts into one lexicon file (adding a count column if it has none); returns entries counted."""
     lines = path.read_text(encoding="utf-8").splitlines()
     header_index = next(i for i, line in enumerate(lines) if line.strip() and not line.lstrip().startswith("#"))
@@ -65,8 +67,8 @@ def rewrite(path: Path, counts: collections.Counter[tuple[str, str]]) -> int:
         fields = line.split("\t")
         fields += [""] * (len(header) - len(fields))
         total = counts.get((fields[lemma_col], fields[pos_col]), 0.0)
-        fields[col] = str(max(1, round(total))) if total >= 0.5 else ""
-        counted += bool(fields[col])
+        fields[col] = str(max(floor, round(total))) if total >= floor else str(floor)
+        counted += total >= floor
         lines[i] = "\t".join(fields)
     path.write_text("\n".join(lines) + "\n", encoding="utf-8")
     return counted
@@ -84,8 +86,9 @@ def main(argv: list[str] | None = None) -> int:
         for (lemma, pos), n in counts.most_common(30):
             print(f"{lemma}\t{pos}\t{n:,.0f}")
         return 0
+    floor = max(1, round(min(n for n in counts.values() if n > 0) / 2))
     for path in lexicon_files(parse_grammar_file(grammar_path)):
-        print(f"{path.name}: {rewrite(path, counts):,} entries counted")
+        print(f"{path.name}: {rewrite(path, counts, floor):,} entries counted (others: {floor})")
     return 0
 
 

@@ -324,7 +324,7 @@ WRONG = [
     "juosen",  # juoksen
     "näken",  # näen
     "salatan",  # salaan
-    "otettaan",  # otetaan
+    "otettiiin",  # otettiin
     "kysynut",  # kysynyt
     "öihiin",  # öihin
 ]
