@@ -307,19 +307,31 @@ class Compiler:
     def build(self, progress: Callable[[str], None] | None = None) -> CompiledFsts:
         """All saved transducers of the grammar's lexicon."""
         timings: dict[str, float] = {}
-        t0 = time.perf_counter()
-        bounded = self.bounded(self.g.lexicon, progress)
-        strict = self.bounded(self.g.lexicon, progress, lenient=False) if any(r.lenient for r in self.g.rules) else None
-        timings["lexicon_rules"] = time.perf_counter() - t0
-        t1 = time.perf_counter()
-        fsts = self.derive(bounded, strict)
-        timings["derive"] = time.perf_counter() - t1
+        fsts = self.entry_fsts(self.g.lexicon, progress, timings)
         t2 = time.perf_counter()
         guesser = self.guesser()
         if guesser is not None:
             fsts["guesser"] = guesser
             timings["guesser"] = time.perf_counter() - t2
         return CompiledFsts(self.space, fsts, timings)
+
+    def entry_fsts(
+        self,
+        entries: list[m.LexEntry],
+        progress: Callable[[str], None] | None = None,
+        timings: dict[str, float] | None = None,
+    ) -> dict[str, pynini.Fst]:
+        """The four saved transducers for ``entries``: the rule cascade, and a second one without the
+        lenient rules for the generator when the grammar has any."""
+        t0 = time.perf_counter()
+        bounded = self.bounded(entries, progress)
+        strict = self.bounded(entries, progress, lenient=False) if any(r.lenient for r in self.g.rules) else None
+        t1 = time.perf_counter()
+        fsts = self.derive(bounded, strict)
+        if timings is not None:
+            timings["lexicon_rules"] = t1 - t0
+            timings["derive"] = time.perf_counter() - t1
+        return fsts
 
     def derive(self, bounded: pynini.Fst, strict: pynini.Fst | None = None) -> dict[str, pynini.Fst]:
         """The four saved transducers from the bounded machine; the generator comes from ``strict``
@@ -342,21 +354,27 @@ class Compiler:
         (numbers written in digits), through the class's stem rules, like a lexicon stem."""
         assert klass.open is not None
         s = self.space
-        try:
-            pattern = self.expr(klass.open).optimize()
-        except KeyError as exc:
-            raise UserError(
-                f"class {klass.name}: the open pattern names an unknown symbol or set {exc.args[0]!r}",
-                klass.pos,
-                hint="an open pattern is written with the grammar's letters and @sets",
-            ) from None
-        stem = pynini.intersect(pattern, chars(self.letter_codes).closure().optimize()).optimize()
-        if stem.start() == NO_STATE_ID:
-            raise UserError(f"class {klass.name}: the open pattern matches no string of letters", klass.pos)
+        stem = self.pattern_stems(klass, klass.open, "open", chars(self.letter_codes).closure())
         tags = klass.pos_allowed or self.g.pos_tags
         after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""
         tail = cross(union(acc(s.code(f"pos:{t}")) for t in tags), after)
         return lemma_to_stem(self, klass, stem) + tail
+
+    def pattern_stems(self, klass: m.StemClass, pattern: m.Expr, kind: str, letters: pynini.Fst) -> pynini.Fst:
+        """The strings of ``letters`` that a class's ``guess`` or ``open`` pattern accepts (a user error
+        when the pattern names an unknown symbol or accepts no string of letters)."""
+        try:
+            accepted = self.expr(pattern).optimize()
+        except KeyError as exc:
+            raise UserError(
+                f"class {klass.name}: the {kind} pattern names an unknown symbol or set {exc.args[0]!r}",
+                klass.pos,
+                hint=f"a {kind} pattern is written with the grammar's letters and @sets",
+            ) from None
+        stem = pynini.intersect(accepted, letters.optimize()).optimize()
+        if stem.start() == NO_STATE_ID:
+            raise UserError(f"class {klass.name}: the {kind} pattern matches no string of letters", klass.pos)
+        return stem
 
     # ---- the guesser for unknown words ----------------------------------------------------------------
     def guess_stem_fst(self, klass: m.StemClass) -> pynini.Fst | None:
@@ -371,18 +389,8 @@ class Compiler:
             return None
         s = self.space
         mark = s.add(GUESS_SYMBOL, "guess", single_char_ok=False)
-        try:
-            pattern = self.expr(klass.guess).optimize()
-        except KeyError as exc:
-            raise UserError(
-                f"class {klass.name}: the guess pattern names an unknown symbol or set {exc.args[0]!r}",
-                klass.pos,
-                hint="a guess pattern is written with the grammar's letters and @sets",
-            ) from None
         letters = union(acc(c, weight=GUESS_STEM_WEIGHT) for c in self.letter_codes).closure()
-        stem = pynini.intersect(pattern, letters.optimize()).optimize()
-        if stem.start() == NO_STATE_ID:
-            raise UserError(f"class {klass.name}: the guess pattern matches no string of letters", klass.pos)
+        stem = self.pattern_stems(klass, klass.guess, "guess", letters)
         tags = klass.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == klass.name}) or self.g.pos_tags
         tail = union(acc(s.code(f"pos:{t}")) for t in tags) + acc(mark)
         after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""

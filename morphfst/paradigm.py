@@ -617,8 +617,7 @@ def compile_entry(lang: Language, entry_args: dict[str, Any]) -> tuple[Language,
     grammar = load_model(path)
     entry = trial_entry(grammar, **entry_args)
     compiler = Compiler(grammar)
-    strict = compiler.bounded([entry], lenient=False) if any(r.lenient for r in grammar.rules) else None
-    fsts = compiler.derive(compiler.bounded([entry]), strict)
+    fsts = compiler.entry_fsts([entry])
     meta = build_metadata(grammar, compiler.space)
     meta["lexicon"] = [
         {

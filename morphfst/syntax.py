@@ -57,20 +57,29 @@ def parse_grammar_file(path: str | Path) -> m.Grammar:
             Position(str(path)),
             hint="check the path; grammars live in grammars/<name>.mfg",
         ) from None
-    try:
-        text = raw.decode("utf-8")
-    except UnicodeDecodeError as exc:
-        line = raw[: exc.start].count(b"\n") + 1
-        raise UserError(
-            "grammar file is not valid UTF-8",
-            Position(str(path), line),
-            hint="save the grammar as UTF-8",
-        ) from None
-    return parse_grammar_text(text, str(path))
+    return parse_grammar_text(_decode(raw, str(path), "grammar file"), str(path))
 
 
 def parse_grammar_text(text: str, filename: str = "<grammar>") -> m.Grammar:
     """Parse grammar source text into a :class:`Grammar` (lexicons are not read here)."""
+    tree, lines = _parse_source(text, filename)
+    builder = _Builder(filename, lines)
+    builder.build(tree)
+    builder.finish()
+    return builder.grammar
+
+
+def _decode(raw: bytes, filename: str, what: str) -> str:
+    """UTF-8 source bytes as text; a located error where they are not valid UTF-8."""
+    try:
+        return raw.decode("utf-8")
+    except UnicodeDecodeError as exc:
+        line = raw[: exc.start].count(b"\n") + 1
+        raise UserError(f"{what} is not valid UTF-8", Position(filename, line), hint="save it as UTF-8") from None
+
+
+def _parse_source(text: str, filename: str) -> tuple[Tree, list[str]]:
+    """The lark tree and the lines of one grammar source (NFC, without a byte-order mark)."""
     text = unicodedata.normalize("NFC", text)
     if text.startswith("\ufeff"):  # a byte-order mark, as some editors write one
         text = text[1:]
@@ -78,13 +87,9 @@ def parse_grammar_text(text: str, filename: str = "<grammar>") -> m.Grammar:
         text += "\n"
     lines = text.split("\n")
     try:
-        tree = _parser().parse(text)
+        return _parser().parse(text), lines
     except UnexpectedInput as exc:
         raise _syntax_error(exc, filename, lines) from None
-    builder = _Builder(filename, lines)
-    builder.build(tree)
-    builder.finish()
-    return builder.grammar
 
 
 def _syntax_error(exc: UnexpectedInput, filename: str, lines: list[str]) -> UserError:
@@ -213,23 +218,7 @@ class _Builder:
                 hint=f"the path is relative to the including file's folder; looked for {target}",
                 source_line=self.line_text(pos),
             ) from None
-        try:
-            text = unicodedata.normalize("NFC", raw.decode("utf-8"))
-        except UnicodeDecodeError as exc:
-            raise UserError(
-                "included file is not valid UTF-8",
-                Position(str(target), raw[: exc.start].count(b"\n") + 1),
-                hint="save it as UTF-8",
-            ) from None
-        if text.startswith("\ufeff"):
-            text = text[1:]
-        if not text.endswith("\n"):
-            text += "\n"
-        lines = text.split("\n")
-        try:
-            tree = _parser().parse(text)
-        except UnexpectedInput as exc:
-            raise _syntax_error(exc, str(target), lines) from None
+        tree, lines = _parse_source(_decode(raw, str(target), "included file"), str(target))
         saved = (self.filename, self.lines)
         self.filename, self.lines = str(target), lines
         self._chain = [*chain, str(target.resolve())]

@@ -179,7 +179,7 @@ def _sample_forms(grammar: m.Grammar, entries: list[m.LexEntry], rng: random.Ran
     """A word list of forms of ``entries``: a few cells per lemma, drawn by one Zipf-like ranking per class
     among the cells of at most ``max_tags`` tags (part of speech and features)."""
     compiler = Compiler(grammar)
-    fsts = compiler.derive(compiler.bounded([_copy_entry(e) for e in entries]))
+    fsts = compiler.entry_fsts([_copy_entry(e) for e in entries])
     meta = build_metadata(grammar, compiler.space)
     meta["lexicon"] = [
         {
