@@ -1,17 +1,23 @@
-"""The compiled file: one zip archive holding the transducers (OpenFst binary) and metadata.json.
+"""The compiled file: one zip archive holding the transducers (OpenFst binary) and the metadata.
 
-Layout: ``metadata.json`` plus one ``<name>.fst`` per transducer; the archive comment holds a
-SHA-256 checksum over every member's name and bytes, so a damaged file is detected on reading (the
-zip members' CRC-32 checks catch most damage too). Files are written to a temporary name and
-renamed when complete, so a half-written archive never looks whole.
+Layout: ``metadata.json`` (everything but the lexicon), ``lexicon.json`` (the lexicon entries),
+``glosses.tsv`` (lemma, part of speech and gloss of every entry: what decoding needs) and one
+``<name>.fst`` per transducer. The archive comment holds a SHA-256 checksum of every byte before it,
+so a damaged file is detected when it is opened, by one pass over the raw bytes, without inflating
+anything. Loading reads only ``metadata.json``; each transducer is read the first time it is used
+(:class:`LazyFsts`) and the lexicon the first time a tool asks for it (:class:`Metadata`), so start-up
+does not grow with the lexicon. Files are written to a temporary name and renamed when complete,
+so a half-written archive never looks whole.
 """
 
 from __future__ import annotations
 
 import hashlib
+import io
 import json
 import os
 import zipfile
+from collections.abc import Callable, Iterator, Mapping
 from pathlib import Path
 from typing import Any
 
@@ -23,32 +29,126 @@ from .version import FORMAT_VERSION
 
 SUFFIX = ".mfc"
 CHECKSUM_PREFIX = b"morphfst-sha256:"
+_DIGEST_LEN = 64  # hex characters of a SHA-256 digest
+LAZY_MEMBERS = {"lexicon": "lexicon.json"}
 
 
 class DamagedArchive(UserError):
     """A compiled file that cannot be read back as written (truncated, changed bytes, not a zip)."""
 
 
-def _checksum(members: list[tuple[str, bytes]]) -> bytes:
-    h = hashlib.sha256()
-    for name, data in members:
-        h.update(name.encode("utf-8") + b"\0" + len(data).to_bytes(8, "little"))
-        h.update(data)
-    return CHECKSUM_PREFIX + h.hexdigest().encode("ascii")
+class Metadata(dict):  # type: ignore[type-arg]
+    """The metadata of a compiled language: a plain dict whose large members (the lexicon) are read
+    from the archive the first time they are looked up."""
+
+    def __init__(self, data: Mapping[str, Any], lazy: Mapping[str, Callable[[], Any]] | None = None) -> None:
+        super().__init__(data)
+        self._lazy: dict[str, Callable[[], Any]] = dict(lazy or {})
+
+    def __missing__(self, key: str) -> Any:
+        loader = self._lazy.pop(key, None)
+        if loader is None:
+            raise KeyError(key)
+        value = self[key] = loader()
+        return value
+
+    def get(self, key: str, default: Any = None) -> Any:  # type: ignore[override]
+        try:
+            return self[key]
+        except KeyError:
+            return default
+
+    def __contains__(self, key: object) -> bool:
+        return super().__contains__(key) or key in self._lazy
+
+    def is_loaded(self, key: str) -> bool:
+        """True when ``key`` is held (not waiting to be read from the archive)."""
+        return super().__contains__(key)
+
+    def copy(self) -> Metadata:  # type: ignore[override]
+        return Metadata(self, self._lazy)
+
+    def defer(self, key: str, loader: Callable[[], Any]) -> None:
+        """Read ``key`` with ``loader`` when it is first looked up (replacing what is held now)."""
+        super().pop(key, None)
+        self._lazy[key] = loader
+
+    def whole(self) -> dict[str, Any]:
+        """A plain dict with every member read."""
+        return {k: self[k] for k in [*self.keys(), *self._lazy]}
 
 
-def save_archive(path: str | Path, fsts: dict[str, pynini.Fst], meta: dict[str, Any]) -> Path:
+class LazyFsts(Mapping[str, pynini.Fst]):
+    """The transducers of an archive, each read from its member the first time it is looked up."""
+
+    def __init__(self, zf: zipfile.ZipFile, names: list[str], path: str | Path) -> None:
+        self._zf = zf
+        self._names = names
+        self._path = path
+        self._loaded: dict[str, pynini.Fst] = {}
+
+    def __getitem__(self, name: str) -> pynini.Fst:
+        fst = self._loaded.get(name)
+        if fst is None:
+            if name not in self._names:
+                raise KeyError(name)
+            try:
+                fst = self._loaded[name] = pynini.Fst.read_from_string(self._zf.read(f"{name}.fst"))
+            except Exception as exc:  # a damaged member: zlib.error, BadZipFile, pynini's FstIOError
+                raise _damaged(self._path, exc) from None
+        return fst
+
+    def __iter__(self) -> Iterator[str]:
+        return iter(self._names)
+
+    def __len__(self) -> int:
+        return len(self._names)
+
+
+def glosses_tsv(lexicon: list[dict[str, Any]]) -> str:
+    """``lemma TAB pos TAB gloss`` lines, the first entry of each (lemma, pos) (what decoding needs)."""
+    seen: dict[tuple[str, str], str] = {}
+    for entry in lexicon:
+        seen.setdefault((entry["lemma"], entry["pos"]), entry["gloss"])
+    return "".join(f"{_cell(lemma)}\t{_cell(pos)}\t{_cell(gloss)}\n" for (lemma, pos), gloss in seen.items())
+
+
+def _cell(text: str) -> str:
+    return text.replace("\t", " ").replace("\n", " ")
+
+
+def read_glosses(text: str) -> dict[tuple[str, str], str]:
+    """The glosses written by :func:`glosses_tsv`."""
+    found: dict[tuple[str, str], str] = {}
+    for line in text.splitlines():
+        lemma, pos, gloss = line.split("\t", 2)
+        found[(lemma, pos)] = gloss
+    return found
+
+
+def save_archive(path: str | Path, fsts: Mapping[str, pynini.Fst], meta: Mapping[str, Any]) -> Path:
     """Write the archive atomically; returns its path. A failed write is one :class:`UserError` and
     leaves nothing behind."""
     path = Path(path)
-    members = [("metadata.json", json.dumps(meta, ensure_ascii=False).encode("utf-8"))]
+    lexicon = list(meta.get("lexicon") or [])
+    plain = {k: v for k, v in (meta.whole() if isinstance(meta, Metadata) else meta).items() if k not in ("lexicon", "glosses")}
+    members = [
+        ("metadata.json", json.dumps(plain, ensure_ascii=False).encode("utf-8")),
+        ("lexicon.json", json.dumps(lexicon, ensure_ascii=False).encode("utf-8")),
+        ("glosses.tsv", glosses_tsv(lexicon).encode("utf-8")),
+    ]
     members += [(f"{name}.fst", fst.write_to_string()) for name, fst in fsts.items()]
+    buffer = io.BytesIO()
+    with zipfile.ZipFile(buffer, "w", compression=zipfile.ZIP_DEFLATED, compresslevel=1) as zf:
+        for name, data in members:
+            zf.writestr(name, data)
+        zf.comment = CHECKSUM_PREFIX + b"0" * _DIGEST_LEN
+    data = buffer.getvalue()
+    data = data[:-_DIGEST_LEN] + _digest(data[:-_DIGEST_LEN])
     fd, tmp = create_temp(path)
     try:
-        with os.fdopen(fd, "wb") as handle, zipfile.ZipFile(handle, "w", compression=zipfile.ZIP_DEFLATED, compresslevel=1) as zf:
-            for name, data in members:
-                zf.writestr(name, data)
-            zf.comment = _checksum(members)
+        with os.fdopen(fd, "wb") as handle:
+            handle.write(data)
         publish(tmp, path)
     except OSError as exc:
         discard(tmp)
@@ -57,6 +157,10 @@ def save_archive(path: str | Path, fsts: dict[str, pynini.Fst], meta: dict[str, 
         discard(tmp)
         raise
     return path
+
+
+def _digest(data: bytes) -> bytes:
+    return hashlib.sha256(data).hexdigest().encode("ascii")
 
 
 def _damaged(path: str | Path, why: object) -> DamagedArchive:
@@ -73,52 +177,61 @@ def _unreadable(path: str | Path, exc: OSError) -> UserError:
     )
 
 
-def read_metadata(path: str | Path) -> dict[str, Any]:
-    """Only the metadata of an archive (cheap: no transducer is read)."""
+def _open(path: str | Path) -> tuple[zipfile.ZipFile, dict[str, Any]]:
+    """The archive, its checksum verified, and its metadata; raises :class:`DamagedArchive` for a
+    damaged file and a :class:`UserError` for one of another format."""
     try:
-        with zipfile.ZipFile(path) as zf:
-            meta: dict[str, Any] = json.loads(zf.read("metadata.json"))
+        raw = Path(path).read_bytes()
     except (FileNotFoundError, PermissionError, IsADirectoryError) as exc:
         raise _unreadable(path, exc) from None
-    except Exception as exc:  # whatever a damaged zip raises (BadZipFile, zlib.error, NotImplementedError, ...)
+    except OSError as exc:
+        raise _unreadable(path, exc) from None
+    tail = raw[-(len(CHECKSUM_PREFIX) + _DIGEST_LEN) :]
+    checked = tail.startswith(CHECKSUM_PREFIX)
+    if checked and tail[len(CHECKSUM_PREFIX) :] != _digest(raw[:-_DIGEST_LEN]):
+        raise _damaged(path, "checksum mismatch")
+    try:
+        zf = zipfile.ZipFile(io.BytesIO(raw))
+        meta: Any = json.loads(zf.read("metadata.json"))
+    except Exception as exc:  # whatever a damaged zip raises (BadZipFile, KeyError, zlib.error, ValueError, ...)
         raise _damaged(path, exc) from None
     if not isinstance(meta, dict):
         raise _damaged(path, "metadata is not an object")
-    return meta
-
-
-def load_archive(path: str | Path) -> tuple[dict[str, pynini.Fst], dict[str, Any]]:
-    """Read every transducer and the metadata of an archive, checking its checksum; a damaged file
-    raises :class:`DamagedArchive`, a file of another format a :class:`UserError`."""
-    try:
-        with zipfile.ZipFile(path) as zf:
-            members = [(info.filename, zf.read(info)) for info in zf.infolist()]
-            comment = zf.comment
-    except (FileNotFoundError, PermissionError, IsADirectoryError) as exc:
-        raise _unreadable(path, exc) from None
-    except Exception as exc:  # whatever a damaged zip raises (BadZipFile, zlib.error, NotImplementedError, ...)
-        raise _damaged(path, exc) from None
-    if comment != _checksum(members) and comment.startswith(CHECKSUM_PREFIX):
-        raise _damaged(path, "checksum mismatch")
-    data = dict(members)
-    try:
-        meta: dict[str, Any] = json.loads(data["metadata.json"])
-    except (KeyError, ValueError, UnicodeDecodeError) as exc:
-        raise _damaged(path, exc) from None
-    if comment != _checksum(members) and isinstance(meta, dict) and meta.get("format") == FORMAT_VERSION:
-        raise _damaged(path, "no checksum")
-    if not isinstance(meta, dict) or meta.get("format") != FORMAT_VERSION:
-        got = meta.get("format") if isinstance(meta, dict) else None
+    if meta.get("format") != FORMAT_VERSION:
         raise UserError(
-            f"compiled file has format {got}, this morphfst reads format {FORMAT_VERSION}",
+            f"compiled file has format {meta.get('format')}, this morphfst reads format {FORMAT_VERSION}",
             Position(str(path)),
             hint="recompile it with 'morphfst build'",
         )
-    fsts: dict[str, pynini.Fst] = {}
-    for name, blob in members:
-        if name.endswith(".fst"):
+    if not checked:
+        raise _damaged(path, "no checksum")
+    return zf, meta
+
+
+def read_metadata(path: str | Path) -> Metadata:
+    """The metadata of an archive (the transducers are not read; the lexicon is read on first use)."""
+    zf, meta = _open(path)
+    return _metadata(zf, meta, path)
+
+
+def _metadata(zf: zipfile.ZipFile, meta: dict[str, Any], path: str | Path) -> Metadata:
+    def member(name: str, parse: Callable[[bytes], Any]) -> Callable[[], Any]:
+        def load() -> Any:
             try:
-                fsts[name[:-4]] = pynini.Fst.read_from_string(blob)
-            except Exception as exc:  # pynini raises its own FstIOError
+                return parse(zf.read(name))
+            except Exception as exc:
                 raise _damaged(path, exc) from None
-    return fsts, meta
+
+        return load
+
+    lazy = {key: member(name, json.loads) for key, name in LAZY_MEMBERS.items()}
+    lazy["glosses"] = member("glosses.tsv", lambda b: read_glosses(b.decode("utf-8")))
+    return Metadata(meta, lazy)
+
+
+def load_archive(path: str | Path) -> tuple[LazyFsts, Metadata]:
+    """The transducers (read on first use) and the metadata of an archive, its checksum checked; a
+    damaged file raises :class:`DamagedArchive`, a file of another format a :class:`UserError`."""
+    zf, meta = _open(path)
+    names = [info.filename[:-4] for info in zf.infolist() if info.filename.endswith(".fst")]
+    return LazyFsts(zf, names, path), _metadata(zf, meta, path)

@@ -15,27 +15,27 @@ the user is loaded as it is, never recompiled or overwritten.
 
 from __future__ import annotations
 
+import hashlib
+import json
 import os
 import re
 import sys
 import time
-from collections.abc import Callable
+from collections.abc import Callable, Mapping
 from importlib import resources
 from pathlib import Path
-from typing import Any
+from typing import TYPE_CHECKING, Any
 
-import pynini
-
-from . import model as m
-from .archive import SUFFIX, DamagedArchive, load_archive, save_archive
-from .compiler import Compiler
+from .archive import SUFFIX, DamagedArchive, Metadata, load_archive, save_archive
+from .atomic import write_bytes_atomic
 from .errors import Position, UserError
-from .layout import declared_layouts
-from .lexicon import lexicon_files
-from .loader import load_model
-from .metadata import build_metadata, file_hash, sources_digest
 from .runtime import Language
-from .syntax import parse_grammar_file
+from .sourcehash import file_hash, sources_digest
+
+if TYPE_CHECKING:  # the compiler and the grammar parser are imported only when something is compiled
+    import pynini
+
+    from . import model as m
 
 GRAMMAR_SUFFIX = ".mfg"
 PACKAGE_ROOT = Path(__file__).resolve().parent.parent
@@ -101,10 +101,55 @@ def find_grammar(name_or_path: str | Path) -> Path:
 
 def source_files(grammar_path: Path) -> tuple[str, list[str]]:
     """The grammar's name, and the grammar file, the files it includes and its lexicon files (for the
-    source hash), without compiling."""
+    source hash), without compiling (the grammar is parsed)."""
+    name, files, _ = _parsed_sources(grammar_path)
+    return name, files
+
+
+def _parsed_sources(grammar_path: Path) -> tuple[str, list[str], dict[str, list[str]]]:
+    from .lexicon import lexicon_files
+    from .syntax import parse_grammar_file
+
     grammar = parse_grammar_file(grammar_path)
     included = [str(p) for p in grammar.sources[1:]]
-    return grammar.name, [str(grammar_path), *included] + [str(p) for p in lexicon_files(grammar)]
+    files = [str(grammar_path), *included] + [str(p) for p in lexicon_files(grammar)]
+    base = Path(grammar.path).parent
+    folders = {str(d): _listing(d) for d in ((base / p).resolve() for p in grammar.lexicon_paths) if d.is_dir()}
+    return grammar.name, files, folders
+
+
+def _listing(folder: Path) -> list[str]:
+    """The lexicon files of a lexicon folder (what :func:`morphfst.lexicon.lexicon_files` reads)."""
+    return sorted(p.name for p in folder.glob("*.tsv"))
+
+
+def cache_key(grammar_path: Path) -> tuple[str, list[str], str]:
+    """The grammar's name, its source files and the digest that names its compiled file in the cache.
+
+    The digest is a hash of the bytes of every source file (:func:`morphfst.metadata.sources_digest`).
+    Which files those are is only known by parsing the grammar (its includes and lexicon lines), so
+    the list is kept in a small manifest in the cache, keyed by the grammar's path: when the listed
+    files still hash to the recorded digest and the lexicon folders hold the same files, the grammar
+    is not parsed at all (its own bytes, which say what it includes, are among the hashed ones).
+    """
+    manifest = cache_dir() / "sources" / (hashlib.sha256(str(grammar_path.resolve()).encode()).hexdigest()[:16] + ".json")
+    try:
+        recorded = json.loads(manifest.read_text("utf-8"))
+        files = [str(f) for f in recorded["files"]]
+        if all(_listing(Path(d)) == names for d, names in recorded["folders"].items()):
+            digest = sources_digest(files)
+            if digest == recorded["digest"] and files[0] == str(grammar_path):
+                return str(recorded["name"]), files, digest
+    except (OSError, ValueError, KeyError, TypeError, AttributeError):
+        pass
+    name, files, folders = _parsed_sources(grammar_path)
+    digest = sources_digest(files)
+    record = {"grammar": str(grammar_path.resolve()), "name": name, "files": files, "folders": folders, "digest": digest}
+    try:
+        write_bytes_atomic(manifest, json.dumps(record, ensure_ascii=False).encode("utf-8"))
+    except (UserError, OSError):
+        pass  # an unwritable cache: the grammar is parsed again next time
+    return name, files, digest
 
 
 def compile_in_memory(
@@ -113,6 +158,11 @@ def compile_in_memory(
     extra_entries: list[m.LexEntry] | None = None,
 ) -> tuple[dict[str, pynini.Fst], dict[str, Any]]:
     """Compile a grammar and its lexicons; returns the transducers and the metadata."""
+    from .compiler import Compiler
+    from .layout import declared_layouts
+    from .loader import load_model
+    from .metadata import build_metadata
+
     t0 = time.perf_counter()
     grammar = load_model(grammar_path, extra_entries)
     compiler = Compiler(grammar)
@@ -213,22 +263,31 @@ def clear_cache() -> list[Path]:
 
 def _with_current_sources(meta: dict[str, Any], grammar_path: Path, files: list[str]) -> dict[str, Any]:
     """The metadata with the paths of the sources loaded now (a cache entry may have been compiled from
-    another copy of the same files: the cache is keyed by content)."""
-    meta = dict(meta)
+    another copy of the same files: the cache is keyed by content). The sources' hashes are those
+    recorded: the cache key has just checked that the files hash to the same digest."""
     old = [str(s.get("path", "")) for s in meta.get("sources") or []]
+    hashes = [str(s.get("sha256", "")) for s in meta.get("sources") or []]
     new = [str(Path(p).resolve()) for p in files]
+    meta = meta.copy() if isinstance(meta, Metadata) else Metadata(meta)
     meta["grammar_path"] = str(grammar_path.resolve())
-    meta["sources"] = [{"path": p, "sha256": file_hash(p)} for p in new]
     if len(old) == len(new):
+        meta["sources"] = [{"path": p, "sha256": h} for p, h in zip(new, hashes)]
         moved = dict(zip(old, new))
+        if old != new:
 
-        def relocated(entry: dict[str, Any]) -> dict[str, Any]:
-            file = entry.get("file")
-            if not file:
-                return entry
-            return entry | {"file": moved.get(file) or moved.get(str(Path(file).resolve()), file)}
+            def relocated(entry: dict[str, Any]) -> dict[str, Any]:
+                file = entry.get("file")
+                if not file:
+                    return entry
+                return entry | {"file": moved.get(file) or moved.get(str(Path(file).resolve()), file)}
 
-        meta["lexicon"] = [relocated(e) for e in meta.get("lexicon") or []]
+            if meta.is_loaded("lexicon"):
+                meta["lexicon"] = [relocated(e) for e in meta["lexicon"]]
+            elif "lexicon" in meta:
+                read = meta._lazy["lexicon"]
+                meta.defer("lexicon", lambda: [relocated(e) for e in read()])
+    else:
+        meta["sources"] = [{"path": p, "sha256": file_hash(p)} for p in new]
     return meta
 
 
@@ -247,12 +306,11 @@ def load(name_or_path: str | Path, recompile: bool = False) -> Language:
             )
         return Language(fsts, meta, str(path))
     try:
-        name, files = source_files(path)
-        digest = sources_digest(files)
+        name, files, digest = cache_key(path)
     except OSError as exc:
         raise UserError(f"cannot read a source file: {exc}", Position(str(path))) from None
     cached = cache_dir() / f"{name}-{digest[:16]}{SUFFIX}"
-    loaded: tuple[dict[str, pynini.Fst], dict[str, Any]] | None = None
+    loaded: tuple[Mapping[str, pynini.Fst], dict[str, Any]] | None = None
     if not recompile and cached.is_file():
         try:
             loaded = load_archive(cached)
@@ -272,5 +330,4 @@ def load(name_or_path: str | Path, recompile: bool = False) -> Language:
                 f"warning: cannot write the compiled-file cache {cache_dir()} ({exc.message.partition(': ')[2].split(';')[0]}); "
                 "compiled in memory for this run only; set MORPHFST_CACHE to a writable directory to reuse compiled files"
             )
-    fsts, meta = loaded
-    return Language(fsts, _with_current_sources(meta, path, files), where)
+    return Language(loaded[0], _with_current_sources(loaded[1], path, files), where)

@@ -31,12 +31,14 @@ with the layout of their new part of speech.
 from __future__ import annotations
 
 import itertools
+from collections.abc import Iterable, Sequence
 from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
 from .errors import Position, UserError
-from .paradigm import Cell, Paradigm
+from .paradigm import Cell, Paradigm, make_bound, paradigms, trial_paradigm
+from .runtime import Language
 
 MAX_DEFAULT_COLUMNS = 4
 LISTING_MAX_CELLS = 3  # a group of this few cells is listed, one row per cell
@@ -497,3 +499,34 @@ def layout_override(meta: dict[str, Any], pos: str, rows: list[str], columns: li
         spec.labels.update(raw["labels"])
     check_layout(meta, spec)
     return spec
+
+
+def paradigm_data(
+    lang: Language,
+    lemma: str,
+    depth: int = 0,
+    require: Iterable[str] = (),
+    exclude: Iterable[str] = (),
+    pos: str | None = None,
+    klass: str | None = None,
+    stem: str | None = None,
+    flags: Sequence[str] = (),
+    tables: bool = False,
+) -> list[dict[str, Any]]:
+    """Every reading of ``lemma`` as plain data (dicts and lists), for the Python API: its cells, and
+    with ``tables=True`` also its sections of laid-out tables (rows, columns and cells).
+
+    With ``klass`` the word is compiled as a new entry of that class (it need not be in the lexicon)::
+
+        from morphfst.layout import paradigm_data
+        paradigm_data(tur, "ev")[0]["cells"][0]      # {'analysis': 'ev N;SG;PSS1S;NOM', 'forms': [...], ...}
+        paradigm_data(tur, "kalem", klass="noun", tables=True)[0]["sections"]
+    """
+    bound = make_bound(lang, depth, require, exclude, layout_only=True)
+    if klass:
+        found = [trial_paradigm(lang, lemma, klass, pos=pos, stem=stem, flags=flags, bound=bound)]
+    else:
+        found = paradigms(lang, lemma, bound, pos)
+    if not tables:
+        return [p.to_dict() for p in found]
+    return [arrange(p, lang.meta).to_dict() for p in found]

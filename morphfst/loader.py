@@ -5,6 +5,7 @@ from __future__ import annotations
 from pathlib import Path
 
 from . import model as m
+from .compiler import Compiler
 from .errors import Position, UserError
 from .lexicon import read_lexicon
 from .normalize import make_normalizer
@@ -28,7 +29,7 @@ def load_model(path: str | Path, extra_entries: list[m.LexEntry] | None = None) 
     grammar.lexicon = read_lexicon(grammar, fold)
     if extra_entries:
         grammar.lexicon.extend(extra_entries)
-    derive_stems(grammar, grammar.lexicon)
+    derive_stems(grammar, grammar.lexicon, make=Compiler)
     if not grammar.lexicon:
         raise UserError("the lexicon is empty", Position(grammar.path), hint="add a lexicon line naming a TSV file or directory")
     return grammar

@@ -7,52 +7,15 @@ lexicon entries, normalization, inline tests, layouts, and the source files with
 
 from __future__ import annotations
 
-import hashlib
 from pathlib import Path
 from typing import Any
 
 from . import model as m
+from .sourcehash import COMPILER_MODULES, compiler_digest, file_hash, sources_digest
 from .symbols import SymbolSpace
 from .version import FORMAT_VERSION, __version__
 
-
-def file_hash(path: str | Path) -> str:
-    return hashlib.sha256(Path(path).read_bytes()).hexdigest()
-
-
-COMPILER_MODULES = (
-    "grammar.lark",
-    "syntax.py",
-    "model.py",
-    "validate.py",
-    "lexicon.py",
-    "loader.py",
-    "compiler.py",
-    "symbols.py",
-    "fstutil.py",
-    "normalize.py",
-    "metadata.py",
-)
-
-
-def compiler_digest() -> str:
-    """A hash of the compiler's own source, so a changed compiler recompiles cached languages."""
-    h = hashlib.sha256()
-    here = Path(__file__).resolve().parent
-    for name in COMPILER_MODULES:
-        path = here / name
-        if path.exists():
-            h.update(path.read_bytes())
-    return h.hexdigest()
-
-
-def sources_digest(paths: list[str]) -> str:
-    """One hash over the compiler (version and source) and every source file (name and content)."""
-    h = hashlib.sha256(f"morphfst {__version__} format {FORMAT_VERSION} {compiler_digest()}".encode())
-    for p in paths:
-        h.update(Path(p).name.encode())
-        h.update(Path(p).read_bytes())
-    return h.hexdigest()
+__all__ = ["COMPILER_MODULES", "build_metadata", "compiler_digest", "file_hash", "sources_digest"]
 
 
 def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:

@@ -11,6 +11,7 @@ from dataclasses import dataclass, field
 from typing import Literal
 
 from .errors import Position
+from .normalize import Normalization
 
 # ---------------------------------------------------------------------------------------------
 # Rule and pattern expressions (regular expressions over the grammar's symbols)
@@ -180,12 +181,21 @@ class Rule:
 
 
 @dataclass
-class Normalization:
-    """Input normalization: NFC, language-specific case folding, apostrophe variants."""
+class Compound:
+    """A ``compound`` block (analysis only): a word of the lexicon whose part of speech or class is in
+    ``first``, in one of the feature bundles of ``forms``, joined at a seam to further parts; the last
+    part is a word whose part of speech or class is in ``last``, inflected. At most ``parts`` parts,
+    each non-last part of at least ``min_letters`` letters; each seam adds ``weight`` (and the weight
+    of the heaviest lexicon entry, see the compiler)."""
 
-    maps: list[tuple[str, str]] = field(default_factory=list)
-    lowercase: bool = True
-    apostrophes: list[str] = field(default_factory=list)
+    first: list[str]
+    forms: list[list[str]]
+    last: list[str]
+    parts: int
+    min_letters: int
+    weight: float
+    pos: Position
+    lines: dict[str, Position] = field(default_factory=dict)  # statement keyword -> where it stands
 
 
 @dataclass
@@ -252,6 +262,7 @@ class Grammar:
     normalization: Normalization = field(default_factory=Normalization)
     tests: list[TestCase] = field(default_factory=list)
     layouts: list[Layout] = field(default_factory=list)
+    compounds: list[Compound] = field(default_factory=list)
     lexicon: list[LexEntry] = field(default_factory=list)
     sources: list[str] = field(default_factory=list)  # every file read, for the source hash
 

@@ -8,8 +8,16 @@ from __future__ import annotations
 
 import unicodedata
 from collections.abc import Callable
+from dataclasses import dataclass, field
 
-from .model import Normalization
+
+@dataclass
+class Normalization:
+    """Input normalization: NFC, language-specific case folding, apostrophe variants."""
+
+    maps: list[tuple[str, str]] = field(default_factory=list)
+    lowercase: bool = True
+    apostrophes: list[str] = field(default_factory=list)
 
 
 def make_normalizer(norm: Normalization) -> Callable[[str], str]:

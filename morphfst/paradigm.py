@@ -594,10 +594,11 @@ def trial_entry(
                 where,
                 hint="give the underlying stem with --stem, using the grammar's letters and archiphonemes",
             )
+    from .compiler import Compiler
     from .stemrules import derive_stems
 
     entry = m.LexEntry(lemma, klass, pos, gloss, 0.0, symbols, list(flags), where, stem_given=stem is not None)
-    derive_stems(grammar, [entry])
+    derive_stems(grammar, [entry], make=Compiler)
     return entry
 
 
@@ -662,39 +663,6 @@ def trial_paradigm(
 
 # ---------------------------------------------------------------------------------------------
 # Plain-data helpers
-
-
-def paradigm_data(
-    lang: Language,
-    lemma: str,
-    depth: int = 0,
-    require: Iterable[str] = (),
-    exclude: Iterable[str] = (),
-    pos: str | None = None,
-    klass: str | None = None,
-    stem: str | None = None,
-    flags: Sequence[str] = (),
-    tables: bool = False,
-) -> list[dict[str, Any]]:
-    """Every reading of ``lemma`` as plain data (dicts and lists), for the Python API: its cells, and
-    with ``tables=True`` also its sections of laid-out tables (rows, columns and cells).
-
-    With ``klass`` the word is compiled as a new entry of that class (it need not be in the lexicon)::
-
-        from morphfst.paradigm import paradigm_data
-        paradigm_data(tur, "ev")[0]["cells"][0]      # {'analysis': 'ev N;SG;PSS1S;NOM', 'forms': [...], ...}
-        paradigm_data(tur, "kalem", klass="noun", tables=True)[0]["sections"]
-    """
-    bound = make_bound(lang, depth, require, exclude, layout_only=True)
-    if klass:
-        found = [trial_paradigm(lang, lemma, klass, pos=pos, stem=stem, flags=flags, bound=bound)]
-    else:
-        found = paradigms(lang, lemma, bound, pos)
-    if not tables:
-        return [p.to_dict() for p in found]
-    from .layout import arrange
-
-    return [arrange(p, lang.meta).to_dict() for p in found]
 
 
 def iter_forms(cells: Iterable[Cell]) -> Iterator[tuple[str, str, str]]:

@@ -8,7 +8,7 @@ with glosses and features. Ties are broken by the analysis text, so the order is
 from __future__ import annotations
 
 import re
-from collections.abc import Sequence
+from collections.abc import Mapping, Sequence
 from functools import lru_cache
 from typing import Any
 
@@ -16,8 +16,7 @@ import pynini
 
 from .errors import UserError
 from .fstutil import Arc, Weight, acc, is_empty, paths
-from .model import Normalization
-from .normalize import make_normalizer, restore_case
+from .normalize import Normalization, make_normalizer, restore_case
 from .results import Analysis, Form, Segmentation
 from .symbols import PRIVATE_START, SymbolSpace
 from .walk import FastAnalyzer
@@ -30,7 +29,7 @@ MAX_WORD = 1000  # longer tokens are not words; they get no analysis
 class Language:
     """A compiled language. Build one with :func:`morphfst.load`."""
 
-    def __init__(self, fsts: dict[str, pynini.Fst], meta: dict[str, Any], path: str | None = None) -> None:
+    def __init__(self, fsts: Mapping[str, pynini.Fst], meta: dict[str, Any], path: str | None = None) -> None:
         self.fsts = fsts
         self.meta = meta
         self.path = path
@@ -45,9 +44,8 @@ class Language:
         for slot_name, slot in meta["slots"].items():
             for affix in slot["affixes"]:
                 self.affixes[affix["id"]] = affix | {"slot": slot_name}
-        self.glosses: dict[tuple[str, str], str] = {}
-        for entry in meta["lexicon"]:
-            self.glosses.setdefault((entry["lemma"], entry["pos"]), entry["gloss"])
+        self._glosses: dict[tuple[str, str], str] | None = None
+        self._by_lemma: dict[str, list[dict[str, Any]]] | None = None
         self.plus = self.space.code("+")
         self.analyze_cached = lru_cache(maxsize=65536)(self._analyze_tuple)
         self._fast: FastAnalyzer | None = None
@@ -180,17 +178,41 @@ class Language:
 
     # ---- information -----------------------------------------------------------------------------------
     @property
+    def glosses(self) -> dict[tuple[str, str], str]:
+        """The gloss of every (lemma, part of speech) of the lexicon (the first entry's), read on first use."""
+        if self._glosses is None:
+            if not _held(self.meta, "lexicon") and "glosses" in self.meta:
+                self._glosses = self.meta["glosses"]
+            else:
+                found: dict[tuple[str, str], str] = {}
+                for entry in self.meta["lexicon"]:
+                    found.setdefault((entry["lemma"], entry["pos"]), entry["gloss"])
+                self._glosses = found
+        return self._glosses
+
+    @property
     def lexicon(self) -> list[dict[str, Any]]:
         return list(self.meta["lexicon"])
 
     def entries(self, lemma: str) -> list[dict[str, Any]]:
-        """Lexicon entries whose lemma is ``lemma``."""
-        return [e for e in self.meta["lexicon"] if e["lemma"] == lemma]
+        """Lexicon entries whose lemma is ``lemma`` (an index by lemma is built on first use)."""
+        if self._by_lemma is None:
+            index: dict[str, list[dict[str, Any]]] = {}
+            for entry in self.meta["lexicon"]:
+                index.setdefault(entry["lemma"], []).append(entry)
+            self._by_lemma = index
+        return list(self._by_lemma.get(lemma, ()))
 
     def stats(self) -> dict[str, Any]:
         from .fstutil import size
 
         return {name: dict(zip(("states", "arcs"), size(f))) for name, f in self.fsts.items()}
+
+
+def _held(meta: dict[str, Any], key: str) -> bool:
+    """True when ``meta`` holds ``key`` already (a compiled file's metadata reads its lexicon on first use)."""
+    is_loaded = getattr(meta, "is_loaded", None)
+    return bool(is_loaded(key)) if is_loaded is not None else key in meta
 
 
 def _permutations(codes: list[str]) -> pynini.Fst:

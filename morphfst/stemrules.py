@@ -14,16 +14,27 @@ error at the lexicon line.
 from __future__ import annotations
 
 from collections import defaultdict
-from typing import TYPE_CHECKING
+from collections.abc import Callable
+from typing import Protocol
 
 import pynini
 
 from . import model as m
 from .errors import UserError
 from .fstutil import acc, chars, cross, paths, union
+from .symbols import SymbolSpace
 
-if TYPE_CHECKING:
-    from .compiler import Compiler
+
+class Compiler(Protocol):
+    """What stem rules need of :class:`morphfst.compiler.Compiler` (which calls this module, so it is
+    named here rather than imported)."""
+
+    g: m.Grammar
+    space: SymbolSpace
+    sigma_star: pynini.Fst
+    underlying_codes: list[str]
+
+    def rule_fst(self, rule: m.Rule, cache_key: str | None = None) -> pynini.Fst: ...
 
 
 def cascade(compiler: Compiler, groups: tuple[str, ...]) -> pynini.Fst:
@@ -52,8 +63,14 @@ def lemma_to_stem(compiler: Compiler, klass: m.StemClass, lemmas: pynini.Fst) ->
     return pynini.compose(fst, drop_end.optimize()).optimize()
 
 
-def derive_stems(grammar: m.Grammar, entries: list[m.LexEntry], compiler: Compiler | None = None) -> None:
-    """Rewrite in place the stems of ``entries`` that were not given, by their classes' stem rules."""
+def derive_stems(
+    grammar: m.Grammar,
+    entries: list[m.LexEntry],
+    compiler: Compiler | None = None,
+    make: Callable[[m.Grammar], Compiler] | None = None,
+) -> None:
+    """Rewrite in place the stems of ``entries`` that were not given, by their classes' stem rules
+    (compiled by ``compiler``, or by one ``make`` builds when some entry needs it)."""
     todo: dict[tuple[str, ...], list[m.LexEntry]] = defaultdict(list)
     for e in entries:
         klass = grammar.classes.get(e.klass)
@@ -62,9 +79,9 @@ def derive_stems(grammar: m.Grammar, entries: list[m.LexEntry], compiler: Compil
     if not todo:
         return
     if compiler is None:
-        from .compiler import Compiler
-
-        compiler = Compiler(grammar)
+        if make is None:
+            raise ValueError("derive_stems needs a compiler or a way to make one")
+        compiler = make(grammar)
     s = compiler.space
     start, end = s.code(m.WORD_START), s.code(m.WORD_END)
     for groups, group in todo.items():

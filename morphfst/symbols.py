@@ -10,6 +10,8 @@ from __future__ import annotations
 
 from dataclasses import dataclass, field
 
+GUESS_SYMBOL = "mark:guess"  # the marker of a guessed analysis (kind "guess"), right after the part of speech
+COMPOUND_SEAM = "seam"  # the seam between compound parts (kind "boundary"), on both tapes of the bounded machine
 PRIVATE_START = 0xF0000
 PRIVATE_END = 0x10FFFD
 

@@ -1,11 +1,11 @@
-"""A fast path for analysis: a transducer's arcs held in Python dicts, walked one word at a time.
+"""A fast path for analysis: a transducer's arcs walked from Python, one word at a time.
 
 Calling OpenFst for every word (build an acceptor, compose, enumerate paths) costs a few hundred
-microseconds, mostly in the crossing between Python and C++. For the small, arc-sorted transducers
-of a grammar it is faster to copy the arcs once into Python dicts and walk them: at load time, for
-every state, the arcs that read no input (epsilons, and the morph boundary ``+`` of the bounded
-machine, which the surface word does not contain) are folded into the arcs that read a letter, so a
-walk is one dict lookup per live path and input letter.
+microseconds, mostly in the crossing between Python and C++. For the arc-sorted transducers of a
+grammar it is faster to read each state's arcs once into Python dicts, with the arcs that read no
+input (epsilons, and the morph boundary ``+`` of the bounded machine, which the surface word does not
+contain) folded into the arcs that read a letter, and to walk them: see :class:`ArcWalker`. States
+are read when a walk first reaches them, so loading costs nothing whatever the lexicon's size.
 
 A walk returns, for each accepting path, the side tape (the input letters with the skipped boundary
 symbols put back, i.e. the bounded surface), the output string and the path weight (tropical
@@ -16,79 +16,104 @@ from __future__ import annotations
 
 import heapq
 import re
-from collections.abc import Callable, Iterable
+from collections.abc import Callable, Iterable, Mapping
 from dataclasses import MISSING, fields
-from typing import TYPE_CHECKING, Any
+from typing import Any, Protocol
 
 import pynini
 
 from .fstutil import NO_STATE_ID, Weight
 from .results import Analysis, Morph
+from .symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 
-if TYPE_CHECKING:
-    from .runtime import Language
+
+class Language(Protocol):
+    """What the fast path reads of a compiled language (:class:`morphfst.runtime.Language` has it;
+    named here so that this module does not import the runtime, which imports it)."""
+
+    fsts: Mapping[str, pynini.Fst]
+    space: SymbolSpace
+    plus: str
+    affixes: dict[int, dict[str, Any]]
+    ud: dict[str, str]
+
+    @property
+    def glosses(self) -> dict[tuple[str, str], str]: ...
+
+    def normalize(self, word: str) -> str: ...
+
+    def acceptable(self, surface: str) -> bool: ...
+
 
 Step = tuple[str, str, float, int]  # side-tape text, output text, weight, next state
 Path = tuple[int, str, str, float]  # state, side-tape text, output text, weight
+Move = tuple[int, dict[int, list[Path]]]  # next set of states, and the steps into each of its states
+_UNSEEN: Any = object()
+_INF = float("inf")
+
+
+class _Cycle(Exception):
+    """A cycle of arcs that read no input was met while folding closures."""
+
 
 MAX_CLOSURE_DEPTH = 64  # longest chain of arcs that read no input (a guard against epsilon cycles)
-MAX_LIVE = 4096  # live partial paths kept per input position (the best ones by weight)
+MAX_LIVE = 4096  # partial paths kept per input position (the best ones by weight)
+MAX_SETS = 200_000  # sets of states remembered before the subset automaton is started afresh
 MAX_GUESSES = 10  # guessed analyses kept per word
 MAX_PATHS = 200  # paths read from one walk
 MAX_GUESS_LENGTH = 60  # longer words get no guess (they are rarely words, and guessing grows with length)
 
 
 class ArcWalker:
-    """The arcs of one transducer in Python dicts; :meth:`walk` finds every path for an input string.
+    """The arcs of one transducer walked from Python; :meth:`walk` finds every path for an input string.
 
     ``skip`` names input labels (one-character codes) that a walk may take without reading input;
     they are written to the side tape, so the side tape of a path is the full input string of the
     transducer (for the bounded analyzer: the surface with its morph boundaries).
+
+    Nothing is built up front, so a language loads in constant time whatever its size. A state's
+    arcs are read from the transducer the first time a walk reaches it, and its epsilon closure is
+    folded into its letter arcs (one dict lookup per state and letter). A walk then runs in two
+    passes. Forward, it follows the *set* of live states, letter by letter, through a lazily built
+    subset automaton (Rabin & Scott 1959): each (set, letter) move is computed once and remembered,
+    so a word whose prefixes were seen before costs one dict lookup per letter and no string is
+    built. Backward, from the final states of the last set, it follows the remembered predecessor
+    steps of each move and builds the side and output strings of the accepting paths only: the
+    partial paths that would have died are never extended.
     """
 
     def __init__(self, fst: pynini.Fst, skip: Iterable[str] = ()) -> None:
-        skip_labels = {ord(c) for c in skip}
-        zero = Weight.zero(fst.weight_type())
-        start = fst.start()
-        self.start = start
-        n = fst.num_states()
-        consume: list[dict[str, list[Step]]] = [{} for _ in range(n)]
-        free: list[list[Step]] = [[] for _ in range(n)]
-        final: list[float | None] = [None] * n
-        if start != NO_STATE_ID:
-            for state in fst.states():
-                w = fst.final(state)
-                if w != zero:
-                    final[state] = float(w)
-                for arc in fst.arcs(state):
-                    out = chr(arc.olabel) if arc.olabel else ""
-                    weight = float(arc.weight)
-                    if arc.ilabel == 0:
-                        free[state].append(("", out, weight, arc.nextstate))
-                    elif arc.ilabel in skip_labels:
-                        free[state].append((chr(arc.ilabel), out, weight, arc.nextstate))
-                    else:
-                        consume[state].setdefault(chr(arc.ilabel), []).append(("", out, weight, arc.nextstate))
-        closures = [self._closure(state, free) for state in range(n)]
-        # Fold each state's closure into its letter arcs: trans[state][letter] = steps that read the letter.
-        self.trans: list[dict[str, list[Step]]] = []
-        self.finals: list[list[tuple[str, str, float]]] = []
-        for state in range(n):
-            table: dict[str, list[Step]] = {}
-            ends: list[tuple[str, str, float]] = []
-            for target, side, out, weight in closures[state]:
-                for letter, steps in consume[target].items():
-                    bucket = table.setdefault(letter, [])
-                    for _, o2, w2, nxt in steps:
-                        bucket.append((side + letter, out + o2, weight + w2, nxt))
-                if final[target] is not None:
-                    ends.append((side, out, weight + final[target]))  # type: ignore[operator]
-            self.trans.append(table)
-            self.finals.append(ends)
-        self.num_states = n
+        self.fst = fst
+        self.start = fst.start()
+        self._skip = {ord(c) for c in skip}
+        self._zero = Weight.zero(fst.weight_type())
+        self._tables: dict[int, tuple[dict[str, list[Step]], list[tuple[str, str, float]]]] = {}
+        self._raw: dict[int, tuple[list[Step], dict[str, list[Step]], float | None]] = {}
+        self._reach_memo: dict[int, list[Path] | None] = {}
+        self._reset_sets()
 
-    @staticmethod
-    def _closure(state: int, free: list[list[Step]]) -> list[Path]:
+    # ---- one state: its arcs, closure and folded table (built on first use) ---------------------------
+    def _arcs(self, state: int) -> tuple[list[Step], dict[str, list[Step]], float | None]:
+        """The arcs of ``state`` that read no input, those that read a letter (by letter), its final weight."""
+        raw = self._raw.get(state)
+        if raw is None:
+            free: list[Step] = []
+            consume: dict[str, list[Step]] = {}
+            skip = self._skip
+            for arc in self.fst.arcs(state):
+                out = chr(arc.olabel) if arc.olabel else ""
+                weight = float(arc.weight)
+                if arc.ilabel == 0:
+                    free.append(("", out, weight, arc.nextstate))
+                elif arc.ilabel in skip:
+                    free.append((chr(arc.ilabel), out, weight, arc.nextstate))
+                else:
+                    consume.setdefault(chr(arc.ilabel), []).append(("", out, weight, arc.nextstate))
+            w = self.fst.final(state)
+            raw = self._raw[state] = (free, consume, float(w) if w != self._zero else None)
+        return raw
+
+    def _closure(self, state: int) -> list[Path]:
         """Every (state, side text, output, weight) reachable from ``state`` by arcs that read no input."""
         found: dict[tuple[int, str, str], float] = {(state, "", ""): 0.0}
         todo: list[tuple[int, str, str, float, int]] = [(state, "", "", 0.0, 0)]
@@ -96,7 +121,7 @@ class ArcWalker:
             here, side, out, weight, depth = todo.pop()
             if depth >= MAX_CLOSURE_DEPTH:
                 continue
-            for s2, o2, w2, nxt in free[here]:
+            for s2, o2, w2, nxt in self._arcs(here)[0]:
                 key = (nxt, side + s2, out + o2)
                 total = weight + w2
                 if key not in found or total < found[key]:
@@ -104,36 +129,139 @@ class ArcWalker:
                     todo.append((nxt, key[1], key[2], total, depth + 1))
         return [(k[0], k[1], k[2], w) for k, w in found.items()]
 
+    def _reach(self, state: int, depth: int = 0) -> list[Path]:
+        """The (state, side text, output, weight) reachable from ``state`` by arcs that read no input
+        and that read a letter or end a path from there; memoized, so a chain of such arcs shared by
+        many states is followed once. Raises :class:`_Cycle` on a cycle of such arcs."""
+        memo = self._reach_memo
+        found = memo.get(state, _UNSEEN)
+        if found is not _UNSEEN:
+            if found is None:
+                raise _Cycle
+            return found  # type: ignore[no-any-return]
+        if depth >= MAX_CLOSURE_DEPTH:
+            raise _Cycle
+        memo[state] = None
+        free, consume, final = self._arcs(state)
+        best: dict[tuple[int, str, str], float] = {}
+        if consume or final is not None:
+            best[(state, "", "")] = 0.0
+        for s2, o2, w2, nxt in free:
+            for target, side, out, weight in self._reach(nxt, depth + 1):
+                key = (target, s2 + side, o2 + out)
+                total = w2 + weight
+                if total < best.get(key, _INF):
+                    best[key] = total
+        result = memo[state] = [(k[0], k[1], k[2], w) for k, w in best.items()]
+        return result
+
+    def _table(self, state: int) -> tuple[dict[str, list[Step]], list[tuple[str, str, float]]]:
+        """The steps that read each letter from ``state`` (closure folded in) and its final pieces."""
+        table = self._tables.get(state)
+        if table is None:
+            try:
+                reach = self._reach(state)
+            except _Cycle:  # a cycle of arcs that read nothing (a zero-morph derivation loop): bounded walk
+                for key, value in list(self._reach_memo.items()):
+                    if value is None:
+                        del self._reach_memo[key]
+                reach = self._closure(state)
+            steps: dict[str, list[Step]] = {}
+            ends: list[tuple[str, str, float]] = []
+            for target, side, out, weight in reach:
+                _, consume, final = self._arcs(target)
+                for letter, arcs in consume.items():
+                    bucket = steps.setdefault(letter, [])
+                    for _, o2, w2, nxt in arcs:
+                        bucket.append((side + letter, out + o2, weight + w2, nxt))
+                if final is not None:
+                    ends.append((side, out, weight + final))
+            table = self._tables[state] = (steps, ends)
+        return table
+
+    # ---- sets of states: the subset automaton, built as words need it ------------------------------
+    def _reset_sets(self) -> None:
+        self._sets: list[tuple[int, ...]] = []
+        self._ids: dict[tuple[int, ...], int] = {}
+        self._moves: list[dict[str, Move | None]] = []
+        self._ends: list[list[Path] | None] = []
+        if self.start != NO_STATE_ID:
+            self._set_id((self.start,))
+
+    def _set_id(self, states: tuple[int, ...]) -> int:
+        ident = self._ids.get(states)
+        if ident is None:
+            ident = self._ids[states] = len(self._sets)
+            self._sets.append(states)
+            self._moves.append({})
+            self._ends.append(None)
+        return ident
+
+    def _advance(self, ident: int, letter: str) -> Move | None:
+        """The move of set ``ident`` on ``letter``: the next set and, for each of its states, the steps
+        that lead there (``None`` when no state reads the letter)."""
+        back: dict[int, list[Path]] = {}
+        for state in self._sets[ident]:
+            steps = self._table(state)[0].get(letter)
+            if steps:
+                for side, out, weight, target in steps:
+                    back.setdefault(target, []).append((state, side, out, weight))
+        move = (self._set_id(tuple(sorted(back))), back) if back else None
+        self._moves[ident][letter] = move
+        return move
+
+    def _final_pieces(self, ident: int) -> list[Path]:
+        pieces = self._ends[ident]
+        if pieces is None:
+            pieces = self._ends[ident] = [
+                (state, side, out, weight) for state in self._sets[ident] for side, out, weight in self._table(state)[1]
+            ]
+        return pieces
+
+    def _forward(self, word: str) -> tuple[int, list[dict[int, list[Path]]]] | None:
+        """The set of states after ``word`` and the predecessor steps of each move (``None``: no path)."""
+        if len(self._sets) > MAX_SETS:
+            self._reset_sets()
+        moves = self._moves
+        ident = 0
+        trail: list[dict[int, list[Path]]] = []
+        for letter in word:
+            move = moves[ident].get(letter, _UNSEEN)
+            if move is _UNSEEN:
+                move = self._advance(ident, letter)
+            if move is None:
+                return None
+            ident = move[0]  # type: ignore[index]
+            trail.append(move[1])  # type: ignore[index]
+        return ident, trail
+
     def walk(self, word: str, limit: int = 1000, best: bool = False) -> list[tuple[str, str, float]]:
         """(side tape, output, weight) of every accepting path for ``word``, at most ``limit``, best first.
 
         With ``best``, only the best paths are sought: at each input position a state keeps only the
-        partial paths of its lowest weight (ties kept), which is exact for the best complete paths
-        because what follows a state costs the same whichever way the state was reached.
+        partial paths (from there to the end) of its lowest weight, ties kept, which is exact for the
+        best complete paths because what leads to a state costs the same whichever way it continues.
         """
         if self.start == NO_STATE_ID:
             return []
-        trans = self.trans
-        live: list[Path] = [(self.start, "", "", 0.0)]
-        for letter in word:
+        found = self._forward(word)
+        if found is None:
+            return []
+        ident, trail = found
+        partial = self._final_pieces(ident)
+        if not partial:
+            return []
+        for back in reversed(trail):
             nxt: list[Path] = []
-            for state, side, out, weight in live:
-                steps = trans[state].get(letter)
-                if steps:
-                    for s2, o2, w2, target in steps:
-                        nxt.append((target, side + s2, out + o2, weight + w2))
-            if not nxt:
-                return []
+            for state, side, out, weight in partial:
+                for before, s2, o2, w2 in back[state]:
+                    nxt.append((before, s2 + side, o2 + out, w2 + weight))
             if best and len(nxt) > 1:
                 nxt = _best_per_state(nxt)
             if len(nxt) > MAX_LIVE:
                 nxt = heapq.nsmallest(MAX_LIVE, nxt, key=lambda p: p[3])
-            live = nxt
-        results: list[tuple[str, str, float]] = []
-        finals = self.finals
-        for state, side, out, weight in live:
-            for s2, o2, w2 in finals[state]:
-                results.append((side + s2, out + o2, weight + w2))
+            partial = nxt
+        results = [(side, out, weight) for _, side, out, weight in partial]
         if len(results) > 1:
             results.sort(key=lambda r: (r[2], r[1]))
         return results[:limit]
@@ -142,21 +270,14 @@ class ArcWalker:
         """True when some path reads ``word`` (no outputs are built)."""
         if self.start == NO_STATE_ID:
             return False
-        trans = self.trans
-        live = {self.start}
-        for letter in word:
-            nxt = set()
-            for state in live:
-                for step in trans[state].get(letter, ()):
-                    nxt.add(step[3])
-            if not nxt:
-                return False
-            live = nxt
-        return any(self.finals[state] for state in live)
+        found = self._forward(word)
+        return found is not None and bool(self._final_pieces(found[0]))
 
     def size(self) -> int:
-        """Number of folded steps held (a measure of the table's memory)."""
-        return sum(len(steps) for table in self.trans for steps in table.values()) + sum(len(f) for f in self.finals)
+        """Number of folded steps built so far (a measure of the tables' memory; they grow with use)."""
+        return sum(len(steps) for table, _ in self._tables.values() for steps in table.values()) + sum(
+            len(ends) for _, ends in self._tables.values()
+        )
 
 
 def _builder(cls: type) -> Callable[..., Any]:
@@ -200,10 +321,10 @@ class FastAnalyzer:
     """
 
     def __init__(self, lang: Language) -> None:
-        from .compiler import GUESS_SYMBOL
 
         self.lang = lang
-        self.bounded = ArcWalker(lang.fsts["bounded"], skip=[lang.plus])
+        self.seam = lang.space.to_char.get(COMPOUND_SEAM, "")  # between compound parts, on both tapes
+        self.bounded = ArcWalker(lang.fsts["bounded"], skip=[lang.plus, self.seam] if self.seam else [lang.plus])
         guesser = lang.fsts.get("guesser")
         self.guesser = ArcWalker(guesser, skip=[lang.plus]) if guesser is not None else None
         self.mark = lang.space.to_char.get(GUESS_SYMBOL, "")
@@ -258,6 +379,8 @@ class FastAnalyzer:
         """
         if guessed:
             internal = internal.replace(self.mark, "")
+        elif self.seam and self.seam in internal:
+            return self._decode_compound(surface, internal, bounded, weight)
         found = self.pos_re.search(internal)
         i = found.start() if found else len(internal)
         lemma = internal[:i]
@@ -285,6 +408,26 @@ class FastAnalyzer:
             gloss = self.lang.glosses.get((lemma, pos), lemma)
             stem = self._stems[stem_key] = _new_morph(stem_form, gloss, (pos,), "stem", lemma, None, None, None)
         return _new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, self.lang.ud, guessed)
+
+    def _decode_compound(self, surface: str, internal: str, bounded: str, weight: float) -> Analysis:
+        """A compound: every part but the last is lemma and part of speech (its surface form between
+        seams); the last is decoded as a word. The lemma is the first parts' surface forms and the last
+        part's lemma; part of speech and features are the last part's; each part is a stem morph."""
+        seam = self.seam
+        parts = internal.split(seam)
+        forms = bounded.split(seam)
+        last = self.decode(surface, parts[-1], forms[-1], weight)
+        stems = []
+        for part, form in zip(parts[:-1], forms):
+            lemma, pos = part[:-1], self.labels.get(part[-1:], "?")
+            stem_key = (form, lemma, pos)
+            stem = self._stems.get(stem_key)
+            if stem is None:
+                gloss = self.lang.glosses.get((lemma, pos), lemma)
+                stem = self._stems[stem_key] = _new_morph(form, gloss, (pos,), "stem", lemma, None, None, None)
+            stems.append(stem)
+        lemma = "".join(forms[:-1]) + last.lemma
+        return _new_analysis(surface, lemma, last.pos, last.features, (*stems, *last.morphs), weight, self.lang.ud, False)
 
     def _parse_tail(self, tail: str) -> tuple[str, tuple[str, ...], tuple[tuple[int, tuple[str, ...]], ...], int]:
         """Part of speech, features, (affix id, its labels) groups and the number of affixes with a form."""

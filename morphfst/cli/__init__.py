@@ -38,7 +38,9 @@ class _Parser(argparse.ArgumentParser):
         raise SystemExit(EXIT_USER_ERROR)
 
 
-def build_parser() -> argparse.ArgumentParser:
+def build_parser(argv: Sequence[str] | None = None) -> argparse.ArgumentParser:
+    """The parser of every subcommand; when ``argv`` names one, only that one is imported (start-up
+    time: each command module imports what it needs, and the debugging tools need a lot)."""
     parser = _Parser(
         prog="morphfst",
         description="Finite-state morphology for agglutinative languages: analyze, generate and segment words.",
@@ -46,14 +48,19 @@ def build_parser() -> argparse.ArgumentParser:
     )
     parser.add_argument("--version", action="version", version=f"morphfst {__version__}")
     sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
-    for name in command_modules():
+    modules = command_modules()
+    if argv and not argv[0].startswith("-"):
+        chosen = f"{__name__}.{argv[0]}_cmd"
+        if chosen in modules:
+            modules = [chosen]
+    for name in modules:
         importlib.import_module(name).register(sub)
     parser.set_defaults(_subparsers=sub)
     return parser
 
 
 def main(argv: Sequence[str] | None = None) -> int:
-    parser = build_parser()
+    parser = build_parser(sys.argv[1:] if argv is None else argv)
     args, extra = parser.parse_known_args(argv)
     if extra:
         # report an unknown option with the usage and help hint of the subcommand it was given to

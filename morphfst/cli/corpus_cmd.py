@@ -62,7 +62,11 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
         help="run on Dask: the scheduler at ADDRESS, or a local cluster started here when no address is given",
     )
     p.add_argument(
-        "--partition-mb", type=float, default=64.0, metavar="MB", help="--dask: size of an input partition (default 64)"
+        "--partition-mb",
+        type=float,
+        default=None,
+        metavar="MB",
+        help="--dask: size of an input partition (default: the input in about 4 partitions per worker, 1-64 MB each)",
     )
     p.add_argument("--report", metavar="FILE", help="write the coverage report to FILE (.json: JSON, otherwise TSV)")
     p.add_argument("--top", type=int, default=1000, metavar="N", help="unanalyzed words listed in the report (default 1000)")
@@ -88,7 +92,7 @@ def run(args: argparse.Namespace) -> int:
         args.jobs = 2 if args.dask == "local" else 1
     if args.jobs < 1:
         raise UserError("--jobs must be at least 1", hint="give the number of worker processes, e.g. -j 2")
-    if args.partition_mb <= 0:
+    if args.partition_mb is not None and args.partition_mb <= 0:
         raise UserError("--partition-mb must be positive")
     if args.dask is not None:
         from ..corpus.cluster import require_dask
@@ -112,7 +116,7 @@ def run(args: argparse.Namespace) -> int:
             options,
             jobs=args.jobs,
             dask=dask,
-            partition_bytes=int(args.partition_mb * 1024 * 1024),
+            partition_bytes=int(args.partition_mb * 1024 * 1024) if args.partition_mb is not None else None,
             quiet=args.quiet,
         )
     except WorkerFailure as exc:

@@ -76,14 +76,12 @@ def run_corpus(
     entries: list[dict[str, Any]] = []
     try:
         if cluster:
-            from .cluster import PARTITION_BYTES, run_dask
+            from .cluster import run_dask
 
             address = dask if isinstance(dask, str) and dask not in ("", "local") else None
             assert output is not None
             Path(output).mkdir(parents=True, exist_ok=True)
-            coverage, entries = run_dask(
-                lang, sources, output, options, address, max(jobs, 1), partition_bytes or PARTITION_BYTES, progress
-            )
+            coverage, entries = run_dask(lang, sources, output, options, address, max(jobs, 1), partition_bytes, progress)
             outputs = [str(Path(output) / e["output"]) for e in entries]
         else:
 

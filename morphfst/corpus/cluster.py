@@ -21,7 +21,19 @@ from .progress import Progress
 from .records import Options
 from .sources import Source, compiled_file, output_path
 
-PARTITION_BYTES = 64 * 1024 * 1024
+PARTITION_BYTES = 64 * 1024 * 1024  # largest partition chosen automatically
+MIN_PARTITION_BYTES = 1024 * 1024  # smallest partition chosen automatically
+PARTITIONS_PER_WORKER = 4  # automatic size: the input in about this many partitions per worker
+
+
+def auto_partition_bytes(sources: list[Source], workers: int) -> int:
+    """A partition size that gives every worker several partitions (so none is idle while another
+    works through one large file), between 1 MB and 64 MB."""
+    total = sum(s.size or 0 for s in sources)
+    per = -(-total // max(workers * PARTITIONS_PER_WORKER, 1))
+    return max(MIN_PARTITION_BYTES, min(PARTITION_BYTES, per))
+
+
 INSTALL_HINT = "install the optional extra: pip install 'morphfst[dask]' (or: pip install 'dask[distributed]')"
 
 
@@ -72,10 +84,14 @@ def run_dask(
     options: Options,
     address: str | None = None,
     workers: int = 2,
-    partition_bytes: int = PARTITION_BYTES,
+    partition_bytes: int | None = None,
     progress: Progress | None = None,
 ) -> tuple[Coverage, list[dict[str, Any]]]:
-    """Run on Dask; returns the run's coverage and the manifest entries (every output in input order)."""
+    """Run on Dask; returns the run's coverage and the manifest entries (every output in input order).
+
+    ``partition_bytes`` None: :func:`auto_partition_bytes` for the local cluster's ``workers`` (or the
+    scheduler's workers). A file cut into several partitions gets one output per partition
+    (``NAME.partNNNNN``), listed in order in the manifest."""
     require_dask()
     if any(s.is_stdin for s in sources):
         raise UserError("the Dask engine reads files, not standard input", hint="give input files or directories")
@@ -87,6 +103,9 @@ def run_dask(
     client, cluster = connect(address, workers)
     try:
         client.register_plugin(GrammarPlugin(mfc.read_bytes(), mfc.name, options), name="morphfst-grammar")
+        if partition_bytes is None:
+            known = len(client.scheduler_info().get("workers", {})) if address else workers
+            partition_bytes = auto_partition_bytes(sources, max(known, 1))
         parts = partitions(sources, partition_bytes)
         counts = client.gather(
             client.map(

@@ -40,6 +40,7 @@ class Coverage:
     status_tokens: list[int] = field(default_factory=lambda: [0, 0, 0, 0])
     analyses: int = 0
     ambiguous: int = 0
+    analyzed: int = 0  # word types analyzed by all processes together (a type analyzed twice counts twice)
     types: dict[str, list[int]] = field(default_factory=dict)  # type -> [tokens, status, analyses]
     max_types: int = MAX_TYPES
     pruned_below: int = 0  # types seen fewer than this many times may be missing from ``types``
@@ -63,6 +64,7 @@ class Coverage:
             self.status_tokens[i] += n
         self.analyses += t.analyses
         self.ambiguous += t.ambiguous
+        self.analyzed += t.analyzed
         self.long_tokens += t.long_tokens
         self.unlisted_tokens += t.unlisted_tokens
         types = self.types
@@ -89,6 +91,7 @@ class Coverage:
             "unlisted_tokens",
             "analyses",
             "ambiguous",
+            "analyzed",
         ):
             setattr(self, name, getattr(self, name) + getattr(other, name))
         for i, n in enumerate(other.status_tokens):
@@ -142,6 +145,7 @@ class Coverage:
             "types_missing_below_count": self.pruned_below,
             "analyses_per_analyzed_token": round(self.analyses / st[ANALYZED], 3) if st[ANALYZED] else 0.0,
             "ambiguous_token_percent": pct(self.ambiguous, st[ANALYZED]),
+            "types_analyzed": self.analyzed,
             "input": {
                 "invalid_utf8_bytes_replaced": self.replaced_bytes,
                 "nul_bytes": self.nul_bytes,

@@ -4,7 +4,9 @@ are written back in input order.
 With one job everything runs in the main process. With N jobs, N worker processes are started
 (``spawn``: a fresh interpreter, so no lock or thread of the main process is copied); chunk i goes
 to worker ``i mod N`` and results are collected in the same round-robin order, so reassembly is
-ordered by construction. At most ``window`` chunks are in flight, so memory stays constant whatever
+ordered by construction. Each word type is analyzed by one worker only, its owner by hash, which
+answers the others' questions (type-affine dispatch, :func:`_shared_loop`): N workers do the work
+of one, not N times the analysis of the frequent types. At most ``window`` chunks are in flight, so memory stays constant whatever
 the input size. Results come back over one pipe per worker whose write end only the worker holds:
 a worker that dies (killed, out of memory, crashed) closes it, and the main process stops with a
 :class:`WorkerFailure` naming the worker, its exit status and the lines it was working on.
@@ -17,6 +19,7 @@ import os
 import sys
 import time
 import traceback
+import zlib
 from collections import deque
 from collections.abc import Callable, Iterator
 from contextlib import ExitStack, contextmanager
@@ -96,7 +99,14 @@ def _end_with_parent(parent: int) -> None:
 
 
 def _worker_main(
-    path: str, options: Options, processor_class: type[ChunkProcessor], tasks: Any, results: Any, parent: int = 0
+    path: str,
+    options: Options,
+    processor_class: type[ChunkProcessor],
+    tasks: Any,
+    results: Any,
+    parent: int = 0,
+    peers: list[Any] | None = None,
+    me: int = 0,
 ) -> None:
     """A worker process: load the compiled language once, then process chunks until told to stop."""
     if parent:
@@ -106,12 +116,15 @@ def _worker_main(
     except BaseException:
         results.send(("error", traceback.format_exc()))
         return
+    if peers and len(peers) > 1 and processor.type_affine:
+        _shared_loop(processor, tasks, results, peers, me)
+        return
     while True:
         item = tasks.get()
         if item is None:
             results.send(("final", processor.flush()))
             break
-        doc, chunk = item
+        _, doc, chunk = item
         processor.doc = doc
         try:
             result = processor.process(chunk)
@@ -119,6 +132,67 @@ def _worker_main(
             results.send(("error", traceback.format_exc()))
             return
         results.send(("ok", result))
+    results.close()
+
+
+def owner(token: str, workers: int) -> int:
+    """The worker that analyzes ``token`` (a hash that is the same in every process)."""
+    return zlib.crc32(token.encode("utf-8", "surrogatepass")) % workers
+
+
+def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: list[Any], me: int) -> None:
+    """Type-affine processing: every word type is analyzed by one worker, its owner (by hash).
+
+    A chunk's word types that are not in this worker's cache are split by owner; this worker analyzes
+    its own, and asks each other owner for theirs (a message on the owner's inbox). The chunk waits
+    until every answer is in, then is processed from the cache. Meanwhile the worker goes on with its
+    inbox: other chunks, other workers' questions (answered at once: from the cache, or analyzed and
+    kept, so a type asked for by several workers is analyzed once) and answers. No worker ever waits
+    for one particular message, so none can wait for another in a circle. Chunks leave in the order
+    they came, which keeps the main process's round-robin reading in input order.
+    """
+    workers = len(peers)
+    waiting: deque[list[Any]] = deque()  # [number, doc, chunk, decoded text, answers still expected]
+    by_number: dict[int, list[Any]] = {}
+    count = 0
+    try:
+        while True:
+            item = inbox.get()
+            kind = item[0] if item is not None else "stop"
+            if kind == "chunk":
+                _, doc, chunk = item
+                decoded, missing = processor.prepare(chunk)
+                asks: dict[int, list[str]] = {}
+                for token in missing:
+                    who = owner(token, workers)
+                    if who != me:
+                        asks.setdefault(who, []).append(token)
+                job = [count, doc, chunk, decoded, len(asks)]
+                by_number[count] = job
+                waiting.append(job)
+                for who, tokens in asks.items():
+                    peers[who].put(("ask", me, count, tokens))
+                count += 1
+            elif kind == "ask":
+                _, asker, number, tokens = item
+                found = [processor.lookup(t) for t in tokens]
+                peers[asker].put(("answer", number, tokens, found))
+            elif kind == "answer":
+                _, number, tokens, found = item
+                for token, (value, info) in zip(tokens, found):
+                    processor.learn(token, value, info)
+                by_number[number][4] -= 1
+            else:
+                results.send(("final", processor.flush()))
+                break
+            while waiting and waiting[0][4] == 0:
+                number, doc, chunk, decoded, _ = waiting.popleft()
+                del by_number[number]
+                processor.doc = doc
+                results.send(("ok", processor.process(chunk, decoded)))
+    except BaseException:
+        results.send(("error", traceback.format_exc()))
+        return
     results.close()
 
 
@@ -138,11 +212,13 @@ class Workers:
         self.closed = False
 
     def _start(self, ctx: Any, path: str, options: Options, jobs: int, processor_class: type[ChunkProcessor]) -> None:
-        for _ in range(jobs):
-            tasks = ctx.Queue()
+        inboxes = [ctx.Queue() for _ in range(jobs)]
+        for me, tasks in enumerate(inboxes):
             reader, writer = ctx.Pipe(duplex=False)
             proc = ctx.Process(
-                target=_worker_main, args=(path, options, processor_class, tasks, writer, os.getpid()), daemon=True
+                target=_worker_main,
+                args=(path, options, processor_class, tasks, writer, os.getpid(), inboxes, me),
+                daemon=True,
             )
             proc.start()
             writer.close()  # only the worker holds the write end: its death closes the pipe
@@ -151,18 +227,18 @@ class Workers:
             self.results.append(reader)
 
     def put(self, doc: str, chunk: Chunk) -> None:
-        self.tasks[self.next_put % len(self.procs)].put((doc, chunk))
+        self.tasks[self.next_put % len(self.procs)].put(("chunk", doc, chunk))
         self.next_put += 1
 
     def get(self, job: Job) -> ChunkResult:
         index = self.next_get % len(self.procs)
         self.next_get += 1
-        kind, payload = self._receive(index, job.where())
+        kind, payload = self._receive(index, job.where(), others=True)
         if kind != "ok":
             raise WorkerFailure(f"worker process {index + 1} sent {kind!r} while processing {job.where()}")
         return payload  # type: ignore[no-any-return]
 
-    def _receive(self, index: int, doing: str) -> tuple[str, Any]:
+    def _receive(self, index: int, doing: str, others: bool = False) -> tuple[str, Any]:
         """The next message of worker ``index``; a dead worker or an error raises :class:`WorkerFailure`."""
         conn, proc = self.results[index], self.procs[index]
         hint = "no output was written; a worker killed by signal 9 has often run out of memory (try fewer --jobs)"
@@ -183,6 +259,16 @@ class Workers:
                     f"worker process {index + 1} (pid {proc.pid}) died {_exit_text(proc.exitcode)} while processing {doing}",
                     hint=hint,
                 )
+            if others:
+                # workers answer each other's questions: one that died leaves the others waiting
+                for other, peer in enumerate(self.procs):
+                    if other != index and not peer.is_alive():
+                        peer.join(timeout=5)
+                        raise WorkerFailure(
+                            f"worker process {other + 1} (pid {peer.pid}) died {_exit_text(peer.exitcode)} "
+                            f"while {doing} waited for it",
+                            hint=hint,
+                        )
         if kind == "error":
             last = payload.strip().splitlines()[-1] if payload.strip() else "unknown error"
             raise WorkerFailure(

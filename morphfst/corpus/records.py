@@ -86,6 +86,7 @@ class Tally:
     long_tokens: int = 0  # tokens longer than the runtime's word limit
     unlisted_tokens: int = 0  # tokens too long to be listed as types
     types: dict[str, tuple[int, int, int]] = field(default_factory=dict)  # normalized type -> (tokens, status, analyses)
+    analyzed: int = 0  # word types analyzed (cache misses): the same type in two processes counts twice
 
 
 @dataclass
@@ -215,8 +216,13 @@ class TypeResult:
         return f"{lemma}\t{upos}\t_\t_", misc
 
 
+Prepared = tuple[str, int, list[str] | None]  # decoded text, bytes replaced, tokens and line ends (terms mode)
+
+
 class ChunkProcessor:
     """Analyzes and formats chunks for one language with a per-type cache (see the module documentation)."""
+
+    type_affine = True  # worker processes may share word types by owner (:mod:`morphfst.corpus.local`)
 
     def __init__(self, lang: Language, options: Options, doc: str = "") -> None:
         self.lang = lang
@@ -317,9 +323,34 @@ class ChunkProcessor:
             t.ambiguous += n > 1
         self.long_in_chunk = True
 
+    # ---- sharing word types between processes ---------------------------------------------------------
+    def prepare(self, chunk: Chunk) -> tuple[Prepared, list[str]]:
+        """The decoded text of a chunk (with its tokens, in terms mode) and its word types that are not
+        in the cache, in first-seen order (overlong tokens left out: they are never cached)."""
+        text, replaced = decode(chunk.data)
+        items = self.tokenizer.tokens_and_newlines(text)
+        young, old = self.young, self.old
+        missing = [t for t in dict.fromkeys(items) if t not in young and t not in old and len(t) <= MAX_CACHED_TOKEN]
+        return (text, replaced, items if self.options.mode == "terms" else None), missing
+
+    def lookup(self, token: str) -> tuple[Any, tuple[str, int, int]]:
+        """The formatted output and type information of ``token``, analyzed here if not cached."""
+        value = self.young.get(token)
+        if value is None:
+            value = self.miss(token)
+        return value, self.info_young[token]
+
+    def learn(self, token: str, value: Any, info: tuple[str, int, int]) -> None:
+        """Cache what another process found for ``token``."""
+        if token not in self.young:
+            self.young[token] = value
+            self.info_young[token] = info
+            self.young_chars += len(token) + (len(value) if isinstance(value, str) else sum(map(len, value)))
+
     def flush(self) -> Tally:
         """The figures of every token counted since the last flush (then forgotten)."""
         tally, self.pending = self.pending, Tally()
+        tally.analyzed, self.misses = self.misses, 0
         status_tokens = tally.status_tokens
         types = tally.types
         young, old = self.info_young, self.info_old
@@ -351,8 +382,8 @@ class ChunkProcessor:
         return tally
 
     # ---- one chunk -----------------------------------------------------------------------------------
-    def process(self, chunk: Chunk) -> ChunkResult:
-        text, replaced = decode(chunk.data)
+    def process(self, chunk: Chunk, prepared: Prepared | None = None) -> ChunkResult:
+        text, replaced, items = prepared or (*decode(chunk.data), None)
         lines = text.split("\n")
         if text.endswith("\n") or not text:
             lines.pop()
@@ -362,7 +393,7 @@ class ChunkProcessor:
         result.empty_lines = sum(1 for line in whole if not line or line == "\r")
         mode = self.options.mode
         if mode == "terms":
-            out, tokens = self._terms(text, chunk)
+            out, tokens = self._terms(text, chunk, items)
             result.tokens = len(tokens) - tokens.count(NEWLINE)
         else:
             out, tokens = self._jsonl(lines, chunk) if mode == "jsonl" else self._conllu(lines, chunk)
@@ -375,11 +406,12 @@ class ChunkProcessor:
         result.tally = self._rotate()
         return result
 
-    def _terms(self, text: str, chunk: Chunk) -> tuple[str, list[str]]:
+    def _terms(self, text: str, chunk: Chunk, items: list[str] | None = None) -> tuple[str, list[str]]:
         """Terms of a whole chunk at once: tokens and line ends in one regular-expression pass."""
         get = self.young.get
         miss = self.miss
-        items = self.tokenizer.tokens_and_newlines(text)
+        if items is None:
+            items = self.tokenizer.tokens_and_newlines(text)
         out = " ".join([get(t) or miss(t) for t in items]).replace(" \n", "\n").replace("\n ", "\n")
         if chunk.part and out and not out.startswith("\n"):
             out = " " + out

@@ -240,7 +240,9 @@ class IndexChunkProcessor(ChunkProcessor):
         term_options = options.term_options if isinstance(options, IndexOptions) else TermOptions()
         self.analyzer = TermAnalyzer(lang, term_options)
 
-    def process(self, chunk: Chunk) -> ChunkResult:
+    type_affine = False  # the indexer's main process hands out new word types itself
+
+    def process(self, chunk: Chunk, prepared: Any = None) -> ChunkResult:
         import pickle
 
         types = chunk.data.decode("utf-8").split("\n")

@@ -1,0 +1,175 @@
+"""The paths that make morphfst fast at scale, and that they change no result: the cache key read
+without parsing the grammar, transducers and lexicon read on first use, the walk's lazy tables and
+subset automaton, type-affine corpus workers (each word type analyzed once across processes) and
+automatic Dask partitions."""
+
+from __future__ import annotations
+
+from pathlib import Path
+
+import pytest
+from toygrammar import TOY_LEXICON, write_toy
+
+import morphfst
+from morphfst import archive, build, walk
+from morphfst.archive import LazyFsts, Metadata
+from morphfst.cli import build_parser
+from morphfst.corpus import Options, run_corpus
+from morphfst.corpus.cluster import MIN_PARTITION_BYTES, PARTITION_BYTES, auto_partition_bytes
+from morphfst.corpus.sources import Source
+
+
+@pytest.fixture()
+def own_cache(tmp_path: Path, monkeypatch: pytest.MonkeyPatch) -> Path:
+    cache = tmp_path / "cache"
+    monkeypatch.setenv("MORPHFST_CACHE", str(cache))
+    return cache
+
+
+def _no_parsing(monkeypatch: pytest.MonkeyPatch) -> None:
+    def refuse(*_: object, **__: object) -> None:
+        raise AssertionError("the grammar was parsed")
+
+    monkeypatch.setattr(build, "_parsed_sources", refuse)
+
+
+def test_an_unchanged_grammar_is_loaded_without_parsing(tmp_path: Path, own_cache: Path, monkeypatch: pytest.MonkeyPatch) -> None:
+    grammar = write_toy(tmp_path / "g")
+    first = morphfst.load(grammar)
+    with monkeypatch.context() as patch:
+        _no_parsing(patch)
+        again = morphfst.load(grammar)
+    assert again.path == first.path
+    assert again.analyze("kalar")[0].text == "ka N;PL;NOM"
+
+
+def test_a_changed_source_is_parsed_and_compiled_again(tmp_path: Path, own_cache: Path) -> None:
+    grammar = write_toy(tmp_path / "g")
+    first = morphfst.load(grammar)
+    (grammar.parent / "toy.tsv").write_text(TOY_LEXICON + "lo\tnoun\tN\tlake\n", encoding="utf-8")
+    second = morphfst.load(grammar)
+    assert second.path != first.path
+    assert second.analyze("lolar")
+
+
+def test_a_file_added_to_a_lexicon_folder_is_seen(tmp_path: Path, own_cache: Path) -> None:
+    folder = tmp_path / "g"
+    grammar = write_toy(folder)
+    (folder / "lex").mkdir()
+    (folder / "toy.tsv").rename(folder / "lex" / "toy.tsv")
+    grammar.write_text(grammar.read_text(encoding="utf-8").replace('lexicon "toy.tsv"', 'lexicon "lex"'), encoding="utf-8")
+    assert not morphfst.load(grammar).analyze("lolar")
+    (folder / "lex" / "more.tsv").write_text("lemma\tclass\tpos\tgloss\nlo\tnoun\tN\tlake\n", encoding="utf-8")
+    assert morphfst.load(grammar).analyze("lolar")
+
+
+def test_a_damaged_manifest_means_parsing_again(tmp_path: Path, own_cache: Path) -> None:
+    grammar = write_toy(tmp_path / "g")
+    morphfst.load(grammar)
+    for manifest in (own_cache / "sources").glob("*.json"):
+        manifest.write_text("{not json", encoding="utf-8")
+    assert morphfst.load(grammar).analyze("kalar")
+
+
+def test_transducers_and_lexicon_are_read_on_first_use(tmp_path: Path, own_cache: Path) -> None:
+    grammar = write_toy(tmp_path / "g")
+    path = morphfst.compile_grammar(grammar, tmp_path / "toy.mfc")
+    fsts, meta = archive.load_archive(path)
+    assert isinstance(fsts, LazyFsts) and isinstance(meta, Metadata)
+    assert not meta.is_loaded("lexicon") and "lexicon" in meta
+    lang = morphfst.Language(fsts, meta, str(path))
+    assert lang.analyze("kalar")[0].morphs[0].gloss == "house"
+    assert not meta.is_loaded("lexicon")  # decoding read the glosses only
+    assert [e["lemma"] for e in lang.entries("ka")] == ["ka"]
+    assert meta.is_loaded("lexicon")
+    assert set(fsts) >= {"analyzer", "generator", "segmenter", "bounded"}
+
+
+def test_a_loaded_language_saves_back_whole(tmp_path: Path, own_cache: Path) -> None:
+    grammar = write_toy(tmp_path / "g")
+    path = morphfst.compile_grammar(grammar, tmp_path / "toy.mfc")
+    lang = morphfst.load(path)
+    again = archive.save_archive(tmp_path / "copy.mfc", lang.fsts, lang.meta)
+    copy = morphfst.load(again)
+    assert copy.meta["lexicon"] == morphfst.load(path).meta["lexicon"]
+    assert [a.text for a in copy.analyze("kalar")] == [a.text for a in lang.analyze("kalar")]
+
+
+def test_a_flipped_byte_anywhere_is_a_damaged_file(tmp_path: Path, own_cache: Path) -> None:
+    grammar = write_toy(tmp_path / "g")
+    path = morphfst.compile_grammar(grammar, tmp_path / "toy.mfc")
+    data = bytearray(path.read_bytes())
+    for where in (10, len(data) // 2, len(data) - 80):
+        bad = tmp_path / f"bad{where}.mfc"
+        changed = bytearray(data)
+        changed[where] ^= 0x40
+        bad.write_bytes(bytes(changed))
+        with pytest.raises(archive.DamagedArchive):
+            archive.load_archive(bad)
+
+
+def test_the_walker_reads_states_as_words_need_them(tur: morphfst.Language) -> None:
+    walker = walk.ArcWalker(tur.fsts["bounded"], skip=[tur.plus])
+    assert walker.size() == 0
+    found = walker.walk("evlerde")
+    assert found and walker.size() > 0
+    assert walker.accepts("evlerde") and not walker.accepts("evlerdeq")
+
+
+def test_the_subset_automaton_started_afresh_gives_the_same_paths(tur: morphfst.Language, monkeypatch: pytest.MonkeyPatch) -> None:
+    words = ["evlerde", "kitaplarımızdan", "gelmeyecekmişsiniz", "okulda", "ev", "evde", "yok"]
+    walker = walk.ArcWalker(tur.fsts["bounded"], skip=[tur.plus])
+    expected = [walker.walk(w) for w in words]
+    monkeypatch.setattr(walk, "MAX_SETS", 3)
+    fresh = walk.ArcWalker(tur.fsts["bounded"], skip=[tur.plus])
+    assert [fresh.walk(w) for w in words] == expected
+
+
+def test_best_only_walk_keeps_the_best_paths(tur: morphfst.Language) -> None:
+    walker = walk.ArcWalker(tur.fsts["bounded"], skip=[tur.plus])
+    for word in ["yüzü", "atın", "kalemlerimizde"]:
+        full = walker.walk(word)
+        best = walker.walk(word, best=True)
+        assert best[0][2] == pytest.approx(full[0][2])
+        assert {p for p in full if p[2] <= full[0][2] + 1e-5} <= set(best)
+
+
+def _text(tokens: int) -> str:
+    words = "ev evler evlerde kitap kitaplar kitapta okul okulda gel geldi gelmeyecek yok var ve bir bu".split()
+    return "\n".join(" ".join(words[(i * 7 + j) % len(words)] for j in range(12)) for i in range(tokens // 12)) + "\n"
+
+
+@pytest.mark.parametrize("mode", ["terms", "jsonl", "conllu"])
+def test_two_workers_analyze_each_word_type_once(tur: morphfst.Language, tmp_path: Path, mode: str) -> None:
+    corpus = tmp_path / "in.txt"
+    corpus.write_text(_text(6000), encoding="utf-8")
+    options = Options(mode=mode, chunk_bytes=2048)
+    one = run_corpus(tur, [str(corpus)], str(tmp_path / "one.out"), options, jobs=1)
+    two = run_corpus(tur, [str(corpus)], str(tmp_path / "two.out"), options, jobs=2)
+    assert (tmp_path / "one.out").read_bytes() == (tmp_path / "two.out").read_bytes()
+    assert one.coverage.figures() == two.coverage.figures()
+    assert two.coverage.figures()["types_analyzed"] == one.coverage.analyzed > 0
+
+
+def test_the_index_workers_keep_their_own_scheme() -> None:
+    from morphfst.search.index import IndexChunkProcessor
+
+    assert IndexChunkProcessor.type_affine is False
+
+
+def test_dask_partitions_give_every_worker_work(tmp_path: Path) -> None:
+    def source(size: int) -> Source:
+        return Source(str(tmp_path / "x.txt"), "x.txt", size)
+
+    assert auto_partition_bytes([source(20 * 1024 * 1024)], 2) == 20 * 1024 * 1024 // 8
+    assert auto_partition_bytes([source(1000)], 2) == MIN_PARTITION_BYTES
+    assert auto_partition_bytes([source(10**12)], 2) == PARTITION_BYTES
+
+
+def test_the_command_line_imports_only_the_command_it_runs() -> None:
+    parser = build_parser(["analyze", "evlerde"])
+    sub = parser.parse_args(["analyze", "evlerde"])
+    assert sub.command == "analyze"
+    assert set(parser._subparsers._group_actions[0].choices) == {"analyze"}  # type: ignore[union-attr]
+    everything = build_parser(["--help"])
+    assert {"analyze", "corpus", "table", "explain"} <= set(everything._subparsers._group_actions[0].choices)  # type: ignore[union-attr]
