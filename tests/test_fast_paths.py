@@ -116,7 +116,9 @@ def test_the_walker_reads_states_as_words_need_them(tur: morphfst.Language) -> N
     assert walker.accepts("evlerde") and not walker.accepts("evlerdeq")
 
 
-def test_the_subset_automaton_started_afresh_gives_the_same_paths(tur: morphfst.Language, monkeypatch: pytest.MonkeyPatch) -> None:
+def test_the_subset_automaton_started_afresh_gives_the_same_paths(
+    tur: morphfst.Language, monkeypatch: pytest.MonkeyPatch
+) -> None:
     words = ["evlerde", "kitaplarımızdan", "gelmeyecekmişsiniz", "okulda", "ev", "evde", "yok"]
     walker = walk.ArcWalker(tur.fsts["bounded"], skip=[tur.plus])
     expected = [walker.walk(w) for w in words]
