@@ -27,7 +27,7 @@ from . import model as m
 from .errors import UserError
 from .fstutil import NO_STATE_ID, Arc, Weight, acc, chars, cross, empty, union
 from .stemrules import derive_stems, lemma_to_stem
-from .symbols import SymbolSpace
+from .symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 from .validate import BOUNDARIES
 
 SETLIKE = (m.SetRef, m.Klass)
@@ -62,6 +62,8 @@ def build_space(g: m.Grammar) -> SymbolSpace:
             space.add(f"{kind}:{value}", kind, single_char_ok=False)
     for affix in g.affixes:
         space.add(f"affix:{affix.ident}", "affix", single_char_ok=False)
+    if g.compounds:
+        space.add(COMPOUND_SEAM, "boundary", single_char_ok=False)
     return space
 
 
@@ -264,7 +266,10 @@ class Compiler:
         return union(parts).closure().optimize()
 
     def delete_boundaries(self) -> pynini.Fst:
+        """Bounded surface → plain surface: morph boundaries (and compound seams) deleted."""
         parts = [acc(c) for c in self.letter_codes] + [cross(self.plus, "")]
+        if COMPOUND_SEAM in self.space.to_char:
+            parts.append(cross(self.space.code(COMPOUND_SEAM), ""))
         return union(parts).closure().optimize()
 
     # ---- the whole ------------------------------------------------------------------------------------
@@ -327,27 +332,108 @@ class Compiler:
         bounded = self.bounded(entries, progress)
         strict = self.bounded(entries, progress, lenient=False) if any(r.lenient for r in self.g.rules) else None
         t1 = time.perf_counter()
-        fsts = self.derive(bounded, strict)
+        compounds = self.compound_fst(bounded, entries)
+        t2 = time.perf_counter()
+        fsts = self.derive(bounded, strict, compounds)
         if timings is not None:
             timings["lexicon_rules"] = t1 - t0
-            timings["derive"] = time.perf_counter() - t1
+            if compounds is not None:
+                timings["compounds"] = t2 - t1
+            timings["derive"] = time.perf_counter() - t2
         return fsts
 
-    def derive(self, bounded: pynini.Fst, strict: pynini.Fst | None = None) -> dict[str, pynini.Fst]:
-        """The four saved transducers from the bounded machine; the generator comes from ``strict``
-        (the machine without lenient rules) when there is one."""
+    def derive(
+        self, bounded: pynini.Fst, strict: pynini.Fst | None = None, compounds: pynini.Fst | None = None
+    ) -> dict[str, pynini.Fst]:
+        """The four saved transducers from the bounded machine.
+
+        The analyzer, segmenter and bounded analyzer read ``bounded`` together with ``compounds`` (the
+        compound words, analysis only); the generator comes from ``strict`` (the machine without the
+        lenient rules) when there is one, else from ``bounded``, never with compounds. The segmenter
+        only says where boundaries may stand (weights come from the bounded analyzer), so its surfaces
+        are unweighted, which makes them much cheaper to determinize and minimize.
+        """
         delete = self.delete_boundaries()
-        gen_internal = pynini.compose(bounded, delete).optimize()
-        analyzer = gen_internal.copy().invert().optimize()
+        plain = pynini.compose(bounded, delete).optimize() if compounds is None or strict is None else None
+        if compounds is not None:
+            bounded = union([bounded, compounds]).optimize()
+            # the boundaries erased from the bounded machine's surface side, not optimized again: the
+            # analyzer serves only accepts() and the debugging tools, and optimizing it costs seconds
+            boundaries = [(ord(self.plus), 0), (ord(self.space.code(COMPOUND_SEAM)), 0)]
+            analyzer = bounded.copy().relabel_pairs(opairs=boundaries).invert()
+        else:
+            assert plain is not None
+            # an optimized machine stays optimal when inverted (determinism on label pairs does not change)
+            analyzer = plain.copy().invert()
         affix_labels = [(ord(c), 0) for c, k in self.space.kinds.items() if k == "affix"]
-        source = gen_internal if strict is None else pynini.compose(strict, delete).optimize()
+        source = pynini.compose(strict, delete).optimize() if strict is not None else plain
+        assert source is not None
         generator = source.copy().relabel_pairs(ipairs=affix_labels).optimize()
-        surfaces = bounded.copy().project("output").optimize()
-        segmenter = pynini.compose(delete.copy().invert(), surfaces).optimize()
-        bounded_analyzer = bounded.copy().invert().optimize()
+        surfaces = _determinize_minimize(pynini.arcmap(bounded.copy().project("output"), map_type="rmweight"))
+        # deterministic already: a deterministic acceptor composed with the one-state boundary inserter
+        segmenter = pynini.compose(delete.copy().invert(), surfaces)
+        bounded_analyzer = bounded.copy().invert()
         for fst in (analyzer, generator, segmenter, bounded_analyzer):
             fst.arcsort("ilabel")
         return {"analyzer": analyzer, "generator": generator, "segmenter": segmenter, "bounded": bounded_analyzer}
+
+    # ---- compounds (analysis only) --------------------------------------------------------------------
+    def compound_fst(self, bounded: pynini.Fst, entries: list[m.LexEntry]) -> pynini.Fst | None:
+        """The compound words of the grammar's ``compound`` blocks, on the tapes of the bounded machine
+        (``None`` when there is no block).
+
+        A part is a path of ``bounded`` whose analysis is a word of a ``first`` part of speech (or
+        class) in exactly one feature bundle of ``forms``; its analysis is rewritten to lemma, part of
+        speech and the seam symbol (affix ids and features deleted), its surface loses its morph
+        boundaries and gets the seam symbol appended, and parts of fewer than ``min`` letters are
+        dropped. A compound is one to ``parts - 1`` parts followed by a path of ``bounded`` of a
+        ``last`` part of speech (or class). Every seam weighs the block's weight, plus the weight of the
+        heaviest entry of ``entries``, plus :data:`SEAM_BASE_WEIGHT`, so a lexicon word always ranks above
+        a compound reading of itself with the same endings (when no lexicon weight is negative, as with
+        counts; see README.md).
+        """
+        if not self.g.compounds:
+            return None
+        s = self.space
+        seam = s.code(COMPOUND_SEAM)
+        heaviest = max((e.weight for e in entries), default=0.0)
+        base = max(heaviest, 0.0) + SEAM_BASE_WEIGHT
+        lemma_codes = sorted({ch for e in entries for ch in e.lemma} | set(self.letter_codes))
+        tail_codes = [c for c, k in s.kinds.items() if k in {"feature", "pos", "affix"}]
+        affix_codes = [c for c, k in s.kinds.items() if k == "affix"]
+        letter = chars(self.letter_codes)
+        drop_plus = cross(self.plus, "")
+        keep = union([letter, drop_plus])
+        found = []
+        for c in self.g.compounds:
+            head = self._compound_heads(c.first, entries, lemma_codes)
+            tails = union(_bundle_tail([s.code(f"feature:{f}") for f in b], affix_codes) for b in c.forms)
+            to_internal = head + pynini.cross(acc(seam), tails.optimize())  # new analysis → analysis of bounded
+            surface = (drop_plus.closure() + letter).closure(c.min_letters, c.min_letters) + keep.closure()
+            surface = surface + cross("", seam) + pynini.accep("", weight=base + c.weight)
+            part = pynini.compose(pynini.compose(to_internal.optimize(), bounded), surface.optimize()).optimize()
+            if part.start() == NO_STATE_ID or part.num_states() == 0:
+                continue
+            last_filter = self._compound_heads(c.last, entries, lemma_codes) + chars(tail_codes).closure()
+            last = pynini.compose(last_filter.optimize(), bounded).connect()
+            found.append(part.closure(1, c.parts - 1) + last)
+        if not found:
+            return None
+        return union(found)  # optimized together with the lexicon words in derive
+
+    def _compound_heads(self, names: list[str], entries: list[m.LexEntry], lemma_codes: list[str]) -> pynini.Fst:
+        """An acceptor of a lemma and its part of speech: any lemma of a named part of speech, or the
+        lemmas of the entries of a named class."""
+        s = self.space
+        tags = [n for n in names if n in self.g.pos_tags]
+        classes = {n for n in names if n not in tags}
+        heads = []
+        if tags:
+            heads.append(chars(lemma_codes).closure() + chars(s.code(f"pos:{t}") for t in tags))
+        if classes:
+            pairs = {(e.lemma, e.pos_tag) for e in entries if e.klass in classes}
+            heads.extend(acc(lemma + s.code(f"pos:{tag}")) for lemma, tag in sorted(pairs))
+        return union(heads).optimize()
 
     def open_stem_fst(self, klass: m.StemClass) -> pynini.Fst:
         """The stems of an open class: every string of letters its ``open`` pattern accepts is a lemma
@@ -425,10 +511,51 @@ class Compiler:
         return guesser
 
 
-GUESS_SYMBOL = "mark:guess"  # the marker of a guessed analysis (kind "guess"), right after the part of speech
 GUESS_OFFSET = 100.0  # weight added to every guessed analysis
 GUESS_STEM_WEIGHT = 0.3  # weight per letter of a guessed stem: two letters cost more than one more affix
 GUESS_MORPH_WEIGHT = 0.15  # weight per guessed-word affix with a surface form
+SEAM_BASE_WEIGHT = 1.0  # added to every seam besides the block's weight and the heaviest lexicon entry's
+
+
+def _determinize_minimize(fst: pynini.Fst) -> pynini.Fst:
+    """Epsilon removal, determinization and minimization (what ``optimize`` does, without its extra
+    passes, which cost several times as much on a large unweighted acceptor)."""
+    return pynini.determinize(fst.rmepsilon()).minimize()
+
+
+def _bundle_tail(features: list[str], affix_codes: list[str]) -> pynini.Fst:
+    """An acceptor of the analysis after a part of speech whose feature symbols are exactly ``features``
+    (in any order), with any affix identifiers between them."""
+    fst = pynini.Fst()
+    one = Weight.one(fst.weight_type())
+    counts: dict[str, int] = {}
+    for f in features:
+        counts[f] = counts.get(f, 0) + 1
+    symbols = sorted(counts)
+    states: dict[tuple[int, ...], int] = {}
+
+    def state(remaining: tuple[int, ...]) -> int:
+        if remaining not in states:
+            here = states[remaining] = fst.add_state()
+            for code in affix_codes:
+                fst.add_arc(here, Arc(ord(code), ord(code), one, here))
+            if not any(remaining):
+                fst.set_final(here)
+        return states[remaining]
+
+    start = tuple(counts[x] for x in symbols)
+    fst.set_start(state(start))
+    todo = [start]
+    while todo:
+        rem = todo.pop()
+        for i, sym in enumerate(symbols):
+            if rem[i]:
+                nxt = rem[:i] + (rem[i] - 1,) + rem[i + 1 :]
+                new = nxt not in states
+                fst.add_arc(state(rem), Arc(ord(sym), ord(sym), one, state(nxt)))
+                if new:
+                    todo.append(nxt)
+    return fst
 
 
 def _mentions_boundary(e: m.Expr) -> bool:

@@ -19,6 +19,8 @@ from lark.exceptions import UnexpectedCharacters, UnexpectedEOF, UnexpectedInput
 from . import model as m
 from .errors import Position, UserError
 
+MAX_COMPOUND_PARTS = 6  # the most parts a compound block may allow (each one copies the non-last parts)
+
 _TERMINAL_WORDS = {
     "NAME": "a name",
     "FEAT": "a feature label",
@@ -388,6 +390,97 @@ class _Builder:
         if gloss is None:
             gloss = ".".join(features) if features else (new_pos or "∅")
         return m.Affix(form, features, gloss, weight, nexts, new_pos, name, slot, pos)
+
+    def do_compound_block(self, node: Tree) -> None:
+        """A ``compound`` block: which words join at a seam, in which forms, how many, how long, at what weight."""
+        block = self.pos_of(node)
+        values: dict[str, Any] = {}
+        lines: dict[str, Position] = {}
+        for line in node.children:
+            if not isinstance(line, Tree):
+                continue
+            key = str(line.data)[2:]
+            pos = self.pos_of(line)
+            if key in lines:
+                raise UserError(
+                    f"compound: '{key}' given twice",
+                    pos,
+                    hint=f"the first is on line {lines[key].line}; give each statement once per compound block",
+                    source_line=self._raw_line(pos),
+                )
+            lines[key] = pos
+            if key in {"first", "last"}:
+                names = [kid.children[0] for kid in line.children]
+                values[key] = [str(t) for t in names]
+                for t in names:
+                    lines[f"{key} {t}"] = self.pos_of(t)
+            elif key == "forms":
+                bundles = []
+                for bundle in line.children:
+                    labels = [str(t) for t in bundle.children]
+                    for t in bundle.children:
+                        lines.setdefault(f"forms {t}", self.pos_of(t))
+                    bundles.append(labels)
+                values[key] = bundles
+            else:
+                tok: Any = line.children[0]
+                values[key] = self._compound_number(key, tok)
+        for key in ("first", "forms", "last"):
+            if key not in values:
+                raise UserError(
+                    f"compound: no '{key}' line",
+                    block,
+                    hint="a compound block needs 'first', 'forms' and 'last' lines (parts, min and weight are optional)",
+                    source_line=self._raw_line(block),
+                )
+        self.grammar.compounds.append(
+            m.Compound(
+                values["first"],
+                values["forms"],
+                values["last"],
+                values.get("parts", 2),
+                values.get("min", 1),
+                values.get("weight", 0.0),
+                block,
+                lines,
+            )
+        )
+
+    def _compound_number(self, key: str, tok: Any) -> int | float:
+        """The number of a ``parts``, ``min`` or ``weight`` line, checked (a located error otherwise)."""
+        pos = self.pos_of(tok)
+        text = str(tok)
+        value = float(text)
+        if key == "weight":
+            if value < 0:
+                raise UserError(
+                    f"compound: weight {text} is negative",
+                    pos,
+                    hint="a seam's weight is added to the compound's; a negative one could rank a compound above a lexicon word",
+                    source_line=self._raw_line(pos),
+                )
+            return value
+        low = 2 if key == "parts" else 1
+        if key == "parts" and value.is_integer() and value > MAX_COMPOUND_PARTS:
+            raise UserError(
+                f"compound: parts {text} is more than {MAX_COMPOUND_PARTS}",
+                pos,
+                hint="each further part adds a copy of the non-last parts to the analyzer; longer words are rare",
+                source_line=self._raw_line(pos),
+            )
+        if not value.is_integer() or value < low:
+            what = "the most parts a compound word may have" if key == "parts" else "the fewest letters of a non-last part"
+            raise UserError(
+                f"compound: {key} {text} is not a whole number of at least {low}",
+                pos,
+                hint=f"'{key}' gives {what}",
+                source_line=self._raw_line(pos),
+            )
+        return int(value)
+
+    def _raw_line(self, pos: Position) -> str:
+        """The source line of ``pos`` as written (so a caret under its column points at the right place)."""
+        return self.lines[pos.line - 1] if 0 < pos.line <= len(self.lines) else ""
 
     def do_constraints_block(self, node: Tree) -> None:
         for d in node.children:

@@ -39,6 +39,7 @@ def validate(grammar: m.Grammar) -> None:
     _check_constraints(grammar)
     _check_rules(grammar)
     _check_stem_rules(grammar)
+    _check_compounds(grammar)
     for index, affix in enumerate(grammar.affixes):
         affix.ident = index
 
@@ -242,6 +243,31 @@ def _check_stem_rules(g: m.Grammar) -> None:
                     klass.pos,
                     _near(name, sorted(g.stem_rules)) or "declare them in a block 'stems NAME { rule ... }'",
                 )
+
+
+def _check_compounds(g: m.Grammar) -> None:
+    """Every name of a compound block is a part of speech or a class; every label of a form a feature."""
+    pos_tags = set(g.pos_tags)
+    features = {v for name, d in g.dimensions.items() if name != "pos" for v in d.values}
+    for c in g.compounds:
+        for key, names in (("first", c.first), ("last", c.last)):
+            for name in names:
+                if name not in pos_tags and name not in g.classes:
+                    raise _err(
+                        f"compound: {name!r} in '{key}' is neither a part of speech nor a class",
+                        c.lines.get(f"{key} {name}", c.lines.get(key, c.pos)),
+                        _near(name, sorted(pos_tags | set(g.classes)))
+                        or "name parts of speech of the 'pos' dimension or classes",
+                    )
+        for bundle in c.forms:
+            for label in bundle:
+                if label not in features:
+                    raise _err(
+                        f"compound: {label!r} in 'forms' is not a declared feature",
+                        c.lines.get(f"forms {label}", c.lines.get("forms", c.pos)),
+                        _near(label, sorted(features))
+                        or "a form is a bundle of feature labels, such as SG NOM; bundles are separated by |",
+                    )
 
 
 def _check_rules(g: m.Grammar) -> None:

@@ -470,6 +470,12 @@ class FastAnalyzer:
         """Decoded analyses of (bounded surface, internal analysis, weight) paths, deduplicated and ranked."""
         if not walked:
             return []
+        seam = self.seam
+        if seam and len(walked) > 1:
+            # a word the lexicon spells needs no compound reading: compounds are for the words it lacks
+            plain = [w for w in walked if seam not in w[1]]
+            if plain:
+                walked = plain
         decode = self.decode
         if len(walked) == 1:
             bounded, internal, weight = walked[0]

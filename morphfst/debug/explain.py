@@ -32,6 +32,7 @@ class AnalysisExplanation:
     entry: dict[str, Any] | None  # the lexicon entry (lemma, class, file, line, ...)
     path: list[PathStep]
     derivation: Derivation | None  # None when no lexicon entry reproduces the word (e.g. a guess)
+    compound: list[str] = field(default_factory=list)  # the parts' surface forms of a compound (the last explained)
 
     @property
     def fired(self) -> list[str]:
@@ -81,14 +82,16 @@ def explain_analysis(session: DebugSession, analysis: Analysis, surface: str) ->
     """Explain one analysis: find the lexicon entry whose derivation gives ``surface``."""
     affix_ids = [mo.affix_id for mo in analysis.morphs if mo.affix_id is not None]
     affixes = [session.affixes[i] for i in affix_ids]
-    wanted_bounded = (
-        m.MORPH_BOUNDARY.join(mo.form for mo in analysis.morphs if mo.form)
-        if all(mo.form != "?" for mo in analysis.morphs)
-        else None
-    )
+    # a compound: the parts before the last are lexicon words in a fixed form; the last one is explained
+    first = [mo for mo in analysis.morphs if mo.kind == "stem"][:-1]
+    morphs = analysis.morphs[len(first) :]
+    lemma = morphs[0].underlying if first else analysis.lemma
+    prefix = "".join(mo.form for mo in first)
+    surface = surface[len(prefix) :] if first and surface.startswith(prefix) else surface
+    wanted_bounded = m.MORPH_BOUNDARY.join(mo.form for mo in morphs if mo.form) if all(mo.form != "?" for mo in morphs) else None
     chosen: tuple[m.LexEntry, Derivation] | None = None
     fallback: m.LexEntry | None = None
-    for candidate in session.entries_by_lemma.get((analysis.lemma, analysis.pos), []):
+    for candidate in session.entries_by_lemma.get((lemma, analysis.pos), []):
         fallback = fallback or candidate
         underlying = session.encode_underlying(candidate, affix_ids)
         found = derive(session, underlying, candidate.flags, target=surface)
@@ -109,6 +112,7 @@ def explain_analysis(session: DebugSession, analysis: Analysis, surface: str) ->
         entry=session.entry_info(entry) if entry else None,
         path=analysis_path(session.grammar, klass, affixes),
         derivation=chosen[1] if chosen else None,
+        compound=[mo.form for mo in first] + [surface] if first else [],
     )
 
 
@@ -185,6 +189,8 @@ def render_explanation(ex: Explanation, rules: bool = True) -> str:
     for n, a in enumerate(ex.analyses, start=1):
         out.append(f"{ex.word}  [{n}/{len(ex.analyses)}]  {a.analysis}  (weight {a.weight:.2f})")
         out.extend(render_columns(a.columns))
+        if a.compound:
+            out.append(f"  compound    {' + '.join(a.compound)} (lexicon words; the last one explained below)")
         if a.entry:
             flags = f", flags {','.join(a.entry['flags'])}" if a.entry["flags"] else ""
             out.append(

@@ -1,0 +1,104 @@
+"""Finnish compounds (grammars/fin/compounds.mfg): analysis of compounds that are not in the lexicon.
+
+What the checks rest on, each marked beside it: a Finnish compound puts its first part in the
+nominative singular (kirjasto+auto) or, less often, in the genitive singular (maailma-n+sota); only the
+last part inflects, and it alone decides consonant gradation and vowel harmony of the endings (Karlsson,
+F., Finnish: An Essential Grammar, 3rd ed., Routledge, 2018, the section on compounds; written from
+memory, not copied). The words are everyday Finnish ("common practice"). The grammar is compiled once
+per test session (the ``fin`` fixture of conftest.py).
+"""
+
+from __future__ import annotations
+
+import pytest
+
+import morphfst
+
+KARLSSON = "Karlsson, Finnish: An Essential Grammar (3rd ed., 2018), compounds; from memory"
+
+
+def readings(fin: morphfst.Language, word: str) -> list[tuple[str, str]]:
+    return [(a.text, a.segmentation) for a in fin.analyze(word)]
+
+
+@pytest.mark.parametrize(
+    ("word", "analysis", "segmentation"),
+    [
+        # the nominative first part, the last part inflected (KARLSSON); kirjastoauto "mobile library"
+        # is common practice
+        ("kirjastoauto", "kirjastoauto N;SG;NOM", "kirjasto-auto"),
+        ("kirjastoautossa", "kirjastoauto N;SG;IN+ESS", "kirjasto-auto-ssa"),
+        ("kirjastoautoon", "kirjastoauto N;SG;IN+ALL", "kirjasto-auto-on"),
+        ("kirjastoautolla", "kirjastoauto N;SG;AT+ESS", "kirjasto-auto-lla"),
+        ("kirjastoautot", "kirjastoauto N;PL;NOM", "kirjasto-auto-t"),
+        ("kirjastoautoissa", "kirjastoauto N;PL;IN+ESS", "kirjasto-auto-i-ssa"),
+        # gradation is the last part's: kauppa, kaupassa (KARLSSON); kirjakauppa "bookshop", common practice
+        ("kirjakaupassa", "kirjakauppa N;SG;IN+ESS", "kirja-kaupa-ssa"),
+        ("kirjakaupat", "kirjakauppa N;PL;NOM", "kirja-kaupa-t"),
+        # harmony is the last part's: kylä + talo takes back -ssa (KARLSSON); kylätalo "village hall"
+        ("kylätalossa", "kylätalo N;SG;IN+ESS", "kylä-talo-ssa"),
+    ],
+)
+def test_nominative_first_part(fin: morphfst.Language, word: str, analysis: str, segmentation: str) -> None:
+    assert (analysis, segmentation) in readings(fin, word)
+
+
+def test_harmony_follows_the_last_part(fin: morphfst.Language) -> None:
+    assert fin.analyze("kylätalossä") == []  # front ending after back talo: wrong (KARLSSON)
+
+
+def test_morphs_and_glosses_of_the_parts(fin: morphfst.Language) -> None:
+    found = [a for a in fin.analyze("kirjastoautossa") if a.segmentation == "kirjasto-auto-ssa"]
+    assert found, "kirjastoautossa: no compound reading"
+    a = found[0]
+    assert (a.lemma, a.pos, a.features) == ("kirjastoauto", "N", ("SG", "IN+ESS"))
+    first, second = a.morphs[:2]
+    assert (first.kind, first.form, first.underlying, first.gloss) == (
+        "stem",
+        "kirjasto",
+        "kirjasto",
+        fin.glosses[("kirjasto", "N")],
+    )
+    assert (second.kind, second.form, second.underlying, second.gloss) == ("stem", "auto", "auto", fin.glosses[("auto", "N")])
+    assert a.gloss.split("-")[:2] == [fin.glosses[("kirjasto", "N")], f"{fin.glosses[('auto', 'N')]}.SG"]
+    assert [s.text for s in fin.segment("kirjastoautossa")][:1] == ["kirjasto-auto-ssa"]
+
+
+def test_genitive_first_part(fin: morphfst.Language) -> None:
+    # kaupungin + kirjasto "city library": the genitive singular first part (KARLSSON); common practice
+    found = [a for a in fin.analyze("kaupunginkirjastossa") if a.segmentation == "kaupungin-kirjasto-ssa"]
+    assert found and found[0].text == "kaupunginkirjasto N;SG;IN+ESS"
+    assert (found[0].morphs[0].form, found[0].morphs[0].underlying) == ("kaupungin", "kaupunki")
+
+
+def test_three_parts(fin: morphfst.Language) -> None:
+    # kaupungin + kirjasto + auto, inflected in the last part (KARLSSON; the word is common practice)
+    assert ("kaupunginkirjastoauto N;SG;IN+ESS", "kaupungin-kirjasto-auto-ssa") in readings(fin, "kaupunginkirjastoautossa")
+    assert ("koulukirjastoauto N;SG;NOM", "koulu-kirjasto-auto") in readings(fin, "koulukirjastoauto")
+
+
+def test_lexicon_word_ranks_above_its_compound_reading(fin: morphfst.Language) -> None:
+    # maailmansota "world war" is in the lexicon (common practice): its own reading is the one given;
+    # the transducer also holds the heavier compound path maailman-soda-ssa, which analyze leaves out
+    assert fin.entries("maailmansota")
+    found = readings(fin, "maailmansodassa")
+    assert found == [("maailmansota N;SG;IN+ESS", "maailmansoda-ssa")]
+    paths = fin.fast.bounded.walk(fin.normalize("maailmansodassa"))
+    seam = fin.fast.seam
+    assert any(seam in side for side, _, _ in paths)
+    assert min(w for side, _, w in paths if seam not in side) < min(w for side, _, w in paths if seam in side)
+    # a compound with fewer seams ranks first: jalkapallo (lexicon) + joukkue before jalka + pallo + joukkue
+    segs = [s for _, s in readings(fin, "jalkapallojoukkueessa")]
+    assert segs.index("jalkapallo-joukkuee-ssa") < segs.index("jalka-pallo-joukkuee-ssa")
+
+
+def test_compounds_are_analysis_only(fin: morphfst.Language) -> None:
+    assert fin.generate("kirjastoauto", "N;SG;IN+ESS") == []  # not in the lexicon: no table, no form
+    assert [f.form for f in fin.generate("maailmansota", "N;SG;IN+ESS")] == ["maailmansodassa"]  # common practice
+
+
+def test_walk_agrees_with_composition(fin: morphfst.Language) -> None:
+    for word in ["kirjastoautossa", "kirjakaupat", "kaupunginkirjastossa", "maailmansodassa", "kaupunginkirjastoautossa"]:
+        walked, composed = fin.analyze(word), fin.analyze_composed(word)
+        assert [(a.text, a.segmentation, a.gloss) for a in walked] == [(a.text, a.segmentation, a.gloss) for a in composed], word
+        assert all(abs(a.weight - b.weight) < 1e-3 for a, b in zip(walked, composed)), word
