@@ -260,7 +260,66 @@ CELLS = [
     ("olla", "V;IND;PRS;3;PL", "ovat"),
 ]
 
-ALL = PARADIGMS + VERBS + CELLS
+# Inverted gradation k : ∅ (letter D) and the other inverted stems with a diphthong before the
+# final consonant, the compound numerals and the numerals in -n.
+INVERTED = (
+    # Karlsson (3rd ed., 2018), verb type 4 (Kotus 73) with inverted gradation k : ∅, maata : makaa-
+    # — from memory
+    cells("maata", "V", FINITE.format("makaan", "makaat", "makaa", "makaamme", "makaatte", "makaavat"))
+    + cells(
+        "maata",
+        "V",
+        "NFIN=maata IND;PST;1;SG=makasin IND;PST;3;SG=makasi COND;3;SG=makaisi IMP;2;SG=makaa IMP;2;PL=maatkaa "
+        "PASS;IND;PRS=maataan PASS;IND;PST=maattiin NFIN;INF2;INS=maaten NFIN;INF3;IN+ESS=makaamassa "
+        "V.PTCP;ACT;PST;ADJ;SG;NOM=maannut V.PTCP;ACT;PRS;ADJ;SG;NOM=makaava",
+    )
+    # Karlsson (3rd ed., 2018), verb types 4 (Kotus 72-75) with k : ∅ after a vowel — from memory
+    + cells("taata", "V", "IND;PRS;1;SG=takaan IND;PST;3;SG=takasi NFIN=taata")
+    + cells("koota", "V", "IND;PRS;1;SG=kokoan IND;PRS;3;SG=kokoaa IND;PST;3;SG=kokosi")
+    + cells("paeta", "V", "IND;PRS;1;SG=pakenen IND;PST;3;SG=pakeni V.PTCP;ACT;PST;ADJ;SG;NOM=paennut")
+    + cells("haljeta", "V", "IND;PRS;3;SG=halkeaa")
+    # Karlsson (3rd ed., 2018), consonant gradation k : ∅ with j only in aika, poika (ajan, pojan),
+    # not in aikoa (aion) — from memory
+    + cells("aikoa", "V", "IND;PRS;1;SG=aion IND;PRS;NEG=aio IND;PST;1;SG=aioin IND;PRS;3;SG=aikoo")
+    + cells("poika", "N", "SG;GEN=pojan PL;NOM=pojat PL;IN+ESS=pojissa")
+    + cells("aika", "N", "SG;GEN=ajan PL;IN+ESS=ajoissa")
+    # Karlsson (3rd ed., 2018), nouns in -e (Kotus 48) and -as/-is (Kotus 41) with k : ∅ — from memory
+    + cells("koe", "N", "SG;GEN=kokeen SG;PRT=koetta SG;IN+ALL=kokeeseen PL;PRT=kokeita")
+    + cells("ruis", "N", "SG;GEN=rukiin SG;PRT=ruista")
+    + cells("varas", "N", "SG;GEN=varkaan PL;NOM=varkaat")
+    # Karlsson (3rd ed., 2018), inverted gradation after a diphthong: kerroin, rangaista; the long
+    # ii of altis keeps the strong grade — from memory
+    + cells("kerroin", "N", "SG;NOM=kerroin SG;GEN=kertoimen")
+    + cells("tuote", "N", "SG;NOM=tuote SG;GEN=tuotteen PL;PRT=tuotteita")
+    + cells("rangaista", "V", "NFIN=rangaista IND;PRS;1;SG=rankaisen")
+    + cells("altis", "ADJ", "SG;GEN=alttiin SG;NOM=altis")
+    # Karlsson (3rd ed., 2018), the numerals: the cardinals in -n and kymmenen — from memory
+    + cells("seitsemän", "NUM", "SG;NOM=seitsemän SG;PRT=seitsemää SG;IN+ESS=seitsemässä PL;PRT=seitsemiä")
+    + cells("kymmenen", "NUM", "SG;NOM=kymmenen SG;GEN=kymmenen SG;PRT=kymmentä SG;IN+ALL=kymmeneen")
+    # Karlsson (3rd ed., 2018), compound numerals: 11-19 inflect the first part only (yhdessätoista),
+    # the tens both parts in the same case (kahdessakymmenessä) — from memory
+    + cells(
+        "yksitoista",
+        "NUM",
+        "SG;NOM=yksitoista SG;GEN=yhdentoista SG;PRT=yhtätoista SG;IN+ESS=yhdessätoista SG;IN+ALL=yhteentoista",
+    )
+    + cells("kaksitoista", "NUM", "SG;GEN=kahdentoista SG;PRT=kahtatoista SG;AT+ESS=kahdellatoista")
+    + cells("kolmetoista", "NUM", "SG;GEN=kolmentoista SG;PRT=kolmeatoista")
+    + cells("viisitoista", "NUM", "SG;GEN=viidentoista SG;PRT=viittätoista SG;ESS=viitenätoista")
+    + cells("seitsemäntoista", "NUM", "SG;NOM=seitsemäntoista SG;PRT=seitsemäätoista SG;IN+ALL=seitsemääntoista")
+    + cells("puolitoista", "NUM", "SG;GEN=puolentoista SG;PRT=puoltatoista")
+    + cells(
+        "kaksikymmentä",
+        "NUM",
+        "SG;NOM=kaksikymmentä SG;GEN=kahdenkymmenen SG;PRT=kahtakymmentä SG;IN+ESS=kahdessakymmenessä "
+        "SG;IN+ALL=kahteenkymmeneen SG;TRANS=kahdeksikymmeneksi SG;ESS=kahtenakymmenenä",
+    )
+    + cells("kolmekymmentä", "NUM", "SG;GEN=kolmenkymmenen SG;PRT=kolmeakymmentä")
+    + cells("seitsemänkymmentä", "NUM", "SG;NOM=seitsemänkymmentä SG;AT+ESS=seitsemälläkymmenellä")
+    + cells("parikymmentä", "NUM", "SG;GEN=parinkymmenen")
+)
+
+ALL = PARADIGMS + VERBS + CELLS + INVERTED
 
 
 @pytest.mark.parametrize("lemma, features, surface", ALL)
@@ -283,7 +342,82 @@ VARIANTS = [
     ("nainen", "N;PL;GEN", ["naisten", "naisien"]),
     ("korkea", "ADJ;SG;PRT", ["korkeaa", "korkeata"]),
     ("talo", "N;SG;IN+ESS;PSS3S", ["talossaan", "talossansa"]),
+    # Karlsson (3rd ed., 2018), verb types 1 and 5 with two stems (Kotus 55, 57, 68) — from memory:
+    # the standard word list gives both; the first is the usual one in current writing
+    ("soutaa", "V;IND;PST;3;SG", ["souti", "sousi"]),
+    ("kaataa", "V;IND;PST;3;SG", ["kaatoi", "kaasi"]),
+    ("kaataa", "V;IND;PST;1;SG", ["kaadoin", "kaasin"]),
+    ("saartaa", "V;IND;PST;3;SG", ["saartoi", "saarsi"]),
+    ("tupakoida", "V;IND;PRS;1;SG", ["tupakoin", "tupakoitsen"]),
+    ("tupakoida", "V;IND;PRS;3;SG", ["tupakoi", "tupakoitsee"]),
+    ("tupakoida", "V;IND;PST;3;SG", ["tupakoi", "tupakoitsi"]),
+    ("tupakoida", "V;COND;3;SG", ["tupakoisi", "tupakoitsisi"]),
+    ("tupakoida", "V;V.PTCP;ACT;PRS;ADJ;SG;NOM", ["tupakoiva", "tupakoitseva"]),
 ]
+
+
+# Forms of the variant stems that have no variant: the consonant stem of 68, the past of 54.
+# Karlsson (3rd ed., 2018), verb type 5 (Kotus 68) and type 1 (Kotus 54) — from memory
+SINGLE = [
+    ("tupakoida", "V;PASS;IND;PRS", ["tupakoidaan"]),
+    ("tupakoida", "V;V.PTCP;ACT;PST;ADJ;SG;NOM", ["tupakoinut"]),
+    ("tupakoida", "V;NFIN", ["tupakoida"]),
+    ("murtaa", "V;IND;PST;3;SG", ["mursi"]),
+    ("soutaa", "V;IND;PRS;1;SG", ["soudan"]),
+]
+
+
+@pytest.mark.parametrize("lemma, features, expected", SINGLE)
+def test_forms_without_a_variant(fin: morphfst.Language, lemma: str, features: str, expected: list[str]) -> None:
+    assert [f.form for f in fin.generate(lemma, features)] == expected
+
+
+# The best analysis of words whose readings compete: the reading usual in running text first.
+# Common practice (the usual reading of the word in Finnish text), judged from memory of usage; the
+# pronoun cells follow Karlsson (3rd ed., 2018), the personal pronouns — from memory.
+BEST = [
+    ("minä", "minä PRON;SG;NOM"),  # not the rare essive of mikä
+    ("sinä", "sinä PRON;SG;NOM"),  # not the rare essive of se
+    ("minäkin", "minä PRON;SG;NOM;KIN"),
+    ("näin", "näin ADV"),  # not nähdä's past 1sg
+    ("näinkin", "näin ADV;KIN"),
+    ("hyvin", "hyvin ADV"),  # not hyvä with the superlative -in
+    ("jälkeen", "jälkeen ADP"),
+    ("mukaan", "mukaan ADP"),
+    ("takaisin", "takaisin ADV"),
+    ("eli", "eli CONJ"),
+    ("yhtään", "yhtään ADV"),  # not yksi with a possessive suffix
+    ("tonne", "tonne ADV"),  # not tuo with a possessive suffix
+    ("tänne", "tänne ADV"),
+    ("toisi", "tuoda V;COND;3;SG"),  # pronouns take no possessive suffix
+    ("totesi", "todeta V;IND;PST;3;SG"),  # the past in -si before tosi + 2sg possessive
+    ("tapasi", "tavata V;IND;PST;3;SG"),
+    ("kuusi", "kuusi NUM;SG;NOM"),
+    ("juonen", "juoni N;SG;GEN"),  # the potential is rare
+    ("ui", "uida V;IND;PRS;3;SG"),  # the present before the imperative
+    ("saa", "saada V;IND;PRS;3;SG"),
+    ("ota", "ottaa V;IND;PRS;NEG"),  # the connegative before the imperative
+    ("voiko", "voida V;IND;PRS;3;SG;KO"),
+    ("kaverisi", "kaveri N;SG;NOM;PSS2S"),  # singular before plural before a possessive suffix
+    ("itseni", "itse PRON;SG;NOM;PSS1S"),
+    ("hintansa", "hinta N;SG;NOM;PSS3S"),
+    ("suurin", "suuri ADJ;SPRL;SG;NOM"),  # the superlative before the plural instructive
+    ("pitkin", "pitkin ADP"),
+    ("kaksikymmentä", "kaksikymmentä NUM;SG;NOM"),
+    ("elämästään", "elämä N;SG;IN+ABL;PSS3S"),  # the noun before elää's agent participle
+    ("voima", "voima N;SG;NOM"),
+    ("elämän", "elämä N;SG;GEN"),  # not the archaic instructive of the third infinitive
+    ("tekemän", "tehdä V;V.PTCP;AGT;ADJ;SG;GEN"),
+    ("ajo", "ajo N;SG;NOM"),  # aikoa's connegative is aio
+    ("jotakin", "jokin PRON;SG;PRT"),  # the indefinite pronoun, not joka with -kin
+    ("kenellekään", "kukaan PRON;SG;AT+ALL"),
+]
+
+
+@pytest.mark.parametrize("word, expected", BEST)
+def test_the_usual_reading_ranks_first(fin: morphfst.Language, word: str, expected: str) -> None:
+    analyses = [a.text for a in fin.analyze(word)]
+    assert analyses and analyses[0] == expected, analyses
 
 
 @pytest.mark.parametrize("lemma, features, expected", VARIANTS)
@@ -327,6 +461,15 @@ WRONG = [
     "otettiiin",  # otettiin
     "kysynut",  # kysynyt
     "öihiin",  # öihin
+    # Karlsson (3rd ed., 2018), gradation k : ∅, numerals, pronouns — from memory
+    "makkaan",  # makaan
+    "ruiin",  # rukiin
+    "kerroimen",  # kertoimen
+    "seitsemä",  # seitsemän
+    "kahdenkymmentä",  # kahdenkymmenen (both parts in the same case)
+    "yhdessäkymmentä",  # yksi has no tens
+    "tämäni",  # demonstratives take no possessive suffix
+    "minäni",
 ]
 
 
