@@ -73,7 +73,7 @@ class ArcWalker:
 
     Nothing is built up front, so a language loads in constant time whatever its size. A state's
     arcs are read from the transducer the first time a walk reaches it, and its epsilon closure is
-    folded into its letter arcs (one dict lookup per state and letter). A walk then runs in two
+    folded into its arcs for a letter the first time a walk reads that letter there. A walk then runs in two
     passes. Forward, it follows the *set* of live states, letter by letter, through a lazily built
     subset automaton (Rabin & Scott 1959): each (set, letter) move is computed once and remembered,
     so a word whose prefixes were seen before costs one dict lookup per letter and no string is
@@ -87,7 +87,8 @@ class ArcWalker:
         self.start = fst.start()
         self._skip = {ord(c) for c in skip}
         self._zero = Weight.zero(fst.weight_type())
-        self._tables: dict[int, tuple[dict[str, list[Step]], list[tuple[str, str, float]]]] = {}
+        self._folded: dict[tuple[int, str], list[Step]] = {}
+        self._ends_memo: dict[int, list[tuple[str, str, float]]] = {}
         self._raw: dict[int, tuple[list[Step], dict[str, list[Step]], float | None]] = {}
         self._reach_memo: dict[int, list[Path] | None] = {}
         self._reset_sets()
@@ -155,29 +156,47 @@ class ArcWalker:
         result = memo[state] = [(k[0], k[1], k[2], w) for k, w in best.items()]
         return result
 
-    def _table(self, state: int) -> tuple[dict[str, list[Step]], list[tuple[str, str, float]]]:
-        """The steps that read each letter from ``state`` (closure folded in) and its final pieces."""
-        table = self._tables.get(state)
-        if table is None:
-            try:
-                reach = self._reach(state)
-            except _Cycle:  # a cycle of arcs that read nothing (a zero-morph derivation loop): bounded walk
-                for key, value in list(self._reach_memo.items()):
-                    if value is None:
-                        del self._reach_memo[key]
-                reach = self._closure(state)
-            steps: dict[str, list[Step]] = {}
-            ends: list[tuple[str, str, float]] = []
-            for target, side, out, weight in reach:
-                _, consume, final = self._arcs(target)
-                for letter, arcs in consume.items():
-                    bucket = steps.setdefault(letter, [])
-                    for _, o2, w2, nxt in arcs:
-                        bucket.append((side + letter, out + o2, weight + w2, nxt))
+    def _reachable(self, state: int) -> list[Path]:
+        """:meth:`_reach` of ``state``, or on a cycle of arcs that read nothing (a zero-morph derivation
+        loop) the depth-bounded closure."""
+        try:
+            return self._reach(state)
+        except _Cycle:
+            for key, value in list(self._reach_memo.items()):
+                if value is None:
+                    del self._reach_memo[key]
+            reach = self._closure(state)
+            self._reach_memo[state] = reach
+            return reach
+
+    def _steps(self, state: int, letter: str) -> list[Step]:
+        """The steps that read ``letter`` from ``state``, closure folded in (built on first use: a walk
+        reads one or two of the letters a state could read, so only those are folded)."""
+        key = (state, letter)
+        steps = self._folded.get(key)
+        if steps is None:
+            steps = []
+            arcs = self._arcs
+            for target, side, out, weight in self._reachable(state):
+                found = arcs(target)[1].get(letter)
+                if found:
+                    for _, o2, w2, nxt in found:
+                        steps.append((side + letter, out + o2, weight + w2, nxt))
+            self._folded[key] = steps
+        return steps
+
+    def _ends_of(self, state: int) -> list[tuple[str, str, float]]:
+        """The (side text, output, weight) of the paths from ``state`` to a final state that read nothing."""
+        ends = self._ends_memo.get(state)
+        if ends is None:
+            arcs = self._arcs
+            ends = []
+            for target, side, out, weight in self._reachable(state):
+                final = arcs(target)[2]
                 if final is not None:
                     ends.append((side, out, weight + final))
-            table = self._tables[state] = (steps, ends)
-        return table
+            self._ends_memo[state] = ends
+        return ends
 
     # ---- sets of states: the subset automaton, built as words need it ------------------------------
     def _reset_sets(self) -> None:
@@ -202,7 +221,7 @@ class ArcWalker:
         that lead there (``None`` when no state reads the letter)."""
         back: dict[int, list[Path]] = {}
         for state in self._sets[ident]:
-            steps = self._table(state)[0].get(letter)
+            steps = self._steps(state, letter)
             if steps:
                 for side, out, weight, target in steps:
                     back.setdefault(target, []).append((state, side, out, weight))
@@ -214,7 +233,7 @@ class ArcWalker:
         pieces = self._ends[ident]
         if pieces is None:
             pieces = self._ends[ident] = [
-                (state, side, out, weight) for state in self._sets[ident] for side, out, weight in self._table(state)[1]
+                (state, side, out, weight) for state in self._sets[ident] for side, out, weight in self._ends_of(state)
             ]
         return pieces
 
@@ -275,9 +294,7 @@ class ArcWalker:
 
     def size(self) -> int:
         """Number of folded steps built so far (a measure of the tables' memory; they grow with use)."""
-        return sum(len(steps) for table, _ in self._tables.values() for steps in table.values()) + sum(
-            len(ends) for _, ends in self._tables.values()
-        )
+        return sum(map(len, self._folded.values())) + sum(map(len, self._ends_memo.values()))
 
 
 def _builder(cls: type) -> Callable[..., Any]:

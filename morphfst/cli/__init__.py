@@ -53,6 +53,8 @@ def build_parser(argv: Sequence[str] | None = None) -> argparse.ArgumentParser:
         chosen = f"{__name__}.{argv[0]}_cmd"
         if chosen in modules:
             modules = [chosen]
+    elif argv and argv[0] == "--version":
+        modules = []
     for name in modules:
         importlib.import_module(name).register(sub)
     parser.set_defaults(_subparsers=sub)

@@ -151,10 +151,30 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
     for one particular message, so none can wait for another in a circle. Chunks leave in the order
     they came, which keeps the main process's round-robin reading in input order.
     """
+    import queue
+    import threading
+
     workers = len(peers)
     waiting: deque[list[Any]] = deque()  # [number, doc, chunk, decoded text, answers still expected]
     by_number: dict[int, list[Any]] = {}
     count = 0
+    # Results go out through a thread: a send blocks while the main process reads another worker's
+    # pipe, and this loop must keep answering the others meanwhile (else two workers could wait on
+    # each other through the main process). The queue holds at most the chunks in flight.
+    outbox: queue.Queue[tuple[str, Any] | None] = queue.Queue()
+
+    def sender() -> None:
+        while (message := outbox.get()) is not None:
+            results.send(message)
+
+    thread = threading.Thread(target=sender, name="morphfst-results", daemon=True)
+    thread.start()
+
+    def finish(message: tuple[str, Any]) -> None:
+        outbox.put(message)
+        outbox.put(None)
+        thread.join()
+
     try:
         while True:
             item = inbox.get()
@@ -183,15 +203,15 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
                     processor.learn(token, value, info)
                 by_number[number][4] -= 1
             else:
-                results.send(("final", processor.flush()))
+                finish(("final", processor.flush()))
                 break
             while waiting and waiting[0][4] == 0:
                 number, doc, chunk, decoded, _ = waiting.popleft()
                 del by_number[number]
                 processor.doc = doc
-                results.send(("ok", processor.process(chunk, decoded)))
+                outbox.put(("ok", processor.process(chunk, decoded)))
     except BaseException:
-        results.send(("error", traceback.format_exc()))
+        finish(("error", traceback.format_exc()))
         return
     results.close()
 
