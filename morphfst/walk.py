@@ -142,8 +142,11 @@ class ArcWalker:
             return found  # type: ignore[no-any-return]
         if depth >= MAX_CLOSURE_DEPTH:
             raise _Cycle
-        memo[state] = None
         free, consume, final = self._arcs(state)
+        if not free:  # most states: nothing to follow
+            result = memo[state] = [(state, "", "", 0.0)] if consume or final is not None else []
+            return result
+        memo[state] = None
         best: dict[tuple[int, str, str], float] = {}
         if consume or final is not None:
             best[(state, "", "")] = 0.0
@@ -176,9 +179,10 @@ class ArcWalker:
         steps = self._folded.get(key)
         if steps is None:
             steps = []
-            arcs = self._arcs
-            for target, side, out, weight in self._reachable(state):
-                found = arcs(target)[1].get(letter)
+            raw = self._raw
+            reach = self._reach_memo.get(state) or self._reachable(state)
+            for target, side, out, weight in reach:
+                found = (raw.get(target) or self._arcs(target))[1].get(letter)
                 if found:
                     for _, o2, w2, nxt in found:
                         steps.append((side + letter, out + o2, weight + w2, nxt))
@@ -338,12 +342,10 @@ class FastAnalyzer:
     """
 
     def __init__(self, lang: Language) -> None:
-
         self.lang = lang
         self.seam = lang.space.to_char.get(COMPOUND_SEAM, "")  # between compound parts, on both tapes
         self.bounded = ArcWalker(lang.fsts["bounded"], skip=[lang.plus, self.seam] if self.seam else [lang.plus])
-        guesser = lang.fsts.get("guesser")
-        self.guesser = ArcWalker(guesser, skip=[lang.plus]) if guesser is not None else None
+        self._guesser: ArcWalker | None | bool = False  # False: not looked up yet (read on first guess)
         self.mark = lang.space.to_char.get(GUESS_SYMBOL, "")
         # Decoding tables: the label and kind of every code, the affixes by id; morphs are shared objects.
         self.labels = {code: name.split(":", 1)[1] if ":" in name else name for name, code in lang.space.to_char.items()}
@@ -358,6 +360,14 @@ class FastAnalyzer:
         self._tails: dict[str, tuple[str, tuple[str, ...], tuple[tuple[int, tuple[str, ...]], ...], int]] = {}
         self._affix_morphs: dict[tuple[str, str], tuple[Morph, ...]] = {}
         self._stems: dict[tuple[str, str, str], Morph] = {}
+
+    @property
+    def guesser(self) -> ArcWalker | None:
+        """The guesser's walker (``None`` when the grammar has no guesser); its transducer is read on first use."""
+        if self._guesser is False:
+            fst = self.lang.fsts.get("guesser")
+            self._guesser = ArcWalker(fst, skip=[self.lang.plus]) if fst is not None else None
+        return self._guesser  # type: ignore[return-value]
 
     def analyze(self, word: str, guess: bool = False, limit: int = MAX_PATHS) -> list[Analysis]:
         """Every analysis of ``word``, best first; with ``guess``, guessed ones when the lexicon has none."""
@@ -378,9 +388,10 @@ class FastAnalyzer:
 
     def guess_normalized(self, surface: str, limit: int = MAX_GUESSES) -> list[Analysis]:
         """Guesses of a normalized word: the ``limit`` best (only the paths that can be among them are decoded)."""
-        if self.guesser is None or len(surface) > MAX_GUESS_LENGTH or limit < 1:
+        guesser = self.guesser
+        if guesser is None or len(surface) > MAX_GUESS_LENGTH or limit < 1:
             return []
-        walked = self.guesser.walk(surface, MAX_PATHS, best=limit == 1)
+        walked = guesser.walk(surface, MAX_PATHS, best=limit == 1)
         if len(walked) > limit:
             # Paths come sorted by weight; keep every path that ties with the last one kept, so the
             # final order (weight, then analysis text) is the same as when everything is decoded.
