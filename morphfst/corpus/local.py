@@ -37,6 +37,7 @@ from .records import ChunkProcessor, ChunkResult, Options, Tally
 from .sources import Source, compiled_file, load_compiled
 
 POLL_SECONDS = 0.5
+ANSWER_EVERY = 32  # word types a worker analyzes between two looks for other workers' questions
 
 
 class WorkerFailure(UserError):
@@ -175,17 +176,40 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
         outbox.put(None)
         thread.join()
 
+    backlog: deque[Any] = deque()  # messages taken from the inbox while answering questions early
+
+    def answer(item: Any) -> None:
+        _, asker, number, tokens = item
+        found = [processor.lookup(t) for t in tokens]
+        peers[asker].put(("answer", number, tokens, found))
+
+    def answer_waiting_questions() -> None:
+        """Answer the questions already in the inbox now (another worker is waiting for them); keep
+        every other message for later, in order."""
+        while True:
+            try:
+                item = inbox.get_nowait()
+            except queue.Empty:
+                return
+            if item is not None and item[0] == "ask":
+                answer(item)
+            else:
+                backlog.append(item)
+
     try:
         while True:
-            item = inbox.get()
+            item = backlog.popleft() if backlog else inbox.get()
             kind = item[0] if item is not None else "stop"
             if kind == "chunk":
                 _, doc, chunk = item
                 decoded, missing = processor.prepare(chunk)
                 asks: dict[int, list[str]] = {}
+                own: list[str] = []
                 for token in missing:
                     who = owner(token, workers)
-                    if who != me:
+                    if who == me:
+                        own.append(token)
+                    else:
                         asks.setdefault(who, []).append(token)
                 job = [count, doc, chunk, decoded, len(asks)]
                 by_number[count] = job
@@ -193,10 +217,14 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
                 for who, tokens in asks.items():
                     peers[who].put(("ask", me, count, tokens))
                 count += 1
+                # analyze this chunk's own types now, stopping every few words to answer the others
+                for done, token in enumerate(own, start=1):
+                    processor.lookup(token)
+                    if done % ANSWER_EVERY == 0:
+                        answer_waiting_questions()
+                answer_waiting_questions()
             elif kind == "ask":
-                _, asker, number, tokens = item
-                found = [processor.lookup(t) for t in tokens]
-                peers[asker].put(("answer", number, tokens, found))
+                answer(item)
             elif kind == "answer":
                 _, number, tokens, found = item
                 for token, (value, info) in zip(tokens, found):
