@@ -56,15 +56,20 @@ def build_corpus(code: str, tokens: int, path: Path, seed: int = 5) -> tuple[lis
     weights = [word_frequency(w, code) for w in words]
     rng = random.Random(seed)
     sample = rng.choices(words, weights=weights, k=tokens)
+    return words, write_lines(sample, path, rng)
+
+
+def write_lines(tokens: list[str], path: Path, rng: random.Random) -> int:
+    """Write ``tokens`` to ``path`` in lines of 5 to 20 tokens; returns the number of lines."""
     lines = 0
     with path.open("w", encoding="utf-8") as out:
         i = 0
-        while i < len(sample):
+        while i < len(tokens):
             n = rng.randint(5, 20)
-            out.write(" ".join(sample[i : i + n]) + "\n")
+            out.write(" ".join(tokens[i : i + n]) + "\n")
             i += n
             lines += 1
-    return words, lines
+    return lines
 
 
 def run_command(argv: list[str]) -> tuple[float, float]:

@@ -95,6 +95,7 @@ sys.path.insert(0, str(Path(__file__).resolve().parent))
 
 import pynini.lib.rewrite as rewrite  # noqa: E402
 from bench_core import _prefix  # noqa: E402
+from bench_corpus import write_lines  # noqa: E402
 
 import morphfst  # noqa: E402
 from morphfst.build import compile_grammar  # noqa: E402
@@ -680,14 +681,7 @@ def build_corpus(bench: Bench, name: str, tokens: int, share: float, path: Path,
         if got is not None:
             sample[i] = got[0]
             replaced += 1
-    lines = 0
-    with path.open("w", encoding="utf-8") as out:
-        i = 0
-        while i < len(sample):
-            n = rng.randint(5, 20)
-            out.write(" ".join(sample[i : i + n]) + "\n")
-            i += n
-            lines += 1
+    lines = write_lines(sample, path, rng)
     known = set(words)
     generated = {f for f in inflector.forms.values() if f}
     return CorpusInfo(tokens, len(set(sample)), lines, replaced, len(generated), len(generated - known), path.stat().st_size)

@@ -68,10 +68,13 @@ class Metadata(dict):  # type: ignore[type-arg]
     def copy(self) -> Metadata:  # type: ignore[override]
         return Metadata(self, self._lazy)
 
-    def defer(self, key: str, loader: Callable[[], Any]) -> None:
-        """Read ``key`` with ``loader`` when it is first looked up (replacing what is held now)."""
-        super().pop(key, None)
-        self._lazy[key] = loader
+    def transform(self, key: str, change: Callable[[Any], Any]) -> None:
+        """Apply ``change`` to the value of ``key``: now if it is held, else when it is first read."""
+        read = self._lazy.get(key)
+        if read is None:
+            self[key] = change(self[key])
+        else:
+            self._lazy[key] = lambda: change(read())
 
     def whole(self) -> dict[str, Any]:
         """A plain dict with every member read."""

@@ -281,11 +281,8 @@ def _with_current_sources(meta: dict[str, Any], grammar_path: Path, files: list[
                     return entry
                 return entry | {"file": moved.get(file) or moved.get(str(Path(file).resolve()), file)}
 
-            if meta.is_loaded("lexicon"):
-                meta["lexicon"] = [relocated(e) for e in meta["lexicon"]]
-            elif "lexicon" in meta:
-                read = meta._lazy["lexicon"]
-                meta.defer("lexicon", lambda: [relocated(e) for e in read()])
+            if "lexicon" in meta:
+                meta.transform("lexicon", lambda entries: [relocated(e) for e in entries])
     else:
         meta["sources"] = [{"path": p, "sha256": file_hash(p)} for p in new]
     return meta

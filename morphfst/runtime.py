@@ -14,6 +14,7 @@ from typing import Any
 
 import pynini
 
+from .archive import Metadata
 from .errors import UserError
 from .fstutil import Arc, Weight, acc, is_empty, paths
 from .normalize import Normalization, make_normalizer, restore_case
@@ -181,7 +182,7 @@ class Language:
     def glosses(self) -> dict[tuple[str, str], str]:
         """The gloss of every (lemma, part of speech) of the lexicon (the first entry's), read on first use."""
         if self._glosses is None:
-            if not _held(self.meta, "lexicon") and "glosses" in self.meta:
+            if isinstance(self.meta, Metadata) and not self.meta.is_loaded("lexicon") and "glosses" in self.meta:
                 self._glosses = self.meta["glosses"]
             else:
                 found: dict[tuple[str, str], str] = {}
@@ -207,12 +208,6 @@ class Language:
         from .fstutil import size
 
         return {name: dict(zip(("states", "arcs"), size(f))) for name, f in self.fsts.items()}
-
-
-def _held(meta: dict[str, Any], key: str) -> bool:
-    """True when ``meta`` holds ``key`` already (a compiled file's metadata reads its lexicon on first use)."""
-    is_loaded = getattr(meta, "is_loaded", None)
-    return bool(is_loaded(key)) if is_loaded is not None else key in meta
 
 
 def _permutations(codes: list[str]) -> pynini.Fst:
