@@ -91,6 +91,10 @@ class ArcWalker:
         self._ends_memo: dict[int, list[tuple[str, str, float]]] = {}
         self._raw: dict[int, tuple[list[Step], dict[str, list[Step]], float | None]] = {}
         self._reach_memo: dict[int, list[Path] | None] = {}
+        self._active: set[tuple[int, str]] = set()  # (state, letter) folds under way (a cycle guard)
+        self._active_ends: set[int] = set()
+        self._firsts: dict[int, frozenset[str]] = {}
+        self._active_firsts: set[int] = set()
         self._reset_sets()
 
     # ---- one state: its arcs, closure and folded table (built on first use) ---------------------------
@@ -175,31 +179,118 @@ class ArcWalker:
     def _steps(self, state: int, letter: str) -> list[Step]:
         """The steps that read ``letter`` from ``state``, closure folded in (built on first use: a walk
         reads one or two of the letters a state could read, so only those are folded)."""
-        key = (state, letter)
-        steps = self._folded.get(key)
+        steps = self._folded.get((state, letter))
         if steps is None:
-            steps = []
-            raw = self._raw
-            reach = self._reach_memo.get(state) or self._reachable(state)
-            for target, side, out, weight in reach:
-                found = (raw.get(target) or self._arcs(target))[1].get(letter)
-                if found:
-                    for _, o2, w2, nxt in found:
-                        steps.append((side + letter, out + o2, weight + w2, nxt))
-            self._folded[key] = steps
+            try:
+                steps = self._fold(state, letter, 0)
+            except _Cycle:
+                self._active.clear()
+                self._active_firsts.clear()
+                steps = self._folded[(state, letter)] = self._fold_closure(state, letter)
+        return steps
+
+    def _fold(self, state: int, letter: str, depth: int) -> list[Step]:
+        """:meth:`_steps` by recursion over the arcs that read no input: the state's own arcs for
+        ``letter`` and, behind each arc that reads nothing, the folded steps of its target with that
+        arc's side text, output and weight put in front (memoized per (state, letter), so the suffix
+        network that every stem of a class reaches through one boundary arc is folded once per letter,
+        and a state's whole closure is never listed). Equal (side, output, next state) keep the lowest
+        weight. Raises :class:`_Cycle` on a cycle of arcs that read nothing."""
+        key = (state, letter)
+        found = self._folded.get(key)
+        if found is not None:
+            return found
+        if depth >= MAX_CLOSURE_DEPTH or key in self._active:
+            raise _Cycle
+        free, consume, _ = self._raw.get(state) or self._arcs(state)
+        own = consume.get(letter)
+        steps: list[Step] = [(letter, out, weight, nxt) for _, out, weight, nxt in own] if own else []
+        if free:
+            self._active.add(key)
+            firsts = self._firsts
+            for s2, o2, w2, target in free:
+                if letter not in (firsts.get(target) or self._first_letters(target, depth + 1)):
+                    continue
+                behind = self._fold(target, letter, depth + 1)
+                if behind:
+                    steps.extend([(s2 + side, o2 + out, w2 + weight, nxt) for side, out, weight, nxt in behind])
+            self._active.discard(key)
+            if len(free) > 1 and len(steps) > 1:
+                steps = _lowest(steps)
+        self._folded[key] = steps
+        return steps
+
+    def _first_letters(self, state: int, depth: int = 0) -> frozenset[str]:
+        """The letters some step from ``state`` reads (its own arcs' and those behind arcs that read
+        nothing), memoized per state: a fold skips the arcs behind which the letter cannot be read.
+        Raises :class:`_Cycle` on a cycle of arcs that read nothing."""
+        found = self._firsts.get(state)
+        if found is not None:
+            return found
+        if depth >= MAX_CLOSURE_DEPTH or state in self._active_firsts:
+            raise _Cycle
+        free, consume, _ = self._raw.get(state) or self._arcs(state)
+        letters = frozenset(consume)
+        if free:
+            self._active_firsts.add(state)
+            for _, _, _, target in free:
+                behind = self._firsts.get(target) or self._first_letters(target, depth + 1)
+                if not behind <= letters:
+                    letters = letters | behind
+            self._active_firsts.discard(state)
+        self._firsts[state] = letters
+        return letters
+
+    def _fold_closure(self, state: int, letter: str) -> list[Step]:
+        """The steps that read ``letter`` from ``state`` through its (depth-bounded) closure: the
+        fallback when arcs that read nothing form a cycle (a zero-morph derivation loop)."""
+        steps: list[Step] = []
+        for target, side, out, weight in self._reachable(state):
+            found = self._arcs(target)[1].get(letter)
+            if found:
+                steps.extend((side + letter, out + o2, weight + w2, nxt) for _, o2, w2, nxt in found)
         return steps
 
     def _ends_of(self, state: int) -> list[tuple[str, str, float]]:
         """The (side text, output, weight) of the paths from ``state`` to a final state that read nothing."""
         ends = self._ends_memo.get(state)
         if ends is None:
-            arcs = self._arcs
-            ends = []
-            for target, side, out, weight in self._reachable(state):
-                final = arcs(target)[2]
-                if final is not None:
-                    ends.append((side, out, weight + final))
-            self._ends_memo[state] = ends
+            try:
+                ends = self._end(state, 0)
+            except _Cycle:
+                self._active.clear()
+                arcs = self._arcs
+                ends = []
+                for target, side, out, weight in self._reachable(state):
+                    final = arcs(target)[2]
+                    if final is not None:
+                        ends.append((side, out, weight + final))
+                self._ends_memo[state] = ends
+        return ends
+
+    def _end(self, state: int, depth: int) -> list[tuple[str, str, float]]:
+        """:meth:`_ends_of` by recursion over the arcs that read nothing, memoized per state (as :meth:`_fold`)."""
+        found = self._ends_memo.get(state)
+        if found is not None:
+            return found
+        if depth >= MAX_CLOSURE_DEPTH or state in self._active_ends:
+            raise _Cycle
+        free, _, final = self._raw.get(state) or self._arcs(state)
+        ends: list[tuple[str, str, float]] = [("", "", final)] if final is not None else []
+        if free:
+            self._active_ends.add(state)
+            for s2, o2, w2, target in free:
+                behind = self._end(target, depth + 1)
+                if behind:
+                    ends.extend([(s2 + side, o2 + out, w2 + weight) for side, out, weight in behind])
+            self._active_ends.discard(state)
+            if len(free) > 1 and len(ends) > 1:
+                low: dict[tuple[str, str], float] = {}
+                for side, out, weight in ends:
+                    if weight < low.get((side, out), _INF):
+                        low[(side, out)] = weight
+                ends = [(side, out, weight) for (side, out), weight in low.items()]
+        self._ends_memo[state] = ends
         return ends
 
     # ---- sets of states: the subset automaton, built as words need it ------------------------------
@@ -323,6 +414,18 @@ def _builder(cls: type) -> Callable[..., Any]:
 
 _new_morph = _builder(Morph)
 _new_analysis = _builder(Analysis)
+
+
+def _lowest(steps: list[Step]) -> list[Step]:
+    """The steps with distinct (side, output, next state), each at its lowest weight (first-seen order)."""
+    low: dict[tuple[str, str, int], float] = {}
+    for side, out, weight, nxt in steps:
+        key = (side, out, nxt)
+        if weight < low.get(key, _INF):
+            low[key] = weight
+    if len(low) == len(steps):
+        return steps
+    return [(side, out, weight, nxt) for (side, out, nxt), weight in low.items()]
 
 
 def _best_per_state(paths: list[Path]) -> list[Path]:
