@@ -1,8 +1,9 @@
 """The compiled file: one zip archive holding the transducers (OpenFst binary) and the metadata.
 
 Layout: ``metadata.json`` (everything but the lexicon), ``lexicon.json`` (the lexicon entries),
-``glosses.tsv`` (lemma, part of speech and gloss of every entry: what decoding needs) and one
-``<name>.fst`` per transducer. The archive comment holds a SHA-256 checksum of every byte before it,
+``glosses.tsv`` (lemma, part of speech and gloss of every entry: what decoding needs), one
+``<name>.fst`` per transducer and a packed arc table ``<name>.arcs`` (:mod:`morphfst.arctable`) of each
+transducer the walk reads, so that the analyzer starts without parsing an OpenFst binary. The archive comment holds a SHA-256 checksum of every byte before it,
 so a damaged file is detected when it is opened, by one pass over the raw bytes, without inflating
 anything. Loading reads only ``metadata.json``; each transducer is read the first time it is used
 (:class:`LazyFsts`) and the lexicon the first time a tool asks for it (:class:`Metadata`), so start-up
@@ -23,6 +24,7 @@ from typing import Any
 
 import pynini
 
+from .arctable import WALKED, Arcs, FstArcs, PackedArcs, pack
 from .atomic import create_temp, discard, publish, write_error
 from .errors import Position, UserError
 from .version import FORMAT_VERSION
@@ -89,6 +91,7 @@ class LazyFsts(Mapping[str, pynini.Fst]):
         self._names = names
         self._path = path
         self._loaded: dict[str, pynini.Fst] = {}
+        self._tables: dict[str, Arcs] = {}
 
     def __getitem__(self, name: str) -> pynini.Fst:
         fst = self._loaded.get(name)
@@ -100,6 +103,22 @@ class LazyFsts(Mapping[str, pynini.Fst]):
             except Exception as exc:  # a damaged member: zlib.error, BadZipFile, pynini's FstIOError
                 raise _damaged(self._path, exc) from None
         return fst
+
+    def arcs(self, name: str) -> Arcs:
+        """The arcs of transducer ``name`` for the walk: its packed table when the archive has one,
+        else read through pynini."""
+        table = self._tables.get(name)
+        if table is None:
+            member = f"{name}.arcs"
+            if member in self._zf.NameToInfo:
+                try:
+                    table = PackedArcs(self._zf.read(member))
+                except Exception as exc:  # zlib.error, BadZipFile, ValueError from a damaged table
+                    raise _damaged(self._path, exc) from None
+            else:
+                table = FstArcs(self[name])
+            self._tables[name] = table
+        return table
 
     def __iter__(self) -> Iterator[str]:
         return iter(self._names)
@@ -141,6 +160,7 @@ def save_archive(path: str | Path, fsts: Mapping[str, pynini.Fst], meta: Mapping
         ("glosses.tsv", glosses_tsv(lexicon).encode("utf-8")),
     ]
     members += [(f"{name}.fst", fst.write_to_string()) for name, fst in fsts.items()]
+    members += [(f"{name}.arcs", pack(fsts[name])) for name in WALKED if name in fsts]
     buffer = io.BytesIO()
     with zipfile.ZipFile(buffer, "w", compression=zipfile.ZIP_DEFLATED, compresslevel=1) as zf:
         for name, data in members:

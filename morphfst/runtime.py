@@ -14,7 +14,8 @@ from typing import Any
 
 import pynini
 
-from .archive import Metadata
+from .archive import LazyFsts, Metadata
+from .arctable import Arcs, FstArcs
 from .errors import UserError
 from .fstutil import Arc, Weight, acc, is_empty, paths
 from .normalize import Normalization, make_normalizer, restore_case
@@ -68,6 +69,13 @@ class Language:
         if self._fast is None:
             self._fast = FastAnalyzer(self)
         return self._fast
+
+    def arcs(self, name: str) -> Arcs:
+        """The arcs of transducer ``name`` as the walk reads them (the compiled file's packed table
+        when there is one)."""
+        if isinstance(self.fsts, LazyFsts):
+            return self.fsts.arcs(name)
+        return FstArcs(self.fsts[name])
 
     def guess(self, word: str) -> list[Analysis]:
         """Guessed analyses of ``word``: a stem of the shape a class's ``guess`` pattern allows, a valid

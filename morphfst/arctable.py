@@ -1,0 +1,123 @@
+"""Arc tables: the arcs of a transducer as packed arrays, for the walk (:mod:`morphfst.walk`).
+
+The walk reads a state's arcs the first time it reaches the state. Through pynini that costs an
+OpenFst binary parse of the whole transducer at start-up and some microseconds per state after it.
+The compiled file therefore also holds, for each transducer the walk reads, a table in compressed
+sparse row form (the arcs of all states one after another, and the offset where each state's arcs
+begin): reading it is a copy of bytes into arrays, and a state's arcs are a slice of each array.
+
+Layout of a packed table (little-endian): the magic ``MFARCS1\\n``; the start state, the number of
+states and the number of arcs (three signed 64-bit integers); then the arrays ``first`` (uint32,
+states + 1 offsets), ``ilabel``, ``olabel`` (uint32 code points), ``weight`` (float32, tropical:
+OpenFst keeps weights in single precision, so nothing is rounded), ``next`` (uint32) for the arcs,
+and ``final`` (float32 per state; infinity for a state that is not final).
+"""
+
+from __future__ import annotations
+
+import array
+import struct
+import sys
+from collections.abc import Iterable
+from typing import Protocol
+
+import pynini
+
+from .fstutil import Weight
+
+MAGIC = b"MFARCS1\n"
+WALKED = ("bounded", "guesser")  # the transducers the walk reads: these get a packed table
+_HEADER = struct.Struct("<qqq")
+_INF = float("inf")
+ArcRow = tuple[int, int, float, int]  # input label, output label, weight, next state
+
+
+class Arcs(Protocol):
+    """What the walk reads of a transducer: its start state, each state's arcs and final weight."""
+
+    start: int
+
+    def arcs(self, state: int) -> Iterable[ArcRow]: ...
+
+    def final(self, state: int) -> float | None: ...
+
+
+class FstArcs:
+    """The arcs of an in-memory transducer, read through pynini one state at a time."""
+
+    def __init__(self, fst: pynini.Fst) -> None:
+        self.fst = fst
+        self.start: int = fst.start()
+        self._zero = Weight.zero(fst.weight_type())
+
+    def arcs(self, state: int) -> list[ArcRow]:
+        return [(arc.ilabel, arc.olabel, float(arc.weight), arc.nextstate) for arc in self.fst.arcs(state)]
+
+    def final(self, state: int) -> float | None:
+        weight = self.fst.final(state)
+        return None if weight == self._zero else float(weight)
+
+
+class PackedArcs:
+    """A packed table (see the module docstring): a state's arcs are slices of five arrays."""
+
+    def __init__(self, data: bytes) -> None:
+        if not data.startswith(MAGIC):
+            raise ValueError("not an arc table")
+        start, states, arcs = _HEADER.unpack_from(data, len(MAGIC))
+        self.start = start
+        pos = len(MAGIC) + _HEADER.size
+        self._first, pos = _array("I", data, pos, states + 1)
+        self._ilabel, pos = _array("I", data, pos, arcs)
+        self._olabel, pos = _array("I", data, pos, arcs)
+        self._weight, pos = _array("f", data, pos, arcs)
+        self._next, pos = _array("I", data, pos, arcs)
+        self._final, pos = _array("f", data, pos, states)
+        if pos != len(data):
+            raise ValueError("arc table has trailing bytes")
+
+    def arcs(self, state: int) -> Iterable[ArcRow]:
+        a, b = self._first[state], self._first[state + 1]
+        return zip(self._ilabel[a:b], self._olabel[a:b], self._weight[a:b], self._next[a:b])
+
+    def final(self, state: int) -> float | None:
+        weight = self._final[state]
+        return None if weight == _INF else weight
+
+    @property
+    def num_states(self) -> int:
+        return len(self._final)
+
+
+def pack(fst: pynini.Fst) -> bytes:
+    """The packed table of ``fst`` (tropical weights)."""
+    zero = Weight.zero(fst.weight_type())
+    first = array.array("I", [0])
+    ilabel, olabel, targets = array.array("I"), array.array("I"), array.array("I")
+    weights, finals = array.array("f"), array.array("f")
+    for state in range(fst.num_states()):
+        for arc in fst.arcs(state):
+            ilabel.append(arc.ilabel)
+            olabel.append(arc.olabel)
+            weights.append(float(arc.weight))
+            targets.append(arc.nextstate)
+        first.append(len(ilabel))
+        w = fst.final(state)
+        finals.append(_INF if w == zero else float(w))
+    parts = [MAGIC, _HEADER.pack(fst.start(), fst.num_states(), len(ilabel))]
+    for arr in (first, ilabel, olabel, weights, targets, finals):
+        if sys.byteorder != "little":
+            arr.byteswap()
+        parts.append(arr.tobytes())
+    return b"".join(parts)
+
+
+def _array(code: str, data: bytes, pos: int, count: int) -> tuple[array.array, int]:  # type: ignore[type-arg]
+    arr = array.array(code)
+    end = pos + count * arr.itemsize
+    if end > len(data):
+        raise ValueError("arc table is truncated")
+    arr.frombytes(data[pos:end])
+    if sys.byteorder != "little":
+        arr.byteswap()
+    return arr, end
