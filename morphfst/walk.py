@@ -22,7 +22,8 @@ from typing import Any, Protocol
 
 import pynini
 
-from .fstutil import NO_STATE_ID, Weight
+from .arctable import Arcs, FstArcs
+from .fstutil import NO_STATE_ID
 from .results import Analysis, Morph
 from .symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 
@@ -40,14 +41,19 @@ class Language(Protocol):
     @property
     def glosses(self) -> dict[tuple[str, str], str]: ...
 
+    def arcs(self, name: str) -> Arcs: ...
+
     def normalize(self, word: str) -> str: ...
 
     def acceptable(self, surface: str) -> bool: ...
 
 
 Step = tuple[str, str, float, int]  # side-tape text, output text, weight, next state
-Path = tuple[int, str, str, float]  # state, side-tape text, output text, weight
-Move = tuple[int, dict[int, list[Path]]]  # next set of states, and the steps into each of its states
+End = tuple[str, str, float]  # side-tape text, output text, weight of a path that ends
+Path = tuple[int, str, str, float]  # state (or its index in a set), side-tape text, output text, weight
+Back = tuple[tuple[Path, ...], ...]  # per state of a set (in its order): the steps that lead there
+Move = tuple[int, Back]  # next set of states, and the steps into each of its states
+Raw = tuple[tuple[Step, ...], str, float | None]  # a state's arcs that read nothing, the letters it reads, final weight
 _UNSEEN: Any = object()
 _INF = float("inf")
 
@@ -72,51 +78,63 @@ class ArcWalker:
     transducer (for the bounded analyzer: the surface with its morph boundaries).
 
     Nothing is built up front, so a language loads in constant time whatever its size. A state's
-    arcs are read from the transducer the first time a walk reaches it, and its epsilon closure is
-    folded into its arcs for a letter the first time a walk reads that letter there. A walk then runs in two
-    passes. Forward, it follows the *set* of live states, letter by letter, through a lazily built
-    subset automaton (Rabin & Scott 1959): each (set, letter) move is computed once and remembered,
-    so a word whose prefixes were seen before costs one dict lookup per letter and no string is
-    built. Backward, from the final states of the last set, it follows the remembered predecessor
-    steps of each move and builds the side and output strings of the accepting paths only: the
-    partial paths that would have died are never extended.
+    arcs are read from its table (:mod:`morphfst.arctable`) the first time a walk reaches it, and the
+    steps that read a letter from it, with the arcs that read nothing folded in, the first time a
+    walk reads that letter there. A walk then runs in two passes. Forward, it follows the *set* of
+    live states, letter by letter, through a lazily built subset automaton (Rabin & Scott 1959): each
+    (set, letter) move is computed once and remembered, so a word whose prefixes were seen before
+    costs one dict lookup per letter and no string is built. Backward, from the final states of the
+    last set, it follows the remembered predecessor steps of each move and builds the side and output
+    strings of the accepting paths only: the partial paths that would have died are never extended.
+
+    Everything remembered is kept in a few flat dicts of tuples of strings and numbers: Python's
+    cycle collector stops tracking such tuples, so a long run's tables (hundreds of thousands of
+    entries) do not make every full collection slower (with lists and a dict per state they cost
+    about a third of a corpus run).
     """
 
-    def __init__(self, fst: pynini.Fst, skip: Iterable[str] = ()) -> None:
-        self.fst = fst
-        self.start = fst.start()
+    def __init__(self, fst: pynini.Fst | Arcs, skip: Iterable[str] = ()) -> None:
+        self.table: Arcs = FstArcs(fst) if isinstance(fst, pynini.Fst) else fst
+        self.start = self.table.start
         self._skip = {ord(c) for c in skip}
-        self._zero = Weight.zero(fst.weight_type())
-        self._folded: dict[tuple[int, str], list[Step]] = {}
-        self._ends_memo: dict[int, list[tuple[str, str, float]]] = {}
-        self._raw: dict[int, tuple[list[Step], dict[str, list[Step]], float | None]] = {}
+        self._raw: dict[int, Raw] = {}
+        self._consume: dict[tuple[int, str], tuple[Step, ...]] = {}  # a state's own arcs for a letter
+        self._folded: dict[tuple[int, str], tuple[Step, ...]] = {}
+        self._ends_memo: dict[int, tuple[End, ...]] = {}
         self._reach_memo: dict[int, list[Path] | None] = {}
         self._active: set[tuple[int, str]] = set()  # (state, letter) folds under way (a cycle guard)
         self._active_ends: set[int] = set()
-        self._firsts: dict[int, frozenset[str]] = {}
+        self._firsts: dict[int, str] = {}
         self._active_firsts: set[int] = set()
         self._reset_sets()
 
     # ---- one state: its arcs, closure and folded table (built on first use) ---------------------------
-    def _arcs(self, state: int) -> tuple[list[Step], dict[str, list[Step]], float | None]:
-        """The arcs of ``state`` that read no input, those that read a letter (by letter), its final weight."""
+    def _arcs(self, state: int) -> Raw:
+        """The arcs of ``state`` that read no input, the letters its own arcs read, its final weight
+        (its arcs for each letter go to ``_consume``)."""
         raw = self._raw.get(state)
         if raw is None:
             free: list[Step] = []
             consume: dict[str, list[Step]] = {}
             skip = self._skip
-            for arc in self.fst.arcs(state):
-                out = chr(arc.olabel) if arc.olabel else ""
-                weight = float(arc.weight)
-                if arc.ilabel == 0:
-                    free.append(("", out, weight, arc.nextstate))
-                elif arc.ilabel in skip:
-                    free.append((chr(arc.ilabel), out, weight, arc.nextstate))
+            for ilabel, olabel, weight, nxt in self.table.arcs(state):
+                out = chr(olabel) if olabel else ""
+                if ilabel == 0:
+                    free.append(("", out, weight, nxt))
+                elif ilabel in skip:
+                    free.append((chr(ilabel), out, weight, nxt))
                 else:
-                    consume.setdefault(chr(arc.ilabel), []).append(("", out, weight, arc.nextstate))
-            w = self.fst.final(state)
-            raw = self._raw[state] = (free, consume, float(w) if w != self._zero else None)
+                    consume.setdefault(chr(ilabel), []).append(("", out, weight, nxt))
+            for letter, arcs in consume.items():
+                self._consume[(state, letter)] = tuple(arcs)
+            raw = self._raw[state] = (tuple(free), "".join(consume), self.table.final(state))
         return raw
+
+    def _consuming(self, state: int, letter: str) -> tuple[Step, ...]:
+        """The arcs of ``state`` that read ``letter``."""
+        if state not in self._raw:
+            self._arcs(state)
+        return self._consume.get((state, letter), ())
 
     def _closure(self, state: int) -> list[Path]:
         """Every (state, side text, output, weight) reachable from ``state`` by arcs that read no input."""
@@ -136,8 +154,8 @@ class ArcWalker:
 
     def _reach(self, state: int, depth: int = 0) -> list[Path]:
         """The (state, side text, output, weight) reachable from ``state`` by arcs that read no input
-        and that read a letter or end a path from there; memoized, so a chain of such arcs shared by
-        many states is followed once. Raises :class:`_Cycle` on a cycle of such arcs."""
+        and that read a letter or end a path from there; memoized. Raises :class:`_Cycle` on a cycle
+        of such arcs."""
         memo = self._reach_memo
         found = memo.get(state, _UNSEEN)
         if found is not _UNSEEN:
@@ -146,13 +164,13 @@ class ArcWalker:
             return found  # type: ignore[no-any-return]
         if depth >= MAX_CLOSURE_DEPTH:
             raise _Cycle
-        free, consume, final = self._arcs(state)
+        free, letters, final = self._arcs(state)
         if not free:  # most states: nothing to follow
-            result = memo[state] = [(state, "", "", 0.0)] if consume or final is not None else []
+            result = memo[state] = [(state, "", "", 0.0)] if letters or final is not None else []
             return result
         memo[state] = None
         best: dict[tuple[int, str, str], float] = {}
-        if consume or final is not None:
+        if letters or final is not None:
             best[(state, "", "")] = 0.0
         for s2, o2, w2, nxt in free:
             for target, side, out, weight in self._reach(nxt, depth + 1):
@@ -176,7 +194,7 @@ class ArcWalker:
             self._reach_memo[state] = reach
             return reach
 
-    def _steps(self, state: int, letter: str) -> list[Step]:
+    def _steps(self, state: int, letter: str) -> tuple[Step, ...]:
         """The steps that read ``letter`` from ``state``, closure folded in (built on first use: a walk
         reads one or two of the letters a state could read, so only those are folded)."""
         steps = self._folded.get((state, letter))
@@ -189,7 +207,7 @@ class ArcWalker:
                 steps = self._folded[(state, letter)] = self._fold_closure(state, letter)
         return steps
 
-    def _fold(self, state: int, letter: str, depth: int) -> list[Step]:
+    def _fold(self, state: int, letter: str, depth: int) -> tuple[Step, ...]:
         """:meth:`_steps` by recursion over the arcs that read no input: the state's own arcs for
         ``letter`` and, behind each arc that reads nothing, the folded steps of its target with that
         arc's side text, output and weight put in front (memoized per (state, letter), so the suffix
@@ -202,25 +220,30 @@ class ArcWalker:
             return found
         if depth >= MAX_CLOSURE_DEPTH or key in self._active:
             raise _Cycle
-        free, consume, _ = self._raw.get(state) or self._arcs(state)
-        own = consume.get(letter)
+        free, letters, _ = self._raw.get(state) or self._arcs(state)
+        own = self._consume.get(key) if letter in letters else None
+        if not free:
+            result = self._folded[key] = tuple((letter, out, weight, nxt) for _, out, weight, nxt in own) if own else ()
+            return result
         steps: list[Step] = [(letter, out, weight, nxt) for _, out, weight, nxt in own] if own else []
-        if free:
-            self._active.add(key)
-            firsts = self._firsts
-            for s2, o2, w2, target in free:
-                if letter not in (firsts.get(target) or self._first_letters(target, depth + 1)):
-                    continue
-                behind = self._fold(target, letter, depth + 1)
-                if behind:
-                    steps.extend([(s2 + side, o2 + out, w2 + weight, nxt) for side, out, weight, nxt in behind])
-            self._active.discard(key)
-            if len(free) > 1 and len(steps) > 1:
-                steps = _lowest(steps)
-        self._folded[key] = steps
-        return steps
+        self._active.add(key)
+        firsts = self._firsts
+        for s2, o2, w2, target in free:
+            first = firsts.get(target)
+            if first is None:
+                first = self._first_letters(target, depth + 1)
+            if letter not in first:
+                continue
+            behind = self._fold(target, letter, depth + 1)
+            if behind:
+                steps.extend([(s2 + side, o2 + out, w2 + weight, nxt) for side, out, weight, nxt in behind])
+        self._active.discard(key)
+        if len(free) > 1 and len(steps) > 1:
+            steps = _lowest(steps)
+        result = self._folded[key] = tuple(steps)
+        return result
 
-    def _first_letters(self, state: int, depth: int = 0) -> frozenset[str]:
+    def _first_letters(self, state: int, depth: int = 0) -> str:
         """The letters some step from ``state`` reads (its own arcs' and those behind arcs that read
         nothing), memoized per state: a fold skips the arcs behind which the letter cannot be read.
         Raises :class:`_Cycle` on a cycle of arcs that read nothing."""
@@ -229,46 +252,44 @@ class ArcWalker:
             return found
         if depth >= MAX_CLOSURE_DEPTH or state in self._active_firsts:
             raise _Cycle
-        free, consume, _ = self._raw.get(state) or self._arcs(state)
-        letters = frozenset(consume)
+        free, letters, _ = self._raw.get(state) or self._arcs(state)
         if free:
             self._active_firsts.add(state)
+            seen = set(letters)
             for _, _, _, target in free:
-                behind = self._firsts.get(target) or self._first_letters(target, depth + 1)
-                if not behind <= letters:
-                    letters = letters | behind
+                first = self._firsts.get(target)
+                seen.update(self._first_letters(target, depth + 1) if first is None else first)
             self._active_firsts.discard(state)
+            letters = "".join(sorted(seen))
         self._firsts[state] = letters
         return letters
 
-    def _fold_closure(self, state: int, letter: str) -> list[Step]:
+    def _fold_closure(self, state: int, letter: str) -> tuple[Step, ...]:
         """The steps that read ``letter`` from ``state`` through its (depth-bounded) closure: the
         fallback when arcs that read nothing form a cycle (a zero-morph derivation loop)."""
         steps: list[Step] = []
         for target, side, out, weight in self._reachable(state):
-            found = self._arcs(target)[1].get(letter)
-            if found:
-                steps.extend((side + letter, out + o2, weight + w2, nxt) for _, o2, w2, nxt in found)
-        return steps
+            for _, o2, w2, nxt in self._consuming(target, letter):
+                steps.append((side + letter, out + o2, weight + w2, nxt))
+        return tuple(steps)
 
-    def _ends_of(self, state: int) -> list[tuple[str, str, float]]:
+    def _ends_of(self, state: int) -> tuple[End, ...]:
         """The (side text, output, weight) of the paths from ``state`` to a final state that read nothing."""
         ends = self._ends_memo.get(state)
         if ends is None:
             try:
                 ends = self._end(state, 0)
             except _Cycle:
-                self._active.clear()
-                arcs = self._arcs
-                ends = []
+                self._active_ends.clear()
+                found: list[End] = []
                 for target, side, out, weight in self._reachable(state):
-                    final = arcs(target)[2]
+                    final = self._arcs(target)[2]
                     if final is not None:
-                        ends.append((side, out, weight + final))
-                self._ends_memo[state] = ends
+                        found.append((side, out, weight + final))
+                ends = self._ends_memo[state] = tuple(found)
         return ends
 
-    def _end(self, state: int, depth: int) -> list[tuple[str, str, float]]:
+    def _end(self, state: int, depth: int) -> tuple[End, ...]:
         """:meth:`_ends_of` by recursion over the arcs that read nothing, memoized per state (as :meth:`_fold`)."""
         found = self._ends_memo.get(state)
         if found is not None:
@@ -276,7 +297,7 @@ class ArcWalker:
         if depth >= MAX_CLOSURE_DEPTH or state in self._active_ends:
             raise _Cycle
         free, _, final = self._raw.get(state) or self._arcs(state)
-        ends: list[tuple[str, str, float]] = [("", "", final)] if final is not None else []
+        ends: list[End] = [("", "", final)] if final is not None else []
         if free:
             self._active_ends.add(state)
             for s2, o2, w2, target in free:
@@ -290,15 +311,15 @@ class ArcWalker:
                     if weight < low.get((side, out), _INF):
                         low[(side, out)] = weight
                 ends = [(side, out, weight) for (side, out), weight in low.items()]
-        self._ends_memo[state] = ends
-        return ends
+        result = self._ends_memo[state] = tuple(ends)
+        return result
 
     # ---- sets of states: the subset automaton, built as words need it ------------------------------
     def _reset_sets(self) -> None:
         self._sets: list[tuple[int, ...]] = []
         self._ids: dict[tuple[int, ...], int] = {}
-        self._moves: list[dict[str, Move | None]] = []
-        self._ends: list[list[Path] | None] = []
+        self._moves: dict[tuple[int, str], Move | None] = {}
+        self._ends: dict[int, tuple[Path, ...]] = {}
         if self.start != NO_STATE_ID:
             self._set_id((self.start,))
 
@@ -307,40 +328,50 @@ class ArcWalker:
         if ident is None:
             ident = self._ids[states] = len(self._sets)
             self._sets.append(states)
-            self._moves.append({})
-            self._ends.append(None)
         return ident
 
     def _advance(self, ident: int, letter: str) -> Move | None:
-        """The move of set ``ident`` on ``letter``: the next set and, for each of its states, the steps
-        that lead there (``None`` when no state reads the letter)."""
-        back: dict[int, list[Path]] = {}
-        for state in self._sets[ident]:
-            steps = self._steps(state, letter)
-            if steps:
-                for side, out, weight, target in steps:
-                    back.setdefault(target, []).append((state, side, out, weight))
-        move = (self._set_id(tuple(sorted(back))), back) if back else None
-        self._moves[ident][letter] = move
+        """The move of set ``ident`` on ``letter``: the next set and, for each of its states (in the
+        set's order), the steps that lead there, each from the index of its state in set ``ident``
+        (``None`` when no state reads the letter)."""
+        into: dict[int, list[Path]] = {}
+        for index, state in enumerate(self._sets[ident]):
+            steps = self._folded.get((state, letter))
+            if steps is None:
+                steps = self._steps(state, letter)
+            for side, out, weight, target in steps:
+                found = into.get(target)
+                if found is None:
+                    into[target] = [(index, side, out, weight)]
+                else:
+                    found.append((index, side, out, weight))
+        if not into:
+            move = None
+        else:
+            order = tuple(sorted(into))
+            move = (self._set_id(order), tuple(tuple(into[state]) for state in order))
+        self._moves[(ident, letter)] = move
         return move
 
-    def _final_pieces(self, ident: int) -> list[Path]:
-        pieces = self._ends[ident]
+    def _final_pieces(self, ident: int) -> tuple[Path, ...]:
+        pieces = self._ends.get(ident)
         if pieces is None:
-            pieces = self._ends[ident] = [
-                (state, side, out, weight) for state in self._sets[ident] for side, out, weight in self._ends_of(state)
-            ]
+            pieces = self._ends[ident] = tuple(
+                (index, side, out, weight)
+                for index, state in enumerate(self._sets[ident])
+                for side, out, weight in self._ends_of(state)
+            )
         return pieces
 
-    def _forward(self, word: str) -> tuple[int, list[dict[int, list[Path]]]] | None:
+    def _forward(self, word: str) -> tuple[int, list[Back]] | None:
         """The set of states after ``word`` and the predecessor steps of each move (``None``: no path)."""
         if len(self._sets) > MAX_SETS:
             self._reset_sets()
         moves = self._moves
         ident = 0
-        trail: list[dict[int, list[Path]]] = []
+        trail: list[Back] = []
         for letter in word:
-            move = moves[ident].get(letter, _UNSEEN)
+            move = moves.get((ident, letter), _UNSEEN)
             if move is _UNSEEN:
                 move = self._advance(ident, letter)
             if move is None:
@@ -362,13 +393,13 @@ class ArcWalker:
         if found is None:
             return []
         ident, trail = found
-        partial = self._final_pieces(ident)
+        partial: Any = self._final_pieces(ident)
         if not partial:
             return []
         for back in reversed(trail):
             nxt: list[Path] = []
-            for state, side, out, weight in partial:
-                for before, s2, o2, w2 in back[state]:
+            for index, side, out, weight in partial:
+                for before, s2, o2, w2 in back[index]:
                     nxt.append((before, s2 + side, o2 + out, w2 + weight))
             if best and len(nxt) > 1:
                 nxt = _best_per_state(nxt)
@@ -447,7 +478,7 @@ class FastAnalyzer:
     def __init__(self, lang: Language) -> None:
         self.lang = lang
         self.seam = lang.space.to_char.get(COMPOUND_SEAM, "")  # between compound parts, on both tapes
-        self.bounded = ArcWalker(lang.fsts["bounded"], skip=[lang.plus, self.seam] if self.seam else [lang.plus])
+        self.bounded = ArcWalker(lang.arcs("bounded"), skip=[lang.plus, self.seam] if self.seam else [lang.plus])
         self._guesser: ArcWalker | None | bool = False  # False: not looked up yet (read on first guess)
         self.mark = lang.space.to_char.get(GUESS_SYMBOL, "")
         # Decoding tables: the label and kind of every code, the affixes by id; morphs are shared objects.
@@ -468,8 +499,8 @@ class FastAnalyzer:
     def guesser(self) -> ArcWalker | None:
         """The guesser's walker (``None`` when the grammar has no guesser); its transducer is read on first use."""
         if self._guesser is False:
-            fst = self.lang.fsts.get("guesser")
-            self._guesser = ArcWalker(fst, skip=[self.lang.plus]) if fst is not None else None
+            has = "guesser" in self.lang.fsts
+            self._guesser = ArcWalker(self.lang.arcs("guesser"), skip=[self.lang.plus]) if has else None
         return self._guesser  # type: ignore[return-value]
 
     def analyze(self, word: str, guess: bool = False, limit: int = MAX_PATHS) -> list[Analysis]:
