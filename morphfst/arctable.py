@@ -6,11 +6,12 @@ The compiled file therefore also holds, for each transducer the walk reads, a ta
 sparse row form (the arcs of all states one after another, and the offset where each state's arcs
 begin): reading it is a copy of bytes into arrays, and a state's arcs are a slice of each array.
 
-Layout of a packed table (little-endian): the magic ``MFARCS1\\n``; the start state, the number of
+Layout of a packed table (little-endian): the magic ``MFARCS2\\n``; the start state, the number of
 states and the number of arcs (three signed 64-bit integers); then the arrays ``first`` (uint32,
-states + 1 offsets), ``ilabel``, ``olabel`` (uint32 code points), ``weight`` (float32, tropical:
-OpenFst keeps weights in single precision, so nothing is rounded), ``next`` (uint32) for the arcs,
-and ``final`` (float32 per state; infinity for a state that is not final).
+states + 1 offsets), ``ilabel``, ``olabel`` (uint32 code points), ``weight`` (float64: the value
+pynini gives for the arc's tropical weight, so a walk over the table adds exactly the numbers a walk
+through pynini adds), ``next`` (uint32) for the arcs, and ``final`` (float64 per state; infinity for a
+state that is not final).
 """
 
 from __future__ import annotations
@@ -25,7 +26,7 @@ import pynini
 
 from .fstutil import Weight
 
-MAGIC = b"MFARCS1\n"
+MAGIC = b"MFARCS2\n"
 WALKED = ("bounded", "guesser")  # the transducers the walk reads: these get a packed table
 _HEADER = struct.Struct("<qqq")
 _INF = float("inf")
@@ -70,9 +71,9 @@ class PackedArcs:
         self._first, pos = _array("I", data, pos, states + 1)
         self._ilabel, pos = _array("I", data, pos, arcs)
         self._olabel, pos = _array("I", data, pos, arcs)
-        self._weight, pos = _array("f", data, pos, arcs)
+        self._weight, pos = _array("d", data, pos, arcs)
         self._next, pos = _array("I", data, pos, arcs)
-        self._final, pos = _array("f", data, pos, states)
+        self._final, pos = _array("d", data, pos, states)
         if pos != len(data):
             raise ValueError("arc table has trailing bytes")
 
@@ -94,7 +95,7 @@ def pack(fst: pynini.Fst) -> bytes:
     zero = Weight.zero(fst.weight_type())
     first = array.array("I", [0])
     ilabel, olabel, targets = array.array("I"), array.array("I"), array.array("I")
-    weights, finals = array.array("f"), array.array("f")
+    weights, finals = array.array("d"), array.array("d")
     for state in range(fst.num_states()):
         for arc in fst.arcs(state):
             ilabel.append(arc.ilabel)

@@ -1,22 +1,27 @@
 """The paths that make morphfst fast at scale, and that they change no result: the cache key read
 without parsing the grammar, transducers and lexicon read on first use, the walk's lazy tables and
 subset automaton, type-affine corpus workers (each word type analyzed once across processes) and
-automatic Dask partitions."""
+automatic Dask partitions; the packed arc tables of the compiled file and the walk's tables kept out of
+the cycle collector."""
 
 from __future__ import annotations
 
+import gc
 from pathlib import Path
 
+import pynini
 import pytest
 from toygrammar import TOY_LEXICON, write_toy
 
 import morphfst
-from morphfst import archive, build, walk
+from morphfst import archive, arctable, build, walk
 from morphfst.archive import LazyFsts, Metadata
 from morphfst.cli import build_parser
 from morphfst.corpus import Options, run_corpus
 from morphfst.corpus.cluster import MIN_PARTITION_BYTES, PARTITION_BYTES, auto_partition_bytes
+from morphfst.corpus.local import owner
 from morphfst.corpus.sources import Source
+from morphfst.fstutil import Arc
 
 
 @pytest.fixture()
@@ -175,3 +180,66 @@ def test_the_command_line_imports_only_the_command_it_runs() -> None:
     assert set(parser._subparsers._group_actions[0].choices) == {"analyze"}  # type: ignore[union-attr]
     everything = build_parser(["--help"])
     assert {"analyze", "corpus", "table", "explain"} <= set(everything._subparsers._group_actions[0].choices)  # type: ignore[union-attr]
+
+
+def test_a_packed_arc_table_reads_back_the_transducer(tur: morphfst.Language) -> None:
+    fst = tur.fsts["bounded"]
+    packed = arctable.PackedArcs(arctable.pack(fst))
+    plain = arctable.FstArcs(fst)
+    assert packed.start == plain.start and packed.num_states == fst.num_states()
+    for state in range(0, fst.num_states(), 97):
+        assert list(packed.arcs(state)) == plain.arcs(state)
+        assert packed.final(state) == plain.final(state)
+
+
+def test_a_damaged_arc_table_is_refused() -> None:
+    fst = pynini.accep("ab")
+    data = arctable.pack(fst)
+    for bad in (data[:-3], b"not a table", data + b"x"):
+        with pytest.raises(ValueError):
+            arctable.PackedArcs(bad)
+
+
+def test_a_loaded_language_walks_its_packed_tables(tmp_path: Path, own_cache: Path) -> None:
+    path = morphfst.compile_grammar(write_toy(tmp_path / "g"), tmp_path / "toy.mfc")
+    lang = morphfst.load(path)
+    assert lang.analyze("kalar")[0].text == "ka N;PL;NOM"
+    assert isinstance(lang.fast.bounded.table, arctable.PackedArcs)
+    assert "bounded" not in lang.fsts._loaded  # type: ignore[attr-defined]  # no OpenFst binary was parsed
+    assert [a.text for a in lang.analyze("kalarna")] == [a.text for a in lang.analyze_composed("kalarna")]
+
+
+def test_the_walk_ends_on_a_cycle_of_arcs_that_read_nothing() -> None:
+    # 0 -a:a-> 2 (final), and a loop 0 -eps:x-> 1 -eps:y-> 0 that reads nothing: the recursive fold
+    # meets the cycle and falls back to the depth-bounded closure.
+    fst = pynini.Fst()
+    s0, s1, s2 = fst.add_state(), fst.add_state(), fst.add_state()
+    fst.set_start(s0)
+    fst.set_final(s2)
+    fst.add_arc(s0, Arc(ord("a"), ord("a"), 0.0, s2))
+    fst.add_arc(s0, Arc(0, ord("x"), 1.0, s1))
+    fst.add_arc(s1, Arc(0, ord("y"), 0.0, s0))
+    found = walk.ArcWalker(fst).walk("a")
+    outputs = [out for _, out, _ in found]
+    assert outputs[:3] == ["a", "xya", "xyxya"]
+    assert len(found) == walk.MAX_CLOSURE_DEPTH // 2 + 1
+
+
+def test_the_walk_tables_stay_out_of_the_cycle_collector(tur: morphfst.Language) -> None:
+    walker = walk.ArcWalker(tur.fsts["bounded"], skip=[tur.plus])
+    for word in ["evlerde", "kitaplarımızdan", "gelmeyecekmişsiniz", "okulda", "evde"]:
+        assert walker.walk(word)
+    for _ in range(4):  # a tuple is untracked once the tuples it holds are: one level per collection
+        gc.collect()
+    tables = [walker._folded, walker._ends_memo, walker._moves, walker._raw, walker._consume]
+    values = [v for table in tables for v in table.values() if v is not None]  # type: ignore[attr-defined]
+    assert values and not any(gc.is_tracked(v) for v in values)
+
+
+def test_word_types_that_begin_alike_have_one_owner() -> None:
+    assert owner("evlerde", 2) == owner("evler", 2) == owner("Evde", 2)
+    assert {owner(w, 7) for w in ("kitap", "kitaplar", "kitabı")} == {owner("kit", 7)}
+    # the first letters of a synthetic word list spread about evenly over two workers
+    words = [a + b + c for a in "abcdefghijklmnoprstuvyz" for b in "aeiou" for c in "klmnrst"]
+    share = sum(owner(w, 2) == 0 for w in words) / len(words)
+    assert 0.4 < share < 0.6
