@@ -223,16 +223,25 @@ def test_cli_dask_without_the_package(
     assert "dask.distributed" in err and "pip install" in err
 
 
-def test_dask_local_cluster_keeps_every_token(tur: morphfst.Language, corpus: Path, per_line: list[int], tmp_path: Path) -> None:
+@pytest.mark.parametrize("per_worker", [4, 1])  # one batch of partitions, or several
+def test_dask_local_cluster_keeps_every_token(
+    tur: morphfst.Language, corpus: Path, per_line: list[int], tmp_path: Path, monkeypatch: pytest.MonkeyPatch, per_worker: int
+) -> None:
     pytest.importorskip("distributed")
+    from morphfst.corpus import cluster
+
+    monkeypatch.setattr(cluster, "PARTITIONS_PER_WORKER", per_worker)
     local = tmp_path / "local.txt"
     options = Options(mode="terms", term="morphs")
-    run_corpus(tur, [str(corpus)], str(local), options, jobs=1)
+    one = run_corpus(tur, [str(corpus)], str(local), options, jobs=1)
     out = tmp_path / "dask"
     run = run_corpus(tur, [str(corpus)], str(out), options, jobs=2, dask=True, partition_bytes=40_000)
+    # type-affine workers: every word type analyzed once across the cluster, as in one process
+    assert run.coverage.figures() == one.coverage.figures()
+    assert run.coverage.analyzed == one.coverage.analyzed > 0
     manifest = json.loads((out / "manifest.json").read_text(encoding="utf-8"))
     parts = [out / e["output"] for e in manifest["outputs"]]
-    assert len(parts) > 1
+    assert len(parts) > 2  # with per_worker 1: more than one batch of 2 partitions
     assert b"".join(p.read_bytes() for p in parts) == local.read_bytes()
     assert run.coverage.lines == len(per_line)
     assert run.coverage.tokens == sum(per_line)

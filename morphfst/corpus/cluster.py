@@ -3,8 +3,14 @@ each partition processed by a Dask worker into its own output file.
 
 The compiled grammar is shipped once to each worker (a worker plugin holding the .mfc bytes). A first
 pass counts the lines of every partition (so every output record carries its line number in the
-input file); the second pass writes the outputs, each under a temporary name renamed when complete.
-Dask is optional: nothing here is imported unless ``--dask`` is used.
+input file). The partitions are then processed in batches (a few per worker), each batch in three
+steps that make the workers type-affine, as the local worker processes are: every partition lists
+its word types; the types are shared out by owner (the hash of their first letters,
+:func:`morphfst.corpus.local.owner`) and each worker analyzes the ones it owns (or finds them in its
+cache); each partition's task puts the owners' answers in its worker's cache and writes its output
+from there, under a temporary name renamed when complete. So a word type is analyzed once across the
+cluster, not once per worker that meets it. Dask is optional: nothing here is imported unless
+``--dask`` is used.
 """
 
 from __future__ import annotations
@@ -16,7 +22,7 @@ from typing import Any
 from ..errors import UserError
 from ..runtime import Language
 from .coverage import Coverage
-from .local import WorkerFailure
+from .local import WorkerFailure, owner
 from .progress import Progress
 from .records import Options
 from .sources import Source, compiled_file, output_path
@@ -77,6 +83,21 @@ def connect(address: str | None, workers: int) -> tuple[Any, Any]:
     return Client(cluster), cluster
 
 
+def _answers(client: Any, survey: Any, answer: Any, specs: list[dict[str, Any]], addresses: list[str]) -> list[Any]:
+    """Futures of the owners' answers for the word types of ``specs`` (one per worker, each run on the
+    worker that owns its types): :func:`~morphfst.corpus.dask_worker.answer_types` results."""
+    if not addresses:
+        return []
+    buckets: list[dict[str, None]] = [{} for _ in addresses]
+    for types in client.gather(client.map(survey, specs, pure=False)):
+        for token in types:
+            buckets[owner(token, len(addresses))][token] = None
+    return [
+        client.submit(answer, list(bucket), workers=[where], allow_other_workers=False, pure=False)
+        for bucket, where in zip(buckets, addresses)
+    ]
+
+
 def run_dask(
     lang: Language,
     sources: list[Source],
@@ -97,12 +118,15 @@ def run_dask(
         raise UserError("the Dask engine reads files, not standard input", hint="give input files or directories")
     from distributed import as_completed
 
-    from .dask_worker import GrammarPlugin, count_line_starts, process_partition
+    from .dask_worker import GrammarPlugin, analyzed_count, answer_types, count_line_starts, process_partition, survey_partition
 
     mfc = Path(compiled_file(lang))
     client, cluster = connect(address, workers)
     try:
+        if cluster is not None:
+            client.wait_for_workers(workers)
         client.register_plugin(GrammarPlugin(mfc.read_bytes(), mfc.name, options), name="morphfst-grammar")
+        addresses = sorted(client.scheduler_info().get("workers", {}))
         if partition_bytes is None:
             known = len(client.scheduler_info().get("workers", {})) if address else workers
             partition_bytes = auto_partition_bytes(sources, max(known, 1))
@@ -116,7 +140,7 @@ def run_dask(
                 pure=False,
             )
         )
-        specs = []
+        specs: list[dict[str, Any]] = []
         first_line: dict[int, int] = {}
         for index, ((i, n, start, stop), count) in enumerate(zip(parts, counts)):
             line = first_line.get(i, 1)
@@ -132,27 +156,43 @@ def run_dask(
                     "stop": stop,
                     "first_line": line,
                     "output": str(target),
+                    "batch": index // max(len(addresses) * PARTITIONS_PER_WORKER, 1),
                 }
             )
-        futures = client.map(process_partition, specs, pure=False)
         total = Coverage(files=[s.path for s in sources])
+        futures: list[Any] = []
         entries: list[dict[str, Any] | None] = [None] * len(specs)
+
+        def take(future: Any) -> None:
+            result = future.result()
+            cov: Coverage = result["coverage"]
+            total.merge(cov)
+            spec = specs[result["index"]]
+            entries[result["index"]] = {
+                "input": spec["path"],
+                "output": Path(result["output"]).name,
+                "bytes": [spec["start"], spec["stop"]],
+                "first_line": spec["first_line"],
+                "lines": cov.lines,
+                "tokens": cov.tokens,
+            }
+            if progress:
+                progress.update(result["bytes"], cov.tokens)
+
         try:
-            for future in as_completed(futures):
-                result = future.result()
-                cov: Coverage = result["coverage"]
-                total.merge(cov)
-                spec = specs[result["index"]]
-                entries[result["index"]] = {
-                    "input": spec["path"],
-                    "output": Path(result["output"]).name,
-                    "bytes": [spec["start"], spec["stop"]],
-                    "first_line": spec["first_line"],
-                    "lines": cov.lines,
-                    "tokens": cov.tokens,
-                }
-                if progress:
-                    progress.update(result["bytes"], cov.tokens)
+            done = as_completed()
+            batches = 1 + max((int(spec["batch"]) for spec in specs), default=-1)
+            for batch in range(batches):
+                chosen = [spec for spec in specs if spec["batch"] == batch]
+                answers = _answers(client, survey_partition, answer_types, chosen, addresses)
+                submitted = client.map(process_partition, chosen, answers=answers, pure=False)
+                futures += submitted
+                done.update(submitted)
+                total.analyzed += sum(client.gather(client.map(analyzed_count, answers, pure=False)))
+                while done.has_ready():
+                    take(next(done))
+            for future in done:
+                take(future)
         except Exception as exc:
             for f in futures:
                 f.cancel()

@@ -3,7 +3,9 @@
 The compiled grammar travels once per worker, inside a worker plugin: its bytes are written to the
 worker's local directory and loaded there when the plugin is registered, and the worker keeps one
 :class:`~morphfst.corpus.records.ChunkProcessor` (so its per-type cache serves every partition the
-worker processes).
+worker processes). The tasks: :func:`count_line_starts` (line numbers), :func:`survey_partition` (the
+word types of a partition), :func:`answer_types` (the owner of some word types analyzes them) and
+:func:`process_partition` (a partition's output, its types learned from the owners' answers first).
 """
 
 from __future__ import annotations
@@ -32,6 +34,7 @@ class GrammarPlugin(WorkerPlugin):
         self.filename = filename
         self.options = options
         self.processor: ChunkProcessor | None = None
+        self.learned: set[int] = set()  # batches whose answers this worker has put in its cache
 
     def setup(self, worker: Any) -> None:
         from .sources import load_compiled
@@ -42,12 +45,41 @@ class GrammarPlugin(WorkerPlugin):
         self.processor = ChunkProcessor(load_compiled(str(path)), self.options)
 
 
-def _processor() -> ChunkProcessor:
+def _plugin() -> GrammarPlugin:
     plugin = get_worker().plugins[PLUGIN_NAME]
-    processor = getattr(plugin, "processor", None)
-    if not isinstance(processor, ChunkProcessor):
+    if not isinstance(getattr(plugin, "processor", None), ChunkProcessor):
         raise RuntimeError("the morphfst grammar plugin is not set up on this worker")
-    return processor
+    return plugin  # type: ignore[return-value]
+
+
+def _processor() -> ChunkProcessor:
+    return _plugin().processor  # type: ignore[return-value]
+
+
+Answers = dict[str, tuple[Any, tuple[str, int, int]]]  # word type -> (formatted output, type information)
+
+
+def survey_partition(spec: dict[str, Any]) -> list[str]:
+    """The distinct word types of one partition (every one, cached on this worker or not)."""
+    processor = _processor()
+    options = processor.options
+    seen: dict[str, None] = {}
+    with open(spec["path"], "rb") as handle:
+        blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
+        for chunk in chunks(blocks, 1, options.chunk_bytes, options.max_line_bytes):
+            seen.update(dict.fromkeys(processor.types_of(chunk)))
+    return list(seen)
+
+
+def answer_types(tokens: list[str]) -> tuple[Answers, int]:
+    """The output and type information of word types this worker owns (analyzed here unless cached),
+    and how many were analyzed."""
+    processor = _processor()
+    before = processor.misses
+    found = {token: processor.lookup(token) for token in tokens}
+    analyzed = processor.misses - before
+    processor.misses = before  # counted by the caller, so that no partition's tally counts them again
+    return found, analyzed
 
 
 def count_line_starts(path: str, start: int, stop: int, block: int = 1 << 22) -> int:
@@ -67,9 +99,23 @@ def count_line_starts(path: str, start: int, stop: int, block: int = 1 << 22) ->
     return n
 
 
-def process_partition(spec: dict[str, Any]) -> dict[str, Any]:
-    """Process the lines that start in one byte range of a file into one output file (atomic)."""
+def analyzed_count(answered: tuple[Answers, int]) -> int:
+    """The number of types an :func:`answer_types` task analyzed (run where its result is)."""
+    return answered[1]
+
+
+def process_partition(spec: dict[str, Any], answers: list[tuple[Answers, int]] | None = None) -> dict[str, Any]:
+    """Process the lines that start in one byte range of a file into one output file (atomic). The
+    owners' ``answers`` for the partition's batch are put in this worker's cache first (once per
+    batch), so its types are found there and not analyzed again."""
+    plugin = _plugin()
     processor = _processor()
+    batch = int(spec.get("batch", -1))
+    if answers and batch not in plugin.learned:
+        for found, _ in answers:
+            for token, (value, info) in found.items():
+                processor.learn(token, value, info)
+        plugin.learned.add(batch)
     options = processor.options
     processor.doc = spec["doc"]
     coverage = Coverage(files=[spec["path"]])

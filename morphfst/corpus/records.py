@@ -334,6 +334,12 @@ class ChunkProcessor:
         self.long_in_chunk = True
 
     # ---- sharing word types between processes ---------------------------------------------------------
+    def types_of(self, chunk: Chunk) -> list[str]:
+        """Every word type of a chunk that the cache can hold, in first-seen order, cached or not (what
+        a Dask partition will look up; see :mod:`morphfst.corpus.cluster`)."""
+        items = self.tokenizer.tokens_and_newlines(decode(chunk.data)[0])
+        return [t for t in dict.fromkeys(items) if t != NEWLINE and len(t) <= MAX_CACHED_TOKEN]
+
     def prepare(self, chunk: Chunk) -> tuple[Prepared, list[str]]:
         """The decoded text of a chunk (with its tokens, in terms mode) and its word types that are not
         in the cache, in first-seen order (overlong tokens left out: they are never cached)."""
