@@ -90,7 +90,7 @@ def _answers(client: Any, survey: Any, answer: Any, specs: list[dict[str, Any]],
         return []
     buckets: list[dict[str, None]] = [{} for _ in addresses]
     for types in client.gather(client.map(survey, specs, pure=False)):
-        for token in types:
+        for token in types.split("\n") if types else ():
             buckets[owner(token, len(addresses))][token] = None
     return [
         client.submit(answer, list(bucket), workers=[where], allow_other_workers=False, pure=False)
