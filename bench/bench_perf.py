@@ -801,9 +801,44 @@ def distinct_tokens(lang: morphfst.Language, corpus: Path) -> int | None:
         return None
 
 
+# Plain Python work of the walk's kind (tuples, strings, dict lookups and inserts), no morphfst: how
+# much faster two processes do twice the work than one process does it on this machine right now.
+CEILING_WORK = """
+import sys
+n = int(sys.argv[1])
+for r in range(n):
+    table = {}
+    for i in range(200_000):
+        key = (i % 5000, str(i % 977))
+        found = table.get(key)
+        table[key] = (key[1] + "+", i * 0.5, found is None)
+"""
+
+
+def parallel_ceiling(rounds: int = 6) -> float:
+    """Wall time of one process doing 2 x ``rounds`` rounds of :data:`CEILING_WORK` over that of two
+    processes doing ``rounds`` each at once (the best of 3): the machine's own ceiling for -j 2."""
+    one, two = [], []
+    for _ in range(3):
+        t0 = time.perf_counter()
+        subprocess.run([sys.executable, "-c", CEILING_WORK, str(2 * rounds)], check=True)
+        one.append(time.perf_counter() - t0)
+        t0 = time.perf_counter()
+        procs = [subprocess.Popen([sys.executable, "-c", CEILING_WORK, str(rounds)]) for _ in range(2)]
+        for proc in procs:
+            proc.wait()
+        two.append(time.perf_counter() - t0)
+    return min(one) / min(two)
+
+
 def section_corpus(bench: Bench) -> None:
     args = bench.args
     modes = ["j1", "j2", "dask"]
+    ceiling = parallel_ceiling()
+    say(
+        f"\n   machine: two processes of plain Python work (tuples, strings, dicts; no morphfst) run {ceiling:.2f} x as "
+        "fast as one on this machine now: the ceiling for -j 2 here (no target)"
+    )
     for name in args.langs:
         say(
             f"\n3. corpus, {name}: 'morphfst corpus FILE -o OUT -l {name} -q --report R.json --top 0', median of {args.runs} runs"
