@@ -51,6 +51,7 @@ class Language:
         self.plus = self.space.code("+")
         self.analyze_cached = lru_cache(maxsize=65536)(self._analyze_tuple)
         self._fast: FastAnalyzer | None = None
+        self._orders: dict[str, str] = {}  # label codes in an order that generated nothing -> one that did
 
     # ---- analysis ---------------------------------------------------------------------------------
     def analyze(self, word: str, guess: bool = False) -> list[Analysis]:
@@ -156,27 +157,33 @@ class Language:
     def generate(self, lemma: str, features: str | Sequence[str]) -> list[Form]:
         """Surface forms of ``lemma`` with ``features`` (``"N;PL;LOC"`` or a list), best first.
 
-        The labels may be given in any order: when the given order has no form, every order is tried
-        (an acceptor over the permutations of the labels).
+        The labels may be given in any order: when the given order has no form, every order is tried (an
+        acceptor over the permutations of the labels), and the order found is remembered, so that the next
+        call with the labels in the same order (any lemma) tries that order first, as fast as labels in
+        the grammar's order.
         """
         labels = [f for f in (features.split(";") if isinstance(features, str) else features) if f.strip()]
         labels = [f.strip() for f in labels]
         codes = [self._label_code(f) for f in labels]
         analysis = f"{lemma} {';'.join(labels)}"
-        forms = self._generate_from(acc(lemma + "".join(codes)), analysis)
+        given = "".join(codes)
+        known = self._orders.get(given)  # an order that served these labels when the given one did not
+        forms = self._generate_from(acc(lemma + known), analysis) if known else []
+        if not forms:
+            forms = self._generate_from(acc(lemma + given), analysis)
         if not forms and 1 < len(codes) <= 8:
-            forms = self._generate_from(acc(lemma) + _permutations(codes), analysis)
+            lattice = pynini.compose(acc(lemma) + _permutations(codes), self.fsts["generator"])
+            found = paths(lattice, MAX_PATHS)
+            forms = _forms(found, analysis)
+            if found and len(self._orders) < 10_000:
+                self._orders[given] = min(found, key=lambda p: p[2])[0][len(lemma) :]
         if forms and self.normalize(lemma) != lemma:
             # surface stems are in folded case: write the lemma's letters as the lemma does (Ankara'da)
             forms = [Form(restore_case(lemma, f.form, self.normalize), f.weight, f.analysis) for f in forms]
         return forms
 
     def _generate_from(self, query: pynini.Fst, analysis: str) -> list[Form]:
-        lattice = pynini.compose(query, self.fsts["generator"])
-        found: dict[str, float] = {}
-        for _, surface, weight in paths(lattice, MAX_PATHS):
-            found[surface] = min(weight, found.get(surface, weight))
-        return [Form(s, w, analysis) for s, w in sorted(found.items(), key=lambda kv: (round(kv[1], 5), kv[0]))]
+        return _forms(paths(pynini.compose(query, self.fsts["generator"]), MAX_PATHS), analysis)
 
     def generate_text(self, analysis: str) -> list[Form]:
         """Generate from an analysis text ``lemma POS;FEAT;...``."""
@@ -216,6 +223,14 @@ class Language:
         from .fstutil import size
 
         return {name: dict(zip(("states", "arcs"), size(f))) for name, f in self.fsts.items()}
+
+
+def _forms(found: list[tuple[str, str, float]], analysis: str) -> list[Form]:
+    """Distinct surface forms of generated paths, each at its best weight, best first."""
+    best: dict[str, float] = {}
+    for _, surface, weight in found:
+        best[surface] = min(weight, best.get(surface, weight))
+    return [Form(s, w, analysis) for s, w in sorted(best.items(), key=lambda kv: (round(kv[1], 5), kv[0]))]
 
 
 def _permutations(codes: list[str]) -> pynini.Fst:

@@ -243,3 +243,18 @@ def test_word_types_that_begin_alike_have_one_owner() -> None:
     words = [a + b + c for a in "abcdefghijklmnoprstuvyz" for b in "aeiou" for c in "klmnrst"]
     share = sum(owner(w, 2) == 0 for w in words) / len(words)
     assert 0.4 < share < 0.6
+
+
+def test_labels_out_of_order_are_generated_from_a_remembered_order(
+    tur: morphfst.Language, monkeypatch: pytest.MonkeyPatch
+) -> None:
+    from morphfst import runtime
+
+    expected = [f.form for f in tur.generate("kitap", "N;PL;LOC")]
+    assert [f.form for f in tur.generate("ev", "LOC;PL;N")] == ["evlerde"]
+
+    def refuse(codes: list[str]) -> None:
+        raise AssertionError("the permutations were built again")
+
+    monkeypatch.setattr(runtime, "_permutations", refuse)
+    assert [f.form for f in tur.generate("kitap", "LOC;PL;N")] == expected
