@@ -396,7 +396,22 @@ class ArcWalker:
         partial: Any = self._final_pieces(ident)
         if not partial:
             return []
-        for back in reversed(trail):
+        rest = len(trail)
+        if len(partial) == 1:
+            # one path so far: follow single predecessors with the pieces in lists, joined once
+            index, side, out, weight = partial[0]
+            sides, outs = [side], [out]
+            while rest:
+                preds = trail[rest - 1][index]
+                if len(preds) != 1:
+                    break
+                index, s2, o2, w2 = preds[0]
+                sides.append(s2)
+                outs.append(o2)
+                weight = w2 + weight
+                rest -= 1
+            partial = [(index, "".join(reversed(sides)), "".join(reversed(outs)), weight)]
+        for back in reversed(trail[:rest]):
             nxt: list[Path] = []
             for index, side, out, weight in partial:
                 for before, s2, o2, w2 in back[index]:
