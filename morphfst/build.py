@@ -9,7 +9,7 @@ Grammars are compiled into a cache under ``$MORPHFST_CACHE`` (default ``~/.cache
 by a hash of the compiler version and every source file, so loading reuses the compiled file while
 the sources are unchanged and recompiles when any of them changes. A damaged cache entry (checksum)
 is reported in one line and rebuilt; only the newest :data:`CACHE_KEEP` entries per language are
-kept. When the cache cannot be written the language is compiled in memory. A compiled file named by
+kept, besides the current compile of every other copy of the grammar still on disk. When the cache cannot be written the language is compiled in memory. A compiled file named by
 the user is loaded as it is, never recompiled or overwritten.
 """
 
@@ -225,9 +225,31 @@ def _mtime(path: Path) -> float:
         return 0.0
 
 
+def _current_files() -> set[str]:
+    """Names of the compiled files that are the current compile of a grammar still on disk (from the
+    source manifests of :func:`cache_key`): two copies of a grammar with the same language name, in two
+    places, each keep their current file however often the other is recompiled."""
+    current: set[str] = set()
+    try:
+        manifests = list((cache_dir() / "sources").glob("*.json"))
+    except OSError:
+        return current
+    for manifest in manifests:
+        try:
+            record = json.loads(manifest.read_text("utf-8"))
+            if Path(record["grammar"]).is_file():
+                current.add(f"{record['name']}-{str(record['digest'])[:16]}{SUFFIX}")
+        except (OSError, ValueError, KeyError, TypeError):
+            continue
+    return current
+
+
 def prune_cache(name: str, keep: Path | None = None, newest: int = CACHE_KEEP) -> list[Path]:
-    """Remove all but the ``newest`` compiled files of language ``name`` from the cache (never ``keep``)."""
+    """Remove all but the ``newest`` compiled files of language ``name`` from the cache (never ``keep``,
+    nor the current compile of another grammar of that name still on disk)."""
     mine = [p for p in cache_entries() if (match := _CACHE_NAME.match(p.name)) and match.group(1) == name]
+    current = _current_files()
+    mine = [p for p in mine if p.name not in current or p == keep]
     if keep is not None:
         mine = [p for p in mine if p != keep]
         newest -= 1

@@ -124,6 +124,22 @@ def test_the_cache_keeps_the_newest_few_per_language_and_can_be_listed_and_clear
     assert list(own_cache.glob("*.mfc")) == []
 
 
+def test_two_copies_of_a_language_keep_their_current_files(
+    tmp_path: Path, own_cache: Path, monkeypatch: pytest.MonkeyPatch
+) -> None:
+    other = morphfst.load(write_toy(tmp_path / "other", lexicon=TOY_LEXICON + "su\tnoun\tN\twater\n"))
+    grammar = write_toy(tmp_path / "mine")
+    for i in range(build.CACHE_KEEP + 2):  # the same language name, recompiled again and again elsewhere
+        (tmp_path / "mine" / "toy.tsv").write_text(TOY_LEXICON + f"lo{'a' * i}\tnoun\tN\tstone\n", encoding="utf-8")
+        morphfst.load(grammar)
+    assert other.path and Path(other.path).is_file()  # still the current compile of the other copy
+    with monkeypatch.context() as patch:
+        patch.setattr(build, "_parsed_sources", lambda *_: (_ for _ in ()).throw(AssertionError("parsed")))
+        again = morphfst.load(tmp_path / "other" / "toy.mfg")
+    assert again.path == other.path and again.analyze("sular")
+    assert len(list(own_cache.glob("toy-*.mfc"))) == build.CACHE_KEEP + 1
+
+
 def test_a_cache_that_cannot_be_written_still_loads_with_a_hint_about_the_cache(
     tmp_path: Path, monkeypatch: pytest.MonkeyPatch, capsys: pytest.CaptureFixture[str]
 ) -> None:
