@@ -70,6 +70,19 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
             for r in g.rules
         ],
         "flags": {f.name: {"marks": f.marks, "blocks": f.blocks, "description": f.description} for f in g.flags.values()},
+        "compounds": [
+            {
+                "first": c.first,
+                "forms": c.forms,
+                "last": c.last,
+                "parts": c.parts,
+                "min": c.min_letters,
+                "weight": c.weight,
+                "file": c.pos.file,
+                "line": c.pos.line,
+            }
+            for c in g.compounds
+        ],
         "normalization": {
             "maps": g.normalization.maps,
             "lowercase": g.normalization.lowercase,

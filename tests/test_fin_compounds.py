@@ -102,3 +102,13 @@ def test_walk_agrees_with_composition(fin: morphfst.Language) -> None:
         walked, composed = fin.analyze(word), fin.analyze_composed(word)
         assert [(a.text, a.segmentation, a.gloss) for a in walked] == [(a.text, a.segmentation, a.gloss) for a in composed], word
         assert all(abs(a.weight - b.weight) < 1e-3 for a, b in zip(walked, composed)), word
+
+
+def test_info_lists_the_compound_block(fin: morphfst.Language, capsys: pytest.CaptureFixture[str]) -> None:
+    from morphfst.cli import main
+
+    assert main(["info", "-l", fin.path or "fin"]) == 0
+    out = capsys.readouterr().out
+    assert "compounds (analysis only):" in out
+    block = fin.meta["compounds"][0]
+    assert block["parts"] == 3 and block["min"] == 3 and ["SG", "NOM"] in block["forms"]

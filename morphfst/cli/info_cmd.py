@@ -16,7 +16,7 @@ EXAMPLES = """examples:
 def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
     p = sub.add_parser(
         "info",
-        help="show a language's features, slots, rules and transducer sizes",
+        help="show a language's features, rules, compounds, slots and transducer sizes",
         description="Show what a compiled language contains: lexicon size, feature inventory, slots, rules and transducer sizes.",
         epilog=EXAMPLES,
         formatter_class=argparse.RawDescriptionHelpFormatter,
@@ -41,6 +41,15 @@ def run(args: argparse.Namespace) -> int:
     w("rules (in order):\n")
     for rule in meta["rules"]:
         w(f"  {rule['name']:<22} line {rule['line']:<4} {rule['text']}\n")
+    compounds = meta.get("compounds") or []
+    if compounds:
+        w("compounds (analysis only):\n")
+        for c in compounds:
+            forms = " | ".join(" ".join(f) for f in c["forms"])
+            w(
+                f"  {' '.join(c['first'])} in {forms} + ... + {' '.join(c['last'])}: at most {c['parts']} parts, "
+                f"parts of {c['min']}+ letters, weight {c['weight']:g} per seam (line {c['line']})\n"
+            )
     if args.slots:
         w("slots:\n")
         for name, slot in meta["slots"].items():
