@@ -85,7 +85,9 @@ def connect(address: str | None, workers: int) -> tuple[Any, Any]:
 
 def _answers(client: Any, survey: Any, answer: Any, specs: list[dict[str, Any]], addresses: list[str]) -> list[Any]:
     """Futures of the owners' answers for the word types of ``specs`` (one per worker, each run on the
-    worker that owns its types): :func:`~morphfst.corpus.dask_worker.answer_types` results."""
+    worker that owns its types): :func:`~morphfst.corpus.dask_worker.answer_types` results. The owner
+    is a preference, not a requirement: if it leaves the cluster, another worker answers (the run goes
+    on; only those types may then be analyzed twice)."""
     if not addresses:
         return []
     buckets: list[dict[str, None]] = [{} for _ in addresses]
@@ -93,7 +95,7 @@ def _answers(client: Any, survey: Any, answer: Any, specs: list[dict[str, Any]],
         for token in types.split("\n") if types else ():
             buckets[owner(token, len(addresses))][token] = None
     return [
-        client.submit(answer, list(bucket), workers=[where], allow_other_workers=False, pure=False)
+        client.submit(answer, list(bucket), workers=[where], allow_other_workers=True, pure=False)
         for bucket, where in zip(buckets, addresses)
     ]
 
