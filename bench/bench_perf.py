@@ -428,7 +428,7 @@ def section_shipped_words(bench: Bench, name: str) -> None:
     known = [w for w in words if lang.analyze(w)][:count]
     unknown = [w for w in words if not lang.analyze(w)][:count]
     lemmas = list(dict.fromkeys(lang.analyze(w)[0].lemma for w in known[:400]))[:200]
-    med = rounds_in_fresh_process(name, known, unknown, lemmas, bench.args.runs, None)
+    med = rounds_in_fresh_process(name, known, unknown, lemmas, bench.args.runs)
     new_x, again_x = med["base"] / med["analyze"], med["base"] / med["again"]
     for what, x, figure in (("new", new_x, med["analyze"]), ("again", again_x, med["again"])):
         bench.target(
@@ -586,7 +586,7 @@ def per_word_rounds(grammar: Path | str, known: list[str], unknown: list[str], l
 
 
 def rounds_in_fresh_process(
-    grammar: Path | str, known: list[str], unknown: list[str], lemmas: list[str], runs: int, cache: Path | None
+    grammar: Path | str, known: list[str], unknown: list[str], lemmas: list[str], runs: int
 ) -> dict[str, float]:
     """:func:`per_word_rounds` in a fresh interpreter (``spawn``) that holds nothing but the words: the
     benchmark's own process holds the shipped grammars, the other synthetic lexicons and the word
@@ -595,8 +595,6 @@ def rounds_in_fresh_process(
     import multiprocessing as mp
     from concurrent.futures import ProcessPoolExecutor
 
-    if cache is not None:
-        os.environ["MORPHFST_CACHE"] = str(cache)  # the child reads the compiled file from the same cache
     with ProcessPoolExecutor(1, mp_context=mp.get_context("spawn")) as pool:
         return pool.submit(per_word_rounds, grammar, known, unknown, lemmas, runs).result()
 
@@ -633,7 +631,7 @@ def section_lexicons(bench: Bench) -> None:
         known, unknown, lemmas = known_and_unknown(bench, name, lang, origin, 2 * args.words)
         guessed = sum(1 for w in unknown[len(unknown) // 2 :] if lang.guess(w))
         del lang
-        med = rounds_in_fresh_process(grammar, known, unknown, lemmas[:200], args.runs, cache)
+        med = rounds_in_fresh_process(grammar, known, unknown, lemmas[:200], args.runs)
 
         speedup = med["base"] / med["analyze"]
         speedup_again = med["base"] / med["again"]

@@ -18,7 +18,7 @@ import heapq
 import re
 from collections.abc import Callable, Iterable, Mapping
 from dataclasses import MISSING, fields
-from typing import Any, Protocol
+from typing import Any, Protocol, TypeVar
 
 import pynini
 
@@ -54,8 +54,8 @@ Path = tuple[int, str, str, float]  # state (or its index in a set), side-tape t
 Back = tuple[tuple[Path, ...], ...]  # per state of a set (in its order): the steps that lead there
 Move = tuple[int, Back]  # next set of states, and the steps into each of its states
 Raw = tuple[tuple[Step, ...], str, float | None]  # a state's arcs that read nothing, the letters it reads, final weight
+_Piece = TypeVar("_Piece", Step, End)
 _UNSEEN: Any = object()
-_INF = float("inf")
 
 
 class _Cycle(Exception):
@@ -101,7 +101,7 @@ class ArcWalker:
         self._consume: dict[tuple[int, str], tuple[Step, ...]] = {}  # a state's own arcs for a letter
         self._folded: dict[tuple[int, str], tuple[Step, ...]] = {}
         self._ends_memo: dict[int, tuple[End, ...]] = {}
-        self._reach_memo: dict[int, list[Path] | None] = {}
+        self._closures: dict[int, list[Path]] = {}  # only where arcs that read nothing form a cycle
         self._active: set[tuple[int, str]] = set()  # (state, letter) folds under way (a cycle guard)
         self._active_ends: set[int] = set()
         self._firsts: dict[int, str] = {}
@@ -152,47 +152,13 @@ class ArcWalker:
                     todo.append((nxt, key[1], key[2], total, depth + 1))
         return [(k[0], k[1], k[2], w) for k, w in found.items()]
 
-    def _reach(self, state: int, depth: int = 0) -> list[Path]:
-        """The (state, side text, output, weight) reachable from ``state`` by arcs that read no input
-        and that read a letter or end a path from there; memoized. Raises :class:`_Cycle` on a cycle
-        of such arcs."""
-        memo = self._reach_memo
-        found = memo.get(state, _UNSEEN)
-        if found is not _UNSEEN:
-            if found is None:
-                raise _Cycle
-            return found  # type: ignore[no-any-return]
-        if depth >= MAX_CLOSURE_DEPTH:
-            raise _Cycle
-        free, letters, final = self._arcs(state)
-        if not free:  # most states: nothing to follow
-            result = memo[state] = [(state, "", "", 0.0)] if letters or final is not None else []
-            return result
-        memo[state] = None
-        best: dict[tuple[int, str, str], float] = {}
-        if letters or final is not None:
-            best[(state, "", "")] = 0.0
-        for s2, o2, w2, nxt in free:
-            for target, side, out, weight in self._reach(nxt, depth + 1):
-                key = (target, s2 + side, o2 + out)
-                total = w2 + weight
-                if total < best.get(key, _INF):
-                    best[key] = total
-        result = memo[state] = [(k[0], k[1], k[2], w) for k, w in best.items()]
-        return result
-
     def _reachable(self, state: int) -> list[Path]:
-        """:meth:`_reach` of ``state``, or on a cycle of arcs that read nothing (a zero-morph derivation
-        loop) the depth-bounded closure."""
-        try:
-            return self._reach(state)
-        except _Cycle:
-            for key, value in list(self._reach_memo.items()):
-                if value is None:
-                    del self._reach_memo[key]
-            reach = self._closure(state)
-            self._reach_memo[state] = reach
-            return reach
+        """:meth:`_closure` of ``state``, memoized: what the fallbacks of :meth:`_steps` and
+        :meth:`_ends_of` read when arcs that read nothing form a cycle (a zero-morph derivation loop)."""
+        reach = self._closures.get(state)
+        if reach is None:
+            reach = self._closures[state] = self._closure(state)
+        return reach
 
     def _steps(self, state: int, letter: str) -> tuple[Step, ...]:
         """The steps that read ``letter`` from ``state``, closure folded in (built on first use: a walk
@@ -306,11 +272,7 @@ class ArcWalker:
                     ends.extend([(s2 + side, o2 + out, w2 + weight) for side, out, weight in behind])
             self._active_ends.discard(state)
             if len(free) > 1 and len(ends) > 1:
-                low: dict[tuple[str, str], float] = {}
-                for side, out, weight in ends:
-                    if weight < low.get((side, out), _INF):
-                        low[(side, out)] = weight
-                ends = [(side, out, weight) for (side, out), weight in low.items()]
+                ends = _lowest(ends)
         result = self._ends_memo[state] = tuple(ends)
         return result
 
@@ -462,16 +424,16 @@ _new_morph = _builder(Morph)
 _new_analysis = _builder(Analysis)
 
 
-def _lowest(steps: list[Step]) -> list[Step]:
-    """The steps with distinct (side, output, next state), each at its lowest weight (first-seen order)."""
-    low: dict[tuple[str, str, int], float] = {}
-    for side, out, weight, nxt in steps:
-        key = (side, out, nxt)
-        if weight < low.get(key, _INF):
-            low[key] = weight
-    if len(low) == len(steps):
-        return steps
-    return [(side, out, weight, nxt) for (side, out, nxt), weight in low.items()]
+def _lowest(items: list[_Piece]) -> list[_Piece]:
+    """Steps (or ends) with distinct side text, output (and next state), each at its lowest weight
+    (the third field), in first-seen order."""
+    low: dict[tuple[Any, ...], _Piece] = {}
+    for item in items:
+        key = item[:2] + item[3:]
+        kept = low.get(key)
+        if kept is None or item[2] < kept[2]:
+            low[key] = item
+    return items if len(low) == len(items) else list(low.values())
 
 
 def _best_per_state(paths: list[Path]) -> list[Path]:

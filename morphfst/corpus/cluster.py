@@ -83,19 +83,21 @@ def connect(address: str | None, workers: int) -> tuple[Any, Any]:
     return Client(cluster), cluster
 
 
-def _answers(client: Any, survey: Any, answer: Any, specs: list[dict[str, Any]], addresses: list[str]) -> list[Any]:
+def _answers(client: Any, specs: list[dict[str, Any]], addresses: list[str]) -> list[Any]:
     """Futures of the owners' answers for the word types of ``specs`` (one per worker, each run on the
     worker that owns its types): :func:`~morphfst.corpus.dask_worker.answer_types` results. The owner
     is a preference, not a requirement: if it leaves the cluster, another worker answers (the run goes
     on; only those types may then be analyzed twice)."""
+    from .dask_worker import answer_types, survey_partition
+
     if not addresses:
         return []
     buckets: list[dict[str, None]] = [{} for _ in addresses]
-    for types in client.gather(client.map(survey, specs, pure=False)):
+    for types in client.gather(client.map(survey_partition, specs, pure=False)):
         for token in types.split("\n") if types else ():
             buckets[owner(token, len(addresses))][token] = None
     return [
-        client.submit(answer, list(bucket), workers=[where], allow_other_workers=True, pure=False)
+        client.submit(answer_types, list(bucket), workers=[where], allow_other_workers=True, pure=False)
         for bucket, where in zip(buckets, addresses)
     ]
 
@@ -120,7 +122,7 @@ def run_dask(
         raise UserError("the Dask engine reads files, not standard input", hint="give input files or directories")
     from distributed import as_completed
 
-    from .dask_worker import GrammarPlugin, analyzed_count, answer_types, count_line_starts, process_partition, survey_partition
+    from .dask_worker import GrammarPlugin, analyzed_count, count_line_starts, process_partition
 
     mfc = Path(compiled_file(lang))
     client, cluster = connect(address, workers)
@@ -186,7 +188,7 @@ def run_dask(
             batches = 1 + max((int(spec["batch"]) for spec in specs), default=-1)
             for batch in range(batches):
                 chosen = [spec for spec in specs if spec["batch"] == batch]
-                answers = _answers(client, survey_partition, answer_types, chosen, addresses)
+                answers = _answers(client, chosen, addresses)
                 submitted = client.map(process_partition, chosen, answers=answers, pure=False)
                 futures += submitted
                 done.update(submitted)

@@ -337,8 +337,7 @@ class ChunkProcessor:
     def types_of(self, chunk: Chunk) -> list[str]:
         """Every word type of a chunk that the cache can hold, in first-seen order, cached or not (what
         a Dask partition will look up; see :mod:`morphfst.corpus.cluster`)."""
-        items = self.tokenizer.tokens_and_newlines(decode(chunk.data)[0])
-        return [t for t in dict.fromkeys(items) if t != NEWLINE and len(t) <= MAX_CACHED_TOKEN]
+        return _cacheable(self.tokenizer.tokens_and_newlines(decode(chunk.data)[0]))
 
     def prepare(self, chunk: Chunk) -> tuple[Prepared, list[str]]:
         """The decoded text of a chunk (with its tokens, in terms mode) and its word types that are not
@@ -346,7 +345,7 @@ class ChunkProcessor:
         text, replaced = decode(chunk.data)
         items = self.tokenizer.tokens_and_newlines(text)
         young, old = self.young, self.old
-        missing = [t for t in dict.fromkeys(items) if t not in young and t not in old and len(t) <= MAX_CACHED_TOKEN]
+        missing = [t for t in _cacheable(items) if t not in young and t not in old]
         return (text, replaced, items if self.options.mode == "terms" else None), missing
 
     def lookup(self, token: str) -> tuple[Any, tuple[str, int, int]]:
@@ -512,3 +511,9 @@ def _sentence(sent_id: str, ps: list[Any], rows: list[tuple[str, str, str]]) -> 
     for n, (form, cols, misc) in enumerate(rows, start=1):
         body.append(f"{n}\t{form}\t{cols}\t_\t_\t_\t{misc or '_'}")
     return "\n".join(body) + "\n\n"
+
+
+def _cacheable(items: list[str]) -> list[str]:
+    """The distinct word types among a chunk's items, in first-seen order, that the cache can hold
+    (line ends and overlong tokens left out)."""
+    return [t for t in dict.fromkeys(items) if t != NEWLINE and len(t) <= MAX_CACHED_TOKEN]
