@@ -55,6 +55,8 @@ Back = tuple[tuple[Path, ...], ...]  # per state of a set (in its order): the st
 Move = tuple[int, Back]  # next set of states, and the steps into each of its states
 Raw = tuple[tuple[Step, ...], str, float | None]  # a state's arcs that read nothing, the letters it reads, final weight
 _Piece = TypeVar("_Piece", Step, End)
+Key = tuple[str, str]  # an analysis's text and segmentation: what makes two decoded paths the same
+Tail = tuple[str, tuple[str, ...], tuple[tuple[int, tuple[str, ...]], ...], int, str]  # see FastAnalyzer._parse_tail
 _UNSEEN: Any = object()
 
 
@@ -358,32 +360,9 @@ class ArcWalker:
         partial: Any = self._final_pieces(ident)
         if not partial:
             return []
-        rest = len(trail)
-        if len(partial) == 1:
-            # one path so far: follow single predecessors with the pieces in lists, joined once
-            index, side, out, weight = partial[0]
-            sides, outs = [side], [out]
-            while rest:
-                preds = trail[rest - 1][index]
-                if len(preds) != 1:
-                    break
-                index, s2, o2, w2 = preds[0]
-                sides.append(s2)
-                outs.append(o2)
-                weight = w2 + weight
-                rest -= 1
-            partial = [(index, "".join(reversed(sides)), "".join(reversed(outs)), weight)]
-        for back in reversed(trail[:rest]):
-            nxt: list[Path] = []
-            for index, side, out, weight in partial:
-                for before, s2, o2, w2 in back[index]:
-                    nxt.append((before, s2 + side, o2 + out, w2 + weight))
-            if best and len(nxt) > 1:
-                nxt = _best_per_state(nxt)
-            if len(nxt) > MAX_LIVE:
-                nxt = heapq.nsmallest(MAX_LIVE, nxt, key=lambda p: p[3])
-            partial = nxt
-        results = [(side, out, weight) for _, side, out, weight in partial]
+        results = None if best else _follow_back(trail, partial)
+        if results is None:
+            results = _breadth_back(trail, partial, best)
         if len(results) > 1:
             results.sort(key=lambda r: (r[2], r[1]))
         return results[:limit]
@@ -400,24 +379,71 @@ class ArcWalker:
         return sum(map(len, self._folded.values())) + sum(map(len, self._ends_memo.values()))
 
 
+def _follow_back(trail: list[Back], partial: tuple[Path, ...]) -> list[tuple[str, str, float]] | None:
+    """The accepting paths, each followed back alone from its final piece (depth first, pieces kept in
+    lists and joined once), in the order :func:`_breadth_back` gives them. Backward, a path never dies
+    (every state of a set was reached from the start), so the live paths at any position are at most
+    the complete ones: ``None`` when those exceed ``MAX_LIVE``, where the breadth-first pass prunes."""
+    results: list[tuple[str, str, float]] = []
+    # (index, remaining moves, side pieces, output pieces, weight); alternatives pushed in reverse so
+    # that they come off the stack in the breadth-first pass's order
+    stack = [(index, len(trail), [side], [out], weight) for index, side, out, weight in reversed(partial)]
+    while stack:
+        index, rest, sides, outs, weight = stack.pop()
+        while rest:
+            rest -= 1
+            preds = trail[rest][index]
+            if len(preds) > 1:
+                if len(stack) + len(results) + len(preds) > MAX_LIVE:
+                    return None
+                for before, s2, o2, w2 in reversed(preds[1:]):
+                    stack.append((before, rest, [*sides, s2], [*outs, o2], w2 + weight))
+            index, s2, o2, w2 = preds[0]
+            sides.append(s2)
+            outs.append(o2)
+            weight = w2 + weight
+        sides.reverse()
+        outs.reverse()
+        results.append(("".join(sides), "".join(outs), weight))
+    return results
+
+
+def _breadth_back(trail: list[Back], partial: tuple[Path, ...], best: bool) -> list[tuple[str, str, float]]:
+    """The accepting paths, all partial paths extended one move back at a time (with ``best``, only the
+    lowest per state; at most ``MAX_LIVE`` per position, the lowest by weight)."""
+    live: Any = partial
+    for back in reversed(trail):
+        nxt: list[Path] = []
+        for index, side, out, weight in live:
+            for before, s2, o2, w2 in back[index]:
+                nxt.append((before, s2 + side, o2 + out, w2 + weight))
+        if best and len(nxt) > 1:
+            nxt = _best_per_state(nxt)
+        if len(nxt) > MAX_LIVE:
+            nxt = heapq.nsmallest(MAX_LIVE, nxt, key=lambda p: p[3])
+        live = nxt
+    return [(side, out, weight) for _, side, out, weight in live]
+
+
 def _builder(cls: type) -> Callable[..., Any]:
     """A fast constructor for a frozen dataclass: the same object as ``cls(...)`` with every field given.
 
-    A frozen dataclass's ``__init__`` sets each field through ``object.__setattr__``; filling the
-    instance dict directly is about twice as fast, which matters when thousands of analyses are
-    decoded per second. Fields added later with defaults keep their defaults.
+    A frozen dataclass's ``__init__`` sets each field through ``object.__setattr__``; giving the new
+    instance a dict literal of its fields at once is about twice as fast (generated once per class,
+    as ``dataclasses`` generates ``__init__``), which matters when thousands of analyses are decoded
+    per second. Every field is a parameter; fields added later with defaults keep their defaults.
     """
     names = [f.name for f in fields(cls)]
-    defaults = {f.name: f.default for f in fields(cls) if f.default is not MISSING}
-    new = object.__new__
+    args = ", ".join(f"{n}=_d_{n}" if n in _defaults(cls) else n for n in names)
+    body = ", ".join(f"{n!r}: {n}" for n in names)
+    scope: dict[str, Any] = {"_new": object.__new__, "_set": object.__setattr__, "_cls": cls}
+    scope.update({f"_d_{n}": v for n, v in _defaults(cls).items()})
+    exec(f"def build({args}):\n    obj = _new(_cls)\n    _set(obj, '__dict__', {{{body}}})\n    return obj\n", scope)
+    return scope["build"]  # type: ignore[no-any-return]
 
-    def build(*values: Any) -> Any:
-        obj: Any = new(cls)
-        obj.__dict__.update(defaults)
-        obj.__dict__.update(zip(names, values))
-        return obj
 
-    return build
+def _defaults(cls: type) -> dict[str, Any]:
+    return {f.name: f.default for f in fields(cls) if f.default is not MISSING}
 
 
 _new_morph = _builder(Morph)
@@ -468,8 +494,8 @@ class FastAnalyzer:
         self.affix_ids = {code: int(self.labels[code]) for code, kind in self.kinds.items() if kind == "affix"}
         pos_codes = "".join(code for code, kind in self.kinds.items() if kind == "pos")
         self.pos_re = re.compile(f"[{re.escape(pos_codes)}]" if pos_codes else "(?!)")
-        self._tails: dict[str, tuple[str, tuple[str, ...], tuple[tuple[int, tuple[str, ...]], ...], int]] = {}
-        self._affix_morphs: dict[tuple[str, str], tuple[Morph, ...]] = {}
+        self._tails: dict[str, Tail] = {}
+        self._affix_morphs: dict[tuple[str, str], tuple[tuple[Morph, ...], str]] = {}  # with their segmentation
         self._stems: dict[tuple[str, str, str], Morph] = {}
 
     @property
@@ -511,15 +537,21 @@ class FastAnalyzer:
         return self.decode_all(surface, walked, True)[:limit]
 
     def decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool = False) -> Analysis:
-        """One :class:`Analysis` from a walked or composed path, through precomputed tables.
+        """One :class:`Analysis` from a walked or composed path, through precomputed tables."""
+        return self._decode(surface, internal, bounded, weight, guessed)[0]
+
+    def _decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool) -> tuple[Analysis, Key | None]:
+        """:meth:`decode`, with the analysis's (text, segmentation) when the tables give it for free
+        (``None`` for compounds: :func:`_key` builds it).
 
         The analysis after the lemma (part of speech, affix ids, features) and the affix morphs are
-        shared by many words: both are parsed once and kept in dicts.
+        shared by many words: both are parsed once and kept in dicts, with their parts of the
+        analysis text and of the segmentation.
         """
         if guessed:
             internal = internal.replace(self.mark, "")
         elif self.seam and self.seam in internal:
-            return self._decode_compound(surface, internal, bounded, weight)
+            return self._decode_compound(surface, internal, bounded, weight), None
         found = self.pos_re.search(internal)
         i = found.start() if found else len(internal)
         lemma = internal[:i]
@@ -527,18 +559,20 @@ class FastAnalyzer:
         parsed = self._tails.get(tail)
         if parsed is None:
             parsed = self._parse_tail(tail)
-        pos, features, groups, nforms = parsed
+        pos, features, groups, nforms, tags = parsed
         plus = self.lang.plus
         cut = bounded.find(plus)
         stem_form = bounded if cut < 0 else bounded[:cut]
         rest = "" if cut < 0 else bounded[cut:]
         key = (tail, rest)
-        affixes = self._affix_morphs.get(key)
-        if affixes is None:
+        built = self._affix_morphs.get(key)
+        if built is None:
             affixes = self._build_affixes(groups, nforms, rest.split(plus)[1:] if rest else [])
+            built = (affixes, "-".join(m.form for m in affixes if m.form))
             if len(self._affix_morphs) > 100_000:
                 self._affix_morphs.clear()
-            self._affix_morphs[key] = affixes
+            self._affix_morphs[key] = built
+        affixes, affix_seg = built
         stem_key = (stem_form, lemma, pos)
         stem = self._stems.get(stem_key)
         if stem is None:
@@ -546,7 +580,10 @@ class FastAnalyzer:
                 self._stems.clear()
             gloss = self.lang.glosses.get((lemma, pos), lemma)
             stem = self._stems[stem_key] = _new_morph(stem_form, gloss, (pos,), "stem", lemma, None, None, None)
-        return _new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, self.lang.ud, guessed)
+        analysis = _new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, self.lang.ud, guessed)
+        # Analysis.text and .segmentation, from the cached parts
+        segmentation = f"{stem_form}-{affix_seg}" if stem_form and affix_seg else stem_form or affix_seg
+        return analysis, (f"{lemma} {tags}", segmentation)
 
     def _decode_compound(self, surface: str, internal: str, bounded: str, weight: float) -> Analysis:
         """A compound: every part but the last is lemma and part of speech (its surface form between
@@ -568,8 +605,9 @@ class FastAnalyzer:
         lemma = "".join(forms[:-1]) + last.lemma
         return _new_analysis(surface, lemma, last.pos, last.features, (*stems, *last.morphs), weight, self.lang.ud, False)
 
-    def _parse_tail(self, tail: str) -> tuple[str, tuple[str, ...], tuple[tuple[int, tuple[str, ...]], ...], int]:
-        """Part of speech, features, (affix id, its labels) groups and the number of affixes with a form."""
+    def _parse_tail(self, tail: str) -> Tail:
+        """Part of speech, features, (affix id, its labels) groups, the number of affixes with a form
+        and the analysis text after the lemma (``POS;FEAT;...``)."""
         labels = self.labels
         pos = labels.get(tail[0], tail[0]) if tail else "?"
         features: list[str] = []
@@ -585,7 +623,7 @@ class FastAnalyzer:
                     groups[-1][1].append(label)
         frozen = tuple((ident, tuple(g)) for ident, g in groups)
         nforms = sum(1 for ident, _ in groups if self.affix_rows[ident][4])
-        parsed = (pos, tuple(features), frozen, nforms)
+        parsed = (pos, tuple(features), frozen, nforms, ";".join((pos, *features)))
         if len(self._tails) > 100_000:
             self._tails.clear()
         self._tails[tail] = parsed
@@ -615,14 +653,15 @@ class FastAnalyzer:
             plain = [w for w in walked if seam not in w[1]]
             if plain:
                 walked = plain
-        decode = self.decode
+        decode = self._decode
         if len(walked) == 1:
             bounded, internal, weight = walked[0]
-            return [decode(surface, internal, bounded, weight, guessed)]
-        best: dict[tuple[str, str], Analysis] = {}
+            return [decode(surface, internal, bounded, weight, guessed)[0]]
+        best: dict[Key, Analysis] = {}
         for bounded, internal, weight in walked:
-            analysis = decode(surface, internal, bounded, weight, guessed)
-            key = (analysis.text, analysis.segmentation)
+            analysis, key = decode(surface, internal, bounded, weight, guessed)
+            if key is None:
+                key = (analysis.text, analysis.segmentation)
             if key not in best or weight < best[key].weight:
                 best[key] = analysis
         ranked = sorted((round(a.weight, 5), key, a) for key, a in best.items())

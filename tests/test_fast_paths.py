@@ -258,3 +258,62 @@ def test_labels_out_of_order_are_generated_from_a_remembered_order(
 
     monkeypatch.setattr(runtime, "_permutations", refuse)
     assert [f.form for f in tur.generate("kitap", "LOC;PL;N")] == expected
+
+
+def _branching(length: int) -> pynini.Fst:
+    """An acceptor-like transducer with two arcs per letter (outputs x/y, weights 1/0.5): 2**length paths."""
+    fst = pynini.Fst()
+    states = [fst.add_state() for _ in range(length + 1)]
+    fst.set_start(states[0])
+    fst.set_final(states[-1])
+    for here, there in zip(states, states[1:]):
+        fst.add_arc(here, Arc(ord("a"), ord("x"), 1.0, there))
+        fst.add_arc(here, Arc(ord("a"), ord("y"), 0.5, there))
+    return fst
+
+
+def _both_passes(walker: walk.ArcWalker, word: str) -> tuple[object, object]:
+    found = walker._forward(word)
+    assert found is not None
+    ident, trail = found
+    partial = walker._final_pieces(ident)
+    return walk._follow_back(trail, partial), walk._breadth_back(trail, partial, False)
+
+
+def test_paths_followed_back_one_by_one_are_the_breadth_first_paths_in_order(tur: morphfst.Language) -> None:
+    walker = walk.ArcWalker(_branching(6))
+    one_by_one, breadth = _both_passes(walker, "aaaaaa")
+    assert one_by_one == breadth and len(breadth) == 64  # type: ignore[arg-type]
+    turkish = walk.ArcWalker(tur.fsts["bounded"], skip=[tur.plus])
+    for word in ["yüzü", "atın", "kalemlerimizde", "evlerde", "gelmeyecekmişsiniz", "okuldakiler"]:
+        one_by_one, breadth = _both_passes(turkish, word)
+        assert one_by_one == breadth
+
+
+def test_more_paths_than_kept_live_fall_back_to_the_pruning_pass(monkeypatch: pytest.MonkeyPatch) -> None:
+    monkeypatch.setattr(walk, "MAX_LIVE", 5)
+    walker = walk.ArcWalker(_branching(4))
+    one_by_one, breadth = _both_passes(walker, "aaaa")
+    assert one_by_one is None and len(breadth) == 5  # type: ignore[arg-type]
+    found = walker.walk("aaaa")
+    assert [w for *_, w in found] == sorted(w for *_, w in breadth)  # type: ignore[misc]
+    assert found[0] == ("aaaa", "yyyy", 2.0)
+
+
+@pytest.mark.parametrize("name", ["tur", "fin"])
+def test_decoded_keys_are_the_analysis_text_and_segmentation(name: str, request: pytest.FixtureRequest) -> None:
+    lang: morphfst.Language = request.getfixturevalue(name)
+    fast = lang.fast
+    words = {
+        "tur": ["evlerde", "yüzü", "atın", "kitaplarımızdan", "gelmeyecekmişsiniz", "okuldakiler", "değil", "kadar"],
+        "fin": ["taloissa", "kirjastoautossa", "talossani", "juoksin", "kauniimpi", "ja", "hyvin"],
+    }[name]
+    checked = 0
+    for word in words:
+        for guessed, walker in ((False, fast.bounded), (True, fast.guesser)):
+            for bounded, internal, weight in walker.walk(lang.normalize(word), 50) if walker else []:
+                analysis, key = fast._decode(word, internal, bounded, weight, guessed)
+                if key is not None:
+                    assert key == (analysis.text, analysis.segmentation)
+                    checked += 1
+    assert checked > len(words)
