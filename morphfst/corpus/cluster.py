@@ -5,8 +5,9 @@ The compiled grammar is shipped once to each worker (a worker plugin holding the
 pass counts the lines of every partition (so every output record carries its line number in the
 input file). The partitions are then processed in batches (a few per worker), each batch in three
 steps that make the workers type-affine, as the local worker processes are: every partition lists
-its word types; the types are shared out by owner (the hash of their first letters,
-:func:`morphfst.corpus.local.owner`) and each worker analyzes the ones it owns (or finds them in its
+its word types, shared out by owner (the hash of their first letters,
+:func:`morphfst.corpus.local.owner`); each worker gathers its share from every partition's list (from
+the other workers directly, not through the client) and analyzes those types (or finds them in its
 cache); each partition's task puts the owners' answers in its worker's cache and writes its output
 from there, under a temporary name renamed when complete. So a word type is analyzed once across the
 cluster, not once per worker that meets it. Dask is optional: nothing here is imported unless
@@ -22,7 +23,7 @@ from typing import Any
 from ..errors import UserError
 from ..runtime import Language
 from .coverage import Coverage
-from .local import WorkerFailure, owner
+from .local import WorkerFailure
 from .progress import Progress
 from .records import Options
 from .sources import Source, compiled_file, output_path
@@ -85,20 +86,19 @@ def connect(address: str | None, workers: int) -> tuple[Any, Any]:
 
 def _answers(client: Any, specs: list[dict[str, Any]], addresses: list[str]) -> list[Any]:
     """Futures of the owners' answers for the word types of ``specs`` (one per worker, each run on the
-    worker that owns its types): :func:`~morphfst.corpus.dask_worker.answer_types` results. The owner
+    worker that owns its types): :func:`~morphfst.corpus.dask_worker.answer_types` results. Each
+    partition's survey shares its types out by owner on its worker, and each owner reads its share
+    of every survey from the workers directly: no word type passes through this process. The owner
     is a preference, not a requirement: if it leaves the cluster, another worker answers (the run goes
     on; only those types may then be analyzed twice)."""
     from .dask_worker import answer_types, survey_partition
 
     if not addresses:
         return []
-    buckets: list[dict[str, None]] = [{} for _ in addresses]
-    for types in client.gather(client.map(survey_partition, specs, pure=False)):
-        for token in types.split("\n") if types else ():
-            buckets[owner(token, len(addresses))][token] = None
+    surveys = client.map(survey_partition, specs, owners=len(addresses), pure=False)
     return [
-        client.submit(answer_types, list(bucket), workers=[where], allow_other_workers=True, pure=False)
-        for bucket, where in zip(buckets, addresses)
+        client.submit(answer_types, me, *surveys, workers=[where], allow_other_workers=True, pure=False)
+        for me, where in enumerate(addresses)
     ]
 
 

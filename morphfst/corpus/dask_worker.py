@@ -18,6 +18,7 @@ from distributed import get_worker
 from distributed.diagnostics.plugin import WorkerPlugin
 
 from .coverage import Coverage
+from .local import owner
 from .outputs import AtomicFile
 from .reading import chunks, read_blocks
 from .records import ChunkProcessor, Options
@@ -60,9 +61,10 @@ def _processor() -> ChunkProcessor:
 Answers = dict[str, tuple[Any, tuple[str, int, int]]]  # word type -> (formatted output, type information)
 
 
-def survey_partition(spec: dict[str, Any]) -> str:
-    """The distinct word types of one partition (every one, cached on this worker or not), one per
-    line: Dask sends one string about ten times faster than a list of tens of thousands of strings."""
+def survey_partition(spec: dict[str, Any], owners: int) -> list[str]:
+    """The distinct word types of one partition (every one, cached on this worker or not), shared
+    out by owner (:func:`~morphfst.corpus.local.owner`): one string per owner, a type per line (Dask
+    sends one string about ten times faster than a list of tens of thousands of strings)."""
     processor = _processor()
     options = processor.options
     seen: dict[str, None] = {}
@@ -70,14 +72,22 @@ def survey_partition(spec: dict[str, Any]) -> str:
         blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
         for chunk in chunks(blocks, 1, options.chunk_bytes, options.max_line_bytes):
             seen.update(dict.fromkeys(processor.types_of(chunk)))
-    return "\n".join(seen)  # a word type never holds a line end
+    buckets: list[list[str]] = [[] for _ in range(max(owners, 1))]
+    for token in seen:
+        buckets[owner(token, len(buckets))].append(token)
+    return ["\n".join(bucket) for bucket in buckets]  # a word type never holds a line end
 
 
-def answer_types(tokens: list[str]) -> tuple[bytes, int]:
-    """The output and type information of word types this worker owns (analyzed here unless cached),
-    pickled (:data:`Answers`; one bytes object travels between workers far faster than a dict of tens
-    of thousands of entries), and how many were analyzed."""
+def answer_types(me: int, *surveys: list[str]) -> tuple[bytes, int]:
+    """The output and type information of the word types owner ``me`` has in the partitions'
+    ``surveys`` (:func:`survey_partition` results; each type analyzed here unless cached), pickled
+    (:data:`Answers`; one bytes object travels between workers far faster than a dict of tens of
+    thousands of entries), and how many were analyzed."""
     processor = _processor()
+    tokens: dict[str, None] = {}
+    for survey in surveys:
+        if survey[me]:
+            tokens.update(dict.fromkeys(survey[me].split("\n")))
     before = processor.misses
     found: Answers = {token: processor.lookup(token) for token in tokens}
     analyzed = processor.misses - before
