@@ -283,6 +283,12 @@ INVERTED = (
     + cells("aikoa", "V", "IND;PRS;1;SG=aion IND;PRS;NEG=aio IND;PST;1;SG=aioin IND;PRS;3;SG=aikoo")
     + cells("poika", "N", "SG;GEN=pojan PL;NOM=pojat PL;IN+ESS=pojissa")
     + cells("aika", "N", "SG;GEN=ajan PL;IN+ESS=ajoissa")
+    + cells("työaika", "N", "SG;GEN=työajan")
+    # Kotus word list: taika is type 9 with gradation D but no j (taian, taikoja) — from memory
+    + cells("taika", "N", "SG;GEN=taian PL;IN+ESS=taioissa SG;PRT=taikaa")
+    # Karlsson (3rd ed., 2018), comparison: the superlative paras has the vowel stem parhaa- beside
+    # the consonant stem paras- (parasta) — from memory
+    + cells("paras", "ADJ", "SG;GEN=parhaan SG;PRT=parasta PL;NOM=parhaat PL;IN+ESS=parhaissa SG;IN+ESS=parhaassa")
     # Karlsson (3rd ed., 2018), nouns in -e (Kotus 48) and -as/-is (Kotus 41) with k : ∅ — from memory
     + cells("koe", "N", "SG;GEN=kokeen SG;PRT=koetta SG;IN+ALL=kokeeseen PL;PRT=kokeita")
     + cells("ruis", "N", "SG;GEN=rukiin SG;PRT=ruista")
@@ -470,6 +476,9 @@ WRONG = [
     "yhdessäkymmentä",  # yksi has no tens
     "tämäni",  # demonstratives take no possessive suffix
     "minäni",
+    "tajan",  # taian: only aika and poika take j (ajan, pojan) — from memory
+    "paraan",  # parhaan — from memory
+    "parhasta",  # parasta — from memory
 ]
 
 
