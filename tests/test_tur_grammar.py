@@ -168,6 +168,16 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("okumak", "V;NEG;HAB;3;SG", "okumaz"),
         ("beklemek", "V;HAB;3;SG", "bekler"),
     ],
+    # the fused compounds of etmek keep its aorist -Ar (G&K 8.2.3; from memory)
+    "aorist -Ar of etmek compounds (hissetmek, kaybetmek)": [
+        ("etmek", "V;HAB;3;SG", "eder"),
+        ("hissetmek", "V;HAB;3;SG", "hisseder"),
+        ("hissetmek", "V;HAB;1;SG", "hissederim"),
+        ("kaybetmek", "V;HAB;3;PL", "kaybederler"),
+        ("bahsetmek", "V;HAB;V.CVB;WHILE", "bahsederken"),
+        ("hissetmek", "V;PASS;HAB;3;SG", "hissedilir"),
+        ("hissetmek", "V;NEG;HAB;3;SG", "hissetmez"),
+    ],
     # 15: the whole finite conjugation of gelmek in the third person singular and the first person
     # (G&K ch. 8 and 21; L VIII-XI; from memory)
     "tenses, aspects and moods (gelmek)": [
@@ -317,6 +327,7 @@ REJECTED = [
     "evdeim",  # the copula's buffer y left out
     "gelar",  # wrong aorist vowel for a listed -Ir verb
     "yapır",  # wrong aorist vowel for a one-syllable -Ar verb
+    "kaybedir",  # an etmek compound keeps -Ar (kaybeder)
     "gitiyor",  # the d of gitmek not voiced
     "okuyorlardılar",  # person marked twice
 ]
