@@ -289,6 +289,11 @@ INVERTED = (
     # Karlsson (3rd ed., 2018), comparison: the superlative paras has the vowel stem parhaa- beside
     # the consonant stem paras- (parasta) — from memory
     + cells("paras", "ADJ", "SG;GEN=parhaan SG;PRT=parasta PL;NOM=parhaat PL;IN+ESS=parhaissa SG;IN+ESS=parhaassa")
+    # Karlsson (3rd ed., 2018), comparison: pitkä pidempi pisin (irregular); -is adjectives have the
+    # superlative in -ein (kaunis kauniimpi kaunein) — from memory
+    + cells("pitkä", "ADJ", "CMPR;SG;NOM=pidempi CMPR;SG;GEN=pidemmän SPRL;SG;NOM=pisin SPRL;PL;IN+ESS=pisimmissä SG;NOM=pitkä")
+    + cells("kaunis", "ADJ", "CMPR;SG;NOM=kauniimpi SPRL;SG;NOM=kaunein SPRL;SG;GEN=kauneimman PL;IN+ESS=kauniissa")
+    + cells("valmis", "ADJ", "SPRL;SG;NOM=valmein")
     # Karlsson (3rd ed., 2018), nouns in -e (Kotus 48) and -as/-is (Kotus 41) with k : ∅ — from memory
     + cells("koe", "N", "SG;GEN=kokeen SG;PRT=koetta SG;IN+ALL=kokeeseen PL;PRT=kokeita")
     + cells("ruis", "N", "SG;GEN=rukiin SG;PRT=ruista")
@@ -479,6 +484,7 @@ WRONG = [
     "tajan",  # taian: only aika and poika take j (ajan, pojan) — from memory
     "paraan",  # parhaan — from memory
     "parhasta",  # parasta — from memory
+    "pitkempi",  # pidempi — from memory
 ]
 
 
