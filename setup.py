@@ -9,7 +9,8 @@ setup(
     packages=find_packages(include=["morphfst", "morphfst.*"]) + ["morphfst.grammars", "morphfst.lexicons"],
     package_dir={"morphfst.grammars": "grammars", "morphfst.lexicons": "lexicons"},
     package_data={
-        "morphfst": ["grammar.lark", "py.typed"],
+        "morphfst": ["py.typed"],
+        "morphfst.language": ["grammar.lark"],
         "morphfst.grammars": ["*.mfg", "**/*.mfg"],
         "morphfst.lexicons": ["**/*.tsv"],
     },

@@ -37,7 +37,7 @@ sys.path.insert(0, str(ROOT))
 
 import morphfst  # noqa: E402
 from morphfst.build import compile_grammar  # noqa: E402
-from morphfst.fstutil import size  # noqa: E402
+from morphfst.compile.fstutil import size  # noqa: E402
 
 DEV_RANKS = 20_000  # wordfreq ranks past this are evaluation data: never read by benchmarks
 
@@ -113,7 +113,7 @@ def throughput(lang: morphfst.Language, words: list[str], runs: int, label: str)
 
 def scaling(grammar: Path, factors: list[int]) -> None:
     """Compile time and analyzer size against lexicon size (entries cloned under new stems)."""
-    from morphfst.loader import load_model
+    from morphfst.compile.loader import load_model
 
     print("\ncompile cost against lexicon size (lexicon cloned under new stems)")
     print(f"  {'entries':>8} {'compile s':>10} {'analyzer states':>16} {'arcs':>10}")

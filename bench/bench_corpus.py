@@ -41,7 +41,7 @@ from morphfst.corpus.local import Workers, run_local  # noqa: E402
 from morphfst.corpus.outputs import open_sink  # noqa: E402
 from morphfst.corpus.records import ChunkProcessor  # noqa: E402
 from morphfst.corpus.sources import expand_inputs  # noqa: E402
-from morphfst.walk import FastAnalyzer  # noqa: E402
+from morphfst.runtime.walk import FastAnalyzer  # noqa: E402
 
 WORDFREQ_CODES = {"tur": "tr", "fin": "fi"}
 DEV_RANKS = 20_000  # wordfreq ranks usable for development; the rest is for evaluation only

@@ -32,8 +32,8 @@ ROOT = Path(__file__).resolve().parent.parent
 sys.path.insert(0, str(ROOT))
 
 import morphfst  # noqa: E402
+from morphfst.compile.fstutil import paths  # noqa: E402
 from morphfst.debug import DebugSession, diagnose, explain, lint, run_tests  # noqa: E402
-from morphfst.fstutil import paths  # noqa: E402
 
 
 def sample_words(lang: morphfst.Language, n: int, seed: int) -> list[str]:

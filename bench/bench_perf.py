@@ -837,7 +837,7 @@ def time_corpus(
 def distinct_tokens(lang: morphfst.Language, corpus: Path) -> int | None:
     """Distinct tokens of the text as the corpus tokenizer cuts them (None if the tokenizer moved)."""
     try:
-        from morphfst.tokenize import Tokenizer
+        from morphfst.runtime.tokenize import Tokenizer
 
         tokenizer = Tokenizer.for_meta(lang.meta)
         seen: set[str] = set()

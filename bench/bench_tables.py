@@ -37,11 +37,11 @@ sys.path.insert(0, str(ROOT))
 
 import morphfst  # noqa: E402
 from morphfst.build import compile_grammar, find_grammar  # noqa: E402
-from morphfst.export import export_unimorph, lexicon_groups  # noqa: E402
-from morphfst.layout import arrange  # noqa: E402
-from morphfst.loader import load_model  # noqa: E402
-from morphfst.paradigm import Bound, CellFiller, paradigms, trial_paradigm  # noqa: E402
-from morphfst.table_formats import render_text  # noqa: E402
+from morphfst.compile.loader import load_model  # noqa: E402
+from morphfst.tables.export import export_unimorph, lexicon_groups  # noqa: E402
+from morphfst.tables.layout import arrange  # noqa: E402
+from morphfst.tables.paradigm import Bound, CellFiller, paradigms, trial_paradigm  # noqa: E402
+from morphfst.tables.table_formats import render_text  # noqa: E402
 
 # ---------------------------------------------------------------------------------------------
 # A cloned lexicon

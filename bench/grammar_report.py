@@ -28,7 +28,7 @@ sys.path.insert(0, str(ROOT))
 
 import morphfst  # noqa: E402
 from morphfst.build import compile_grammar, find_grammar  # noqa: E402
-from morphfst.tokenize import Tokenizer  # noqa: E402
+from morphfst.runtime.tokenize import Tokenizer  # noqa: E402
 
 DEV_RANKS = 20_000  # wordfreq ranks past this are evaluation data: never read here
 WORDFREQ_CODES = {"tur": "tr", "fin": "fi"}

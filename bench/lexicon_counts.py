@@ -26,8 +26,8 @@ sys.path.insert(0, str(ROOT))
 
 import morphfst  # noqa: E402
 from morphfst.build import find_grammar  # noqa: E402
-from morphfst.lexicon import lexicon_files  # noqa: E402
-from morphfst.syntax import parse_grammar_file  # noqa: E402
+from morphfst.language.lexicon import lexicon_files  # noqa: E402
+from morphfst.language.syntax import parse_grammar_file  # noqa: E402
 
 DEV_RANKS = 20_000
 WORDFREQ_CODES = {"tur": "tr", "fin": "fi"}

@@ -114,7 +114,7 @@ def source_files(grammar_path: Path) -> list[Path]:
 
 
 def sample_words(grammar_path: Path, rng: random.Random) -> list[str]:
-    from morphfst.loader import load_model
+    from morphfst.compile.loader import load_model
 
     model = load_model(grammar_path)
     lemmas = [e.lemma for e in model.lexicon]
@@ -187,7 +187,7 @@ def run_tools(grammar_path: Path, out: Path, words: list[str]) -> dict[str, Any]
     if code != 0:
         return report
     step(["analyze", "-l", str(out), *words])
-    from morphfst.archive import read_metadata
+    from morphfst.compile.archive import read_metadata
 
     lexicon = read_metadata(out).get("lexicon") or []
     if lexicon:

@@ -10,14 +10,11 @@ analyze, generate and segment words::
     tur.segment("evlerde")[0].text        # 'ev-ler-de'
 """
 
-# modules the README uses as morphfst.<module>.<function> after a plain "import morphfst"
-import importlib
-from typing import Any
-
 from .build import compile_grammar, load
 from .errors import UserError
-from .results import Analysis, Form, Morph, Segmentation
-from .runtime import Language
+from .lazymodules import submodule_getattr
+from .runtime.compiled_language import Language
+from .runtime.results import Analysis, Form, Morph, Segmentation
 from .version import __version__
 
 __all__ = [
@@ -33,13 +30,4 @@ __all__ = [
 ]
 
 
-def __getattr__(name: str) -> Any:
-    """Submodules are reachable after a plain ``import morphfst`` (``morphfst.export.iter_unimorph``),
-    imported on first use so that optional dependencies load only when needed."""
-    if not name.startswith("_"):
-        try:
-            return importlib.import_module(f".{name}", __name__)
-        except ModuleNotFoundError as exc:
-            if exc.name != f"{__name__}.{name}":
-                raise
-    raise AttributeError(f"module {__name__!r} has no attribute {name!r}")
+__getattr__ = submodule_getattr(__name__)

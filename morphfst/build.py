@@ -26,16 +26,16 @@ from importlib import resources
 from pathlib import Path
 from typing import TYPE_CHECKING, Any
 
-from .archive import SUFFIX, DamagedArchive, Metadata, load_archive, save_archive
 from .atomic import write_bytes_atomic
+from .compile.archive import SUFFIX, DamagedArchive, Metadata, load_archive, save_archive
+from .compile.sourcehash import file_hash, sources_digest
 from .errors import Position, UserError
-from .runtime import Language
-from .sourcehash import file_hash, sources_digest
+from .runtime.compiled_language import Language
 
 if TYPE_CHECKING:  # the compiler and the grammar parser are imported only when something is compiled
     import pynini
 
-    from . import model as m
+    from .language import model as m
 
 GRAMMAR_SUFFIX = ".mfg"
 PACKAGE_ROOT = Path(__file__).resolve().parent.parent
@@ -107,8 +107,8 @@ def source_files(grammar_path: Path) -> tuple[str, list[str]]:
 
 
 def _parsed_sources(grammar_path: Path) -> tuple[str, list[str], dict[str, list[str]]]:
-    from .lexicon import lexicon_files
-    from .syntax import parse_grammar_file
+    from .language.lexicon import lexicon_files
+    from .language.syntax import parse_grammar_file
 
     grammar = parse_grammar_file(grammar_path)
     included = [str(p) for p in grammar.sources[1:]]
@@ -119,14 +119,14 @@ def _parsed_sources(grammar_path: Path) -> tuple[str, list[str], dict[str, list[
 
 
 def _listing(folder: Path) -> list[str]:
-    """The lexicon files of a lexicon folder (what :func:`morphfst.lexicon.lexicon_files` reads)."""
+    """The lexicon files of a lexicon folder (what :func:`morphfst.language.lexicon.lexicon_files` reads)."""
     return sorted(p.name for p in folder.glob("*.tsv"))
 
 
 def cache_key(grammar_path: Path) -> tuple[str, list[str], str]:
     """The grammar's name, its source files and the digest that names its compiled file in the cache.
 
-    The digest is a hash of the bytes of every source file (:func:`morphfst.metadata.sources_digest`).
+    The digest is a hash of the bytes of every source file (:func:`morphfst.compile.metadata.sources_digest`).
     Which files those are is only known by parsing the grammar (its includes and lexicon lines), so
     the list is kept in a small manifest in the cache, keyed by the grammar's path: when the listed
     files still hash to the recorded digest and the lexicon folders hold the same files, the grammar
@@ -158,10 +158,10 @@ def compile_in_memory(
     extra_entries: list[m.LexEntry] | None = None,
 ) -> tuple[dict[str, pynini.Fst], dict[str, Any]]:
     """Compile a grammar and its lexicons; returns the transducers and the metadata."""
-    from .compiler import Compiler
-    from .layout import declared_layouts
-    from .loader import load_model
-    from .metadata import build_metadata
+    from .compile.compiler import Compiler
+    from .compile.loader import load_model
+    from .compile.metadata import build_metadata
+    from .tables.layout import declared_layouts
 
     t0 = time.perf_counter()
     grammar = load_model(grammar_path, extra_entries)

@@ -12,9 +12,10 @@ import pytest
 from toygrammar import TOY_LEXICON, write_toy
 
 import morphfst
-from morphfst import archive, build
-from morphfst.archive import DamagedArchive
+from morphfst import build
 from morphfst.cli import main
+from morphfst.compile import archive, sourcehash
+from morphfst.compile.archive import DamagedArchive
 from morphfst.debug.session import DebugSession
 from morphfst.errors import UserError
 
@@ -40,7 +41,7 @@ def test_messages_use_the_sources_loaded_now_not_those_of_the_first_compile(tmp_
     session = DebugSession(lang)
     assert session.grammar.name == "toy"
     assert morphfst.debug.explain(lang, "kalar")
-    from morphfst.paradigm import compile_entry
+    from morphfst.tables.paradigm import compile_entry
 
     trial, _ = compile_entry(lang, {"lemma": "lo", "klass": "noun"})
     assert trial.analyze("lolar")
@@ -161,3 +162,10 @@ def test_a_cache_that_cannot_be_written_still_loads_with_a_hint_about_the_cache(
     lang = morphfst.load(grammar)
     assert lang.analyze("kalar") and "Read-only file system" in capsys.readouterr().err
     assert errno.EROFS  # (the same path as for EROFS from the kernel)
+
+
+def test_the_compiler_digest_reads_every_compiler_source() -> None:
+    # a moved or renamed compiler module must not drop silently out of the cache key
+    package = Path(sourcehash.__file__).resolve().parent.parent
+    missing = [name for name in sourcehash.COMPILER_MODULES if not (package / name).is_file()]
+    assert not missing

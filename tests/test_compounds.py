@@ -13,7 +13,7 @@ from toygrammar import write_toy
 
 import morphfst
 from morphfst.errors import UserError
-from morphfst.syntax import parse_grammar_text
+from morphfst.language.syntax import parse_grammar_text
 
 GRAMMAR = """\
 language ctoy "Toy compounds"

@@ -8,7 +8,7 @@ import pytest
 from toygrammar import TOY_GRAMMAR, write_toy
 
 import morphfst
-from morphfst.compiler import GUESS_OFFSET
+from morphfst.compile.compiler import GUESS_OFFSET
 
 GUESS_TOY = TOY_GRAMMAR.replace("noun pos N -> number", "noun pos N -> number guess @cons* @vowel [@vowel @cons]*")
 

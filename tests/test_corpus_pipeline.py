@@ -13,7 +13,7 @@ import morphfst
 from morphfst.cli import main
 from morphfst.corpus import Options, WorkerFailure, run_corpus
 from morphfst.corpus.reading import chunks, read_blocks
-from morphfst.tokenize import Tokenizer
+from morphfst.runtime.tokenize import Tokenizer
 
 # Invented demo sentences (our own), mixing lexicon words, names with apostrophes, numbers with
 # suffixes, hyphenated and unknown words, punctuation and CRLF line ends.

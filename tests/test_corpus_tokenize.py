@@ -5,7 +5,7 @@ from __future__ import annotations
 from hypothesis import given, settings
 from hypothesis import strategies as st
 
-from morphfst.tokenize import Tokenizer, split_line
+from morphfst.runtime.tokenize import Tokenizer, split_line
 
 TOK = Tokenizer(("'", "’"))
 

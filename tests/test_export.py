@@ -9,8 +9,8 @@ from tabletoy import write_table_toy
 
 import morphfst
 from morphfst.cli import main
-from morphfst.export import export_unimorph, iter_unimorph
-from morphfst.paradigm import make_bound, paradigms
+from morphfst.tables.export import export_unimorph, iter_unimorph
+from morphfst.tables.paradigm import make_bound, paradigms
 
 
 def read_lines(path: Path) -> list[list[str]]:

@@ -14,14 +14,16 @@ import pytest
 from toygrammar import TOY_LEXICON, write_toy
 
 import morphfst
-from morphfst import archive, arctable, build, walk
-from morphfst.archive import LazyFsts, Metadata
+from morphfst import build
 from morphfst.cli import build_parser
+from morphfst.compile import archive, arctable
+from morphfst.compile.archive import LazyFsts, Metadata
+from morphfst.compile.fstutil import Arc
 from morphfst.corpus import Options, run_corpus
 from morphfst.corpus.cluster import MIN_PARTITION_BYTES, PARTITION_BYTES, auto_partition_bytes
 from morphfst.corpus.local import owner
 from morphfst.corpus.sources import Source
-from morphfst.fstutil import Arc
+from morphfst.runtime import walk
 
 
 @pytest.fixture()
@@ -248,7 +250,7 @@ def test_word_types_that_begin_alike_have_one_owner() -> None:
 def test_labels_out_of_order_are_generated_from_a_remembered_order(
     tur: morphfst.Language, monkeypatch: pytest.MonkeyPatch
 ) -> None:
-    from morphfst import runtime
+    from morphfst.runtime import compiled_language as runtime
 
     expected = [f.form for f in tur.generate("kitap", "N;PL;LOC")]
     assert [f.form for f in tur.generate("ev", "LOC;PL;N")] == ["evlerde"]

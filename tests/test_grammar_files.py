@@ -9,8 +9,8 @@ import pytest
 from toygrammar import TOY_GRAMMAR, write_toy
 
 import morphfst
+from morphfst.compile.loader import load_model
 from morphfst.errors import UserError
-from morphfst.loader import load_model
 
 # A toy gradation: a lemma's t between vowels before the last vowel is a gradation site <t>, which
 # surfaces as d before a closed syllable (a consonant-initial suffix), like the weak grade of katu.

@@ -11,10 +11,10 @@ from toygrammar import TOY_GRAMMAR, write_toy
 
 import morphfst
 from morphfst.cli import main
+from morphfst.compile.loader import load_model
 from morphfst.errors import UserError
 from morphfst.harvest import Harvester, HarvestOptions, harvest
 from morphfst.harvest.recovery import recovery_experiment
-from morphfst.loader import load_model
 
 ROOT = Path(__file__).resolve().parent.parent
 

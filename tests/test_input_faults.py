@@ -13,9 +13,9 @@ from toygrammar import TOY_GRAMMAR, TOY_LEXICON, write_toy
 
 import morphfst
 from morphfst.cli import main
+from morphfst.compile.fstutil import paths
 from morphfst.errors import UserError
-from morphfst.fstutil import paths
-from morphfst.tokenize import Tokenizer
+from morphfst.runtime.tokenize import Tokenizer
 
 
 def test_a_byte_order_mark_at_the_start_of_a_lexicon_is_accepted(tmp_path: Path) -> None:

@@ -105,11 +105,14 @@ def test_readme_output_blocks_that_are_cut_say_so() -> None:
 
 def test_modules_the_readme_uses_are_reachable_after_import_morphfst() -> None:
     text = (ROOT / "README.md").read_text(encoding="utf-8")
-    found = set(re.findall(r"`morphfst\.(\w+)\.(\w+)\(", text))
-    assert ("export", "iter_unimorph") in found
-    for module, function in found:
+    found = set(re.findall(r"`morphfst\.((?:\w+\.)+)(\w+)\(", text))
+    assert ("tables.export.", "iter_unimorph") in found
+    for path, function in found:
         try:
-            attribute = getattr(getattr(morphfst, module), function)
+            here: object = morphfst
+            for part in path.rstrip(".").split("."):
+                here = getattr(here, part)
+            attribute = getattr(here, function)
         except ModuleNotFoundError as exc:  # an optional dependency of that module is not installed
             assert not (exc.name or "").startswith("morphfst")
             continue

@@ -9,10 +9,10 @@ from __future__ import annotations
 import pynini
 import pytest
 
-from morphfst.compiler import Compiler
-from morphfst.fstutil import acc, paths
-from morphfst.syntax import parse_grammar_text
-from morphfst.validate import validate
+from morphfst.compile.compiler import Compiler
+from morphfst.compile.fstutil import acc, paths
+from morphfst.language.syntax import parse_grammar_text
+from morphfst.language.validate import validate
 
 BASE = """
 alphabet {

@@ -5,9 +5,9 @@ from __future__ import annotations
 import pytest
 from toygrammar import TOY_GRAMMAR
 
-from morphfst import model as m
 from morphfst.errors import UserError
-from morphfst.syntax import parse_form, parse_grammar_text
+from morphfst.language import model as m
+from morphfst.language.syntax import parse_form, parse_grammar_text
 
 
 def test_toy_grammar_blocks() -> None:

@@ -20,9 +20,9 @@ from tabletoy import write_table_toy
 import morphfst
 from morphfst.cli import main
 from morphfst.errors import UserError
-from morphfst.layout import Arranged, arrange, default_layout, layout_override, paradigm_data
-from morphfst.paradigm import Paradigm, cell_templates, make_bound, paradigms, trial_paradigm
-from morphfst.table_formats import display_width, render, render_text
+from morphfst.tables.layout import Arranged, arrange, default_layout, layout_override, paradigm_data
+from morphfst.tables.paradigm import Paradigm, cell_templates, make_bound, paradigms, trial_paradigm
+from morphfst.tables.table_formats import display_width, render, render_text
 
 ROOT = Path(__file__).resolve().parent.parent
 

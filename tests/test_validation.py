@@ -8,8 +8,8 @@ import pytest
 from toygrammar import TOY_GRAMMAR, TOY_LEXICON, write_toy
 
 from morphfst.cli import main
+from morphfst.compile.loader import load_model
 from morphfst.errors import UserError
-from morphfst.loader import load_model
 
 
 def line_of(text: str, needle: str) -> int:
@@ -59,7 +59,7 @@ def test_rule_target_outside_alphabet(tmp_path: Path) -> None:
 
 
 def test_rule_rewriting_a_boundary(tmp_path: Path) -> None:
-    from morphfst.compiler import Compiler
+    from morphfst.compile.compiler import Compiler
 
     path = write_toy(tmp_path, TOY_GRAMMAR.replace("rule back  : A -> a", "rule back  : A + -> a"))
     grammar = load_model(path)
@@ -69,7 +69,7 @@ def test_rule_rewriting_a_boundary(tmp_path: Path) -> None:
 
 
 def test_unequal_sets_in_a_rule(tmp_path: Path) -> None:
-    from morphfst.compiler import Compiler
+    from morphfst.compile.compiler import Compiler
 
     path = write_toy(tmp_path, TOY_GRAMMAR.replace("rule back  : A -> a", "rule back  : [ae] -> [o]"))
     grammar = load_model(path)

@@ -6,10 +6,10 @@ import argparse
 import sys
 import time
 
-from ..archive import load_archive
 from ..build import compile_grammar, find_grammar
+from ..compile.archive import load_archive
 from ..errors import UserError
-from ..runtime import Language
+from ..runtime.compiled_language import Language
 
 EXAMPLES = """examples:
   morphfst build grammars/tur.mfg                 compile into the cache (what 'load' uses)

@@ -9,7 +9,7 @@ from collections.abc import Iterator
 from typing import Any, TextIO
 
 from ..build import load
-from ..runtime import Language
+from ..runtime.compiled_language import Language
 from ..textio import ReadStats, open_binary, read_lines
 
 FORMATS = ("table", "tsv", "jsonl")
@@ -77,7 +77,7 @@ def words_from(args: argparse.Namespace, stats: ReadStats) -> Iterator[str]:
 def checked_word(word: str) -> str:
     """A word for the debugging tools: not empty and not longer than the analyzers read."""
     from ..errors import UserError
-    from ..runtime import MAX_WORD
+    from ..runtime.compiled_language import MAX_WORD
 
     if not word.strip():
         raise UserError("empty word", hint="give the word to look at, e.g. morphfst explain evlerde")

@@ -6,8 +6,8 @@ import argparse
 import json
 import sys
 
-from ..export import export_unimorph
-from ..paradigm import make_bound
+from ..tables.export import export_unimorph
+from ..tables.paradigm import make_bound
 from .common import add_language, open_language, split_labels
 
 EXAMPLES = """examples:

@@ -14,10 +14,10 @@ from typing import BinaryIO, TextIO
 from ..corpus.progress import Progress
 from ..corpus.reading import CHUNK_BYTES, MAX_LINE_BYTES, Chunk, chunks, read_blocks
 from ..corpus.records import decode
-from ..results import Segmentation
-from ..runtime import Language
+from ..runtime.compiled_language import Language
+from ..runtime.results import Segmentation
+from ..runtime.tokenize import Tokenizer, split_line
 from ..textio import ReadStats, open_binary
-from ..tokenize import Tokenizer, split_line
 from .common import Aligned, add_input, add_language, open_language, report_stats, shorten, tsv_field, write_json
 
 EXAMPLES = """examples:

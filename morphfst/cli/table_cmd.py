@@ -7,10 +7,10 @@ import shutil
 import sys
 
 from ..errors import UserError
-from ..export import write_text
-from ..layout import arrange, layout_override
-from ..paradigm import make_bound, paradigms, trial_paradigm
-from ..table_formats import FORMATS, render
+from ..tables.export import write_text
+from ..tables.layout import arrange, layout_override
+from ..tables.paradigm import make_bound, paradigms, trial_paradigm
+from ..tables.table_formats import FORMATS, render
 from .common import add_language, open_language, split_labels
 
 EXAMPLES = """examples:

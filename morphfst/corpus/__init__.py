@@ -20,7 +20,7 @@ from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
-from ..runtime import Language
+from ..runtime.compiled_language import Language
 from ..version import __version__
 from .coverage import Coverage
 from .local import WorkerFailure, run_local

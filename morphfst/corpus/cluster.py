@@ -21,7 +21,7 @@ from pathlib import Path
 from typing import Any
 
 from ..errors import UserError
-from ..runtime import Language
+from ..runtime.compiled_language import Language
 from .coverage import Coverage
 from .local import WorkerFailure
 from .progress import Progress

@@ -28,7 +28,7 @@ from pathlib import Path
 from typing import Any
 
 from ..errors import UserError
-from ..runtime import Language
+from ..runtime.compiled_language import Language
 from .coverage import Coverage
 from .outputs import AtomicFile, StdoutSink
 from .progress import Progress

@@ -36,10 +36,10 @@ from collections import Counter
 from dataclasses import dataclass, field
 from typing import Any
 
-from ..results import Analysis
-from ..runtime import MAX_WORD, Language
-from ..tokenize import PUNCT, SPACE, Tokenizer
-from ..walk import MAX_GUESSES
+from ..runtime.compiled_language import MAX_WORD, Language
+from ..runtime.results import Analysis
+from ..runtime.tokenize import PUNCT, SPACE, Tokenizer
+from ..runtime.walk import MAX_GUESSES
 from .reading import CHUNK_BYTES, MAX_LINE_BYTES, Chunk
 
 # The type caches and the walker's tables only grow during a run, and Python's cycle collector would

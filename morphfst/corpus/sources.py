@@ -15,9 +15,9 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Any
 
-from ..archive import SUFFIX, save_archive
+from ..compile.archive import SUFFIX, save_archive
 from ..errors import Position, UserError
-from ..runtime import Language
+from ..runtime.compiled_language import Language
 from .outputs import atomic_text
 
 MANIFEST = "manifest.json"
@@ -120,7 +120,7 @@ def compiled_file(lang: Language, directory: str | Path | None = None) -> str:
 
 def load_compiled(path: str) -> Language:
     """Load a compiled file as it is (no source check, no recompilation): what workers run."""
-    from ..archive import load_archive
+    from ..compile.archive import load_archive
 
     fsts, meta = load_archive(path)
     return Language(fsts, meta, path)

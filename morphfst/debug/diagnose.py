@@ -26,9 +26,9 @@ from typing import Any
 
 import pynini
 
-from .. import model as m
+from ..compile.fstutil import acc, cross, is_empty, paths, union
 from ..errors import UserError
-from ..fstutil import acc, cross, is_empty, paths, union
+from ..language import model as m
 from .explain import explain_analysis, render_derivation
 from .morphotactics import Break, constraint_violations, find_break
 from .nearest import NearWord, align, nearest_words

@@ -5,8 +5,8 @@ from __future__ import annotations
 from dataclasses import asdict, dataclass, field
 from typing import Any
 
-from .. import model as m
-from ..results import Analysis
+from ..language import model as m
+from ..runtime.results import Analysis
 from .morphotactics import PathStep, analysis_path
 from .session import DebugSession
 from .trace import Derivation, derive

@@ -18,7 +18,7 @@ from typing import Any
 
 from ..atomic import write_bytes_atomic
 from ..errors import UserError
-from ..runtime import Language
+from ..runtime.compiled_language import Language
 
 FORMATS = ("dot", "svg", "png")
 DERIVATION_COLOR = "#b2182b"

@@ -24,9 +24,9 @@ from typing import Any
 
 import pynini
 
-from .. import model as m
+from ..compile.fstutil import acc, is_empty, paths
 from ..errors import Position, UserError
-from ..fstutil import acc, is_empty, paths
+from ..language import model as m
 from ..textio import ReadStats, open_binary, read_lines
 from .morphotactics import followers
 from .session import DebugSession

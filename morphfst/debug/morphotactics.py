@@ -9,7 +9,7 @@ from __future__ import annotations
 
 from dataclasses import dataclass, field
 
-from .. import model as m
+from ..language import model as m
 
 
 @dataclass

@@ -14,7 +14,7 @@ from dataclasses import dataclass, field
 
 import pynini
 
-from ..fstutil import Arc, Weight, acc, is_empty, paths
+from ..compile.fstutil import Arc, Weight, acc, is_empty, paths
 from .session import DebugSession
 
 EDIT_COST = 1000.0  # large against analysis weights, so edit distance ranks first

@@ -2,7 +2,7 @@
 
 The saved transducers answer *what* a word is; the debugging tools also need *why*, which only the
 grammar source knows (the rule list, flags, the slot graph as data). A :class:`DebugSession` reloads
-the language model from ``metadata["grammar_path"]`` once, builds a :class:`~morphfst.compiler.Compiler`
+the language model from ``metadata["grammar_path"]`` once, builds a :class:`~morphfst.compile.compiler.Compiler`
 over the compiled language's own symbol space, and caches what the tools recompile (single rules,
 per-word lattices) for the life of the session.
 """
@@ -17,14 +17,14 @@ from typing import Any
 
 import pynini
 
-from .. import model as m
 from ..build import load
-from ..compiler import Compiler, build_space
+from ..compile.compiler import Compiler, build_space
+from ..compile.fstutil import acc, cross, union
+from ..compile.loader import load_model
+from ..compile.metadata import file_hash
 from ..errors import Position, UserError
-from ..fstutil import acc, cross, union
-from ..loader import load_model
-from ..metadata import file_hash
-from ..runtime import Language
+from ..language import model as m
+from ..runtime.compiled_language import Language
 
 _SESSIONS: dict[str, DebugSession] = {}
 

@@ -26,7 +26,7 @@ from pathlib import Path
 from typing import Any
 
 from ..errors import Position, UserError
-from ..results import Analysis
+from ..runtime.results import Analysis
 from .explain import explain_analysis
 from .session import DebugSession
 

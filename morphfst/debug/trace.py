@@ -13,8 +13,8 @@ from dataclasses import dataclass, field
 
 import pynini
 
-from .. import model as m
-from ..fstutil import NO_STATE_ID, Weight, acc, is_empty
+from ..compile.fstutil import NO_STATE_ID, Weight, acc, is_empty
+from ..language import model as m
 from .session import DebugSession
 
 MAX_BRANCHES = 32  # optional rules branch a derivation; at most this many branches are followed

@@ -23,12 +23,12 @@ from dataclasses import dataclass
 
 import pynini
 
-from .. import model as m
-from ..compiler import Compiler
+from ..compile.compiler import Compiler
+from ..compile.fstutil import NO_STATE_ID, acc, chars, cross, union
+from ..compile.stemrules import lemma_to_stem
 from ..errors import Position, UserError
-from ..fstutil import NO_STATE_ID, acc, chars, cross, union
-from ..stemrules import lemma_to_stem
-from ..walk import ArcWalker
+from ..language import model as m
+from ..runtime.walk import ArcWalker
 
 MAX_VARIANTS_PER_CLASS = 8  # flag sets tried per class (the most common in the lexicon)
 MIN_FLAG_SET_SHARE = 0.005  # a flag set carried by a smaller share of a class's entries is not proposed
@@ -57,7 +57,7 @@ class Reading:
 def class_variants(grammar: m.Grammar, max_per_class: int = MAX_VARIANTS_PER_CLASS) -> list[Variant]:
     """Every (class, part of speech, flag set) a candidate may take, from the classes' guess patterns
     and the flag sets the lexicon's entries of each class carry."""
-    from ..normalize import make_normalizer
+    from ..language.normalize import make_normalizer
 
     fold = make_normalizer(grammar.normalization)
     out: list[Variant] = []

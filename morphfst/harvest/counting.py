@@ -2,7 +2,7 @@
 
 Counting comes first, so the harvest holds one entry per distinct spelling and never the text: memory
 grows with the vocabulary, not with the corpus. Text is split by the corpus pipeline's tokenizer
-(:class:`morphfst.tokenize.Tokenizer`, with the language's apostrophes); invalid UTF-8 is replaced and
+(:class:`morphfst.runtime.tokenize.Tokenizer`, with the language's apostrophes); invalid UTF-8 is replaced and
 counted like everywhere else. A malformed word list line is a user error with its file and line.
 """
 
@@ -17,9 +17,9 @@ from dataclasses import dataclass, field
 from ..corpus.progress import Progress
 from ..corpus.sources import Source, expand_inputs
 from ..errors import Position, UserError
-from ..runtime import Language
+from ..runtime.compiled_language import Language
+from ..runtime.tokenize import Tokenizer
 from ..textio import ReadStats, open_binary, read_lines
-from ..tokenize import Tokenizer
 
 
 @dataclass

@@ -46,10 +46,10 @@ from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
+from ..compile.loader import load_model
 from ..errors import UserError
-from ..loader import load_model
-from ..paradigm import Bound, cell_templates
-from ..runtime import Language
+from ..runtime.compiled_language import Language
+from ..tables.paradigm import Bound, cell_templates
 from .candidates import CandidateGuesser, Reading, Variant
 
 PRIOR_WEIGHT = 0.5  # weight of ln prior(class, flags)

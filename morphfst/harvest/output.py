@@ -2,7 +2,7 @@
 
 The first columns are the lexicon's own (``lemma class pos gloss stem flags``), so an accepted line can
 be copied into ``lexicons/<lang>/`` unchanged; the evidence columns after them (``score``,
-``attested``, ``tokens``, ``examples``, ``runner_up``) are declared in :mod:`morphfst.lexicon` and
+``attested``, ``tokens``, ``examples``, ``runner_up``) are declared in :mod:`morphfst.language.lexicon` and
 ignored by the lexicon reader, so a reviewed file can also be placed there as it is.
 """
 
@@ -12,7 +12,7 @@ import sys
 from typing import TextIO
 
 from ..corpus.outputs import atomic_text
-from ..lexicon import EVIDENCE
+from ..language.lexicon import EVIDENCE
 from .extract import HarvestResult, Proposal
 
 LEXICON_COLUMNS = ("lemma", "class", "pos", "gloss", "stem", "flags")

@@ -22,15 +22,15 @@ from collections.abc import Callable
 from dataclasses import dataclass, field
 from pathlib import Path
 
-from .. import model as m
 from ..build import load
-from ..compiler import Compiler
-from ..fstutil import acc, union
-from ..loader import load_model
-from ..metadata import build_metadata
-from ..normalize import make_normalizer
-from ..paradigm import Bound, CellFiller, Shape, cell_templates
-from ..runtime import Language
+from ..compile.compiler import Compiler
+from ..compile.fstutil import acc, union
+from ..compile.loader import load_model
+from ..compile.metadata import build_metadata
+from ..language import model as m
+from ..language.normalize import make_normalizer
+from ..runtime.compiled_language import Language
+from ..tables.paradigm import Bound, CellFiller, Shape, cell_templates
 from .extract import Harvester, HarvestOptions, HarvestResult
 
 Key = tuple[str, str, str, tuple[str, ...]]
@@ -160,8 +160,8 @@ def recovery_experiment(
 
 
 def _lexicon_files(grammar_path: Path) -> list[str]:
-    from ..lexicon import lexicon_files
-    from ..syntax import parse_grammar_file
+    from ..language.lexicon import lexicon_files
+    from ..language.syntax import parse_grammar_file
 
     return [str(p) for p in lexicon_files(parse_grammar_file(grammar_path))]
 

@@ -25,7 +25,7 @@ from collections.abc import Callable, Iterator
 from typing import Any
 
 from ..errors import UserError
-from ..runtime import Language
+from ..runtime.compiled_language import Language
 from .terms import TermAnalyzer, TermOptions
 
 TOKENIZER_NAME = "morphfst"

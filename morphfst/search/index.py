@@ -36,7 +36,7 @@ from ..corpus.records import ChunkProcessor, ChunkResult, Options, decode
 from ..corpus.sources import Source, expand_inputs
 from ..errors import Position as ErrorPosition
 from ..errors import UserError
-from ..runtime import Language
+from ..runtime.compiled_language import Language
 from ..version import __version__
 from .fts import Registration, register, require_apsw, sql_string, tokenize_directive
 from .terms import TermAnalyzer, TermOptions

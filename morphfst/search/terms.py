@@ -35,7 +35,7 @@ from collections.abc import Sequence
 from dataclasses import dataclass
 
 from ..corpus.records import ANALYZED, GUESSED, NUMBER, UNKNOWN, ChunkProcessor, Options
-from ..runtime import Language
+from ..runtime.compiled_language import Language
 
 KINDS = ("lemma", "stem", "morphs", "surface")
 PREFIX = {"lemma": "", "stem": "~", "surface": "=", "affix": "+"}

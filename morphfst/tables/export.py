@@ -8,7 +8,7 @@ lexicon by (lemma, part of speech) (so two entries that differ only in class or 
 once, with the union of their forms). The file is written under a temporary name and renamed when
 complete.
 
-Cyclic derivation is bounded by the same :class:`~morphfst.paradigm.Bound` as tables: a depth limit
+Cyclic derivation is bounded by the same :class:`~morphfst.tables.paradigm.Bound` as tables: a depth limit
 and a feature filter.
 """
 
@@ -23,10 +23,10 @@ from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any, TextIO
 
-from .atomic import create_temp, discard, publish, write_error
-from .errors import UserError
+from ..atomic import create_temp, discard, publish, write_error
+from ..errors import UserError
+from ..runtime.compiled_language import Language
 from .paradigm import Bound, Cell, CellFiller
-from .runtime import Language
 
 
 @dataclass

@@ -14,8 +14,8 @@ import unicodedata
 from collections.abc import Callable
 from pathlib import Path
 
+from ..errors import Position, UserError
 from . import model as m
-from .errors import Position, UserError
 from .syntax import parse_form
 
 REQUIRED = ("lemma", "class", "pos", "gloss")

@@ -1,4 +1,4 @@
-"""Arc tables: the arcs of a transducer as packed arrays, for the walk (:mod:`morphfst.walk`).
+"""Arc tables: the arcs of a transducer as packed arrays, for the walk (:mod:`morphfst.runtime.walk`).
 
 The walk reads a state's arcs the first time it reaches the state. Through pynini that costs an
 OpenFst binary parse of the whole transducer at start-up and some microseconds per state after it.

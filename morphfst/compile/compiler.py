@@ -23,12 +23,12 @@ from typing import Literal
 
 import pynini
 
-from . import model as m
-from .errors import UserError
+from ..errors import UserError
+from ..language import model as m
+from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
+from ..language.validate import BOUNDARIES
 from .fstutil import NO_STATE_ID, Arc, Weight, acc, chars, cross, empty, union
 from .stemrules import derive_stems, lemma_to_stem
-from .symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
-from .validate import BOUNDARIES
 
 SETLIKE = (m.SetRef, m.Klass)
 

@@ -2,7 +2,7 @@
 
 Layout: ``metadata.json`` (everything but the lexicon), ``lexicon.json`` (the lexicon entries),
 ``glosses.tsv`` (lemma, part of speech and gloss of every entry: what decoding needs), one
-``<name>.fst`` per transducer and a packed arc table ``<name>.arcs`` (:mod:`morphfst.arctable`) of each
+``<name>.fst`` per transducer and a packed arc table ``<name>.arcs`` (:mod:`morphfst.compile.arctable`) of each
 transducer the walk reads, so that the analyzer starts without parsing an OpenFst binary. The archive comment holds a SHA-256 checksum of every byte before it,
 so a damaged file is detected when it is opened, by one pass over the raw bytes, without inflating
 anything. Loading reads only ``metadata.json``; each transducer is read the first time it is used
@@ -24,10 +24,10 @@ from typing import Any
 
 import pynini
 
+from ..atomic import create_temp, discard, publish, write_error
+from ..errors import Position, UserError
+from ..version import FORMAT_VERSION
 from .arctable import WALKED, Arcs, FstArcs, PackedArcs, pack
-from .atomic import create_temp, discard, publish, write_error
-from .errors import Position, UserError
-from .version import FORMAT_VERSION
 
 SUFFIX = ".mfc"
 CHECKSUM_PREFIX = b"morphfst-sha256:"

@@ -1,7 +1,7 @@
 """Parse a grammar file (our own language, see grammar.lark) into the plain language model.
 
 The lark parse tree never leaves this module: :func:`parse_grammar_text` returns a
-:class:`~morphfst.model.Grammar` whose objects carry their source positions. Syntax errors become a
+:class:`~morphfst.language.model.Grammar` whose objects carry their source positions. Syntax errors become a
 :class:`~morphfst.errors.UserError` with file, line, column, caret and a hint.
 """
 
@@ -16,8 +16,8 @@ from typing import Any
 from lark import Lark, Token, Tree
 from lark.exceptions import UnexpectedCharacters, UnexpectedEOF, UnexpectedInput, UnexpectedToken
 
+from ..errors import Position, UserError
 from . import model as m
-from .errors import Position, UserError
 
 MAX_COMPOUND_PARTS = 6  # the most parts a compound block may allow (each one copies the non-last parts)
 
@@ -44,7 +44,7 @@ _TERMINAL_WORDS = {
 
 @lru_cache(maxsize=1)
 def _parser() -> Lark:
-    text = resources.files("morphfst").joinpath("grammar.lark").read_text(encoding="utf-8")
+    text = resources.files("morphfst.language").joinpath("grammar.lark").read_text(encoding="utf-8")
     return Lark(text, parser="lalr", propagate_positions=True, maybe_placeholders=False)
 
 

@@ -36,9 +36,9 @@ from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
-from .errors import Position, UserError
+from ..errors import Position, UserError
+from ..runtime.compiled_language import Language
 from .paradigm import Cell, Paradigm, make_bound, paradigms, trial_paradigm
-from .runtime import Language
 
 MAX_DEFAULT_COLUMNS = 4
 LISTING_MAX_CELLS = 3  # a group of this few cells is listed, one row per cell
@@ -518,7 +518,7 @@ def paradigm_data(
 
     With ``klass`` the word is compiled as a new entry of that class (it need not be in the lexicon)::
 
-        from morphfst.layout import paradigm_data
+        from morphfst.tables.layout import paradigm_data
         paradigm_data(tur, "ev")[0]["cells"][0]      # {'analysis': 'ev N;SG;PSS1S;NOM', 'forms': [...], ...}
         paradigm_data(tur, "kalem", klass="noun", tables=True)[0]["sections"]
     """

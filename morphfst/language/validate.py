@@ -9,8 +9,8 @@ from __future__ import annotations
 import difflib
 from dataclasses import replace
 
+from ..errors import Position, UserError
 from . import model as m
-from .errors import Position, UserError
 
 BOUNDARIES = (m.MORPH_BOUNDARY, m.WORD_START, m.WORD_END)
 

@@ -22,10 +22,10 @@ from typing import Any, Protocol, TypeVar
 
 import pynini
 
-from .arctable import Arcs, FstArcs
-from .fstutil import NO_STATE_ID
+from ..compile.arctable import Arcs, FstArcs
+from ..compile.fstutil import NO_STATE_ID
+from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 from .results import Analysis, Morph
-from .symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 
 
 class Language(Protocol):
@@ -80,7 +80,7 @@ class ArcWalker:
     transducer (for the bounded analyzer: the surface with its morph boundaries).
 
     Nothing is built up front, so a language loads in constant time whatever its size. A state's
-    arcs are read from its table (:mod:`morphfst.arctable`) the first time a walk reaches it, and the
+    arcs are read from its table (:mod:`morphfst.compile.arctable`) the first time a walk reaches it, and the
     steps that read a letter from it, with the arcs that read nothing folded in, the first time a
     walk reads that letter there. A walk then runs in two passes. Forward, it follows the *set* of
     live states, letter by letter, through a lazily built subset automaton (Rabin & Scott 1959): each

@@ -33,11 +33,11 @@ from typing import Any
 
 import pynini
 
-from . import model as m
-from .errors import Position, UserError
-from .fstutil import ACYCLIC, TOKEN, acc, is_empty, union
-from .normalize import restore_case
-from .runtime import Language
+from ..compile.fstutil import ACYCLIC, TOKEN, acc, is_empty, union
+from ..errors import Position, UserError
+from ..language import model as m
+from ..language.normalize import restore_case
+from ..runtime.compiled_language import Language
 
 DEFAULT_MAX_CELLS = 100_000
 WEIGHT_EPSILON = 1e-6
@@ -550,8 +550,8 @@ def trial_entry(
     gloss: str = "",
 ) -> m.LexEntry:
     """A lexicon entry built from command-line values, checked like a lexicon line."""
-    from .normalize import make_normalizer
-    from .syntax import parse_form
+    from ..language.normalize import make_normalizer
+    from ..language.syntax import parse_form
 
     where = Position("command line")
     lemma = unicodedata.normalize("NFC", lemma.strip())
@@ -594,8 +594,8 @@ def trial_entry(
                 where,
                 hint="give the underlying stem with --stem, using the grammar's letters and archiphonemes",
             )
-    from .compiler import Compiler
-    from .stemrules import derive_stems
+    from ..compile.compiler import Compiler
+    from ..compile.stemrules import derive_stems
 
     entry = m.LexEntry(lemma, klass, pos, gloss, 0.0, symbols, list(flags), where, stem_given=stem is not None)
     derive_stems(grammar, [entry], make=Compiler)
@@ -605,9 +605,9 @@ def trial_entry(
 def compile_entry(lang: Language, entry_args: dict[str, Any]) -> tuple[Language, m.LexEntry]:
     """Compile one entry with the grammar source ``lang`` was compiled from; returns a language
     whose lexicon is that entry alone."""
-    from .compiler import Compiler
-    from .loader import load_model
-    from .metadata import build_metadata
+    from ..compile.compiler import Compiler
+    from ..compile.loader import load_model
+    from ..compile.metadata import build_metadata
 
     path = lang.meta.get("grammar_path")
     if not path or not Path(path).exists():

@@ -10,7 +10,7 @@ from __future__ import annotations
 from dataclasses import dataclass, field
 from typing import Literal
 
-from .errors import Position
+from ..errors import Position
 from .normalize import Normalization
 
 # ---------------------------------------------------------------------------------------------

@@ -19,14 +19,14 @@ from typing import Protocol
 
 import pynini
 
-from . import model as m
-from .errors import UserError
+from ..errors import UserError
+from ..language import model as m
+from ..language.symbols import SymbolSpace
 from .fstutil import acc, chars, cross, paths, union
-from .symbols import SymbolSpace
 
 
 class Compiler(Protocol):
-    """What stem rules need of :class:`morphfst.compiler.Compiler` (which calls this module, so it is
+    """What stem rules need of :class:`morphfst.compile.compiler.Compiler` (which calls this module, so it is
     named here rather than imported)."""
 
     g: m.Grammar

@@ -6,36 +6,36 @@ from __future__ import annotations
 import hashlib
 from pathlib import Path
 
-from .version import FORMAT_VERSION, __version__
+from ..version import FORMAT_VERSION, __version__
 
 
 def file_hash(path: str | Path) -> str:
     return hashlib.sha256(Path(path).read_bytes()).hexdigest()
 
 
-COMPILER_MODULES = (
-    "grammar.lark",
-    "syntax.py",
-    "model.py",
-    "validate.py",
-    "lexicon.py",
-    "loader.py",
-    "compiler.py",
-    "symbols.py",
-    "fstutil.py",
-    "normalize.py",
-    "metadata.py",
-    "sourcehash.py",
-    "stemrules.py",
+COMPILER_MODULES = (  # paths under the morphfst package
+    "language/grammar.lark",
+    "language/syntax.py",
+    "language/model.py",
+    "language/validate.py",
+    "language/lexicon.py",
+    "language/symbols.py",
+    "language/normalize.py",
+    "compile/loader.py",
+    "compile/compiler.py",
+    "compile/fstutil.py",
+    "compile/metadata.py",
+    "compile/sourcehash.py",
+    "compile/stemrules.py",
 )
 
 
 def compiler_digest() -> str:
     """A hash of the compiler's own source, so a changed compiler recompiles cached languages."""
     h = hashlib.sha256()
-    here = Path(__file__).resolve().parent
+    package = Path(__file__).resolve().parent.parent
     for name in COMPILER_MODULES:
-        path = here / name
+        path = package / name
         if path.exists():
             h.update(path.read_bytes())
     return h.hexdigest()

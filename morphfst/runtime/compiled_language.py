@@ -14,13 +14,13 @@ from typing import Any
 
 import pynini
 
-from .archive import LazyFsts, Metadata
-from .arctable import Arcs, FstArcs
-from .errors import UserError
-from .fstutil import Arc, Weight, acc, is_empty, paths
-from .normalize import Normalization, make_normalizer, restore_case
+from ..compile.archive import LazyFsts, Metadata
+from ..compile.arctable import Arcs, FstArcs
+from ..compile.fstutil import Arc, Weight, acc, is_empty, paths
+from ..errors import UserError
+from ..language.normalize import Normalization, make_normalizer, restore_case
+from ..language.symbols import PRIVATE_START, SymbolSpace
 from .results import Analysis, Form, Segmentation
-from .symbols import PRIVATE_START, SymbolSpace
 from .walk import FastAnalyzer
 
 _UNREADABLE = re.compile(f"[\\x00{chr(PRIVATE_START)}-\\U0010ffff]")  # NUL cuts pynini strings; the rest is ours
@@ -91,7 +91,7 @@ class Language:
         """The same analyses as :meth:`analyze`, by FST composition (segmenter, then bounded analyzer).
 
         This is the reference path: :meth:`analyze` walks the bounded analyzer's arcs in Python
-        (:mod:`morphfst.walk`), which is several times faster; the tests check that both agree.
+        (:mod:`morphfst.runtime.walk`), which is several times faster; the tests check that both agree.
         """
         return list(self._composed(word))
 
@@ -220,7 +220,7 @@ class Language:
         return list(self._by_lemma.get(lemma, ()))
 
     def stats(self) -> dict[str, Any]:
-        from .fstutil import size
+        from ..compile.fstutil import size
 
         return {name: dict(zip(("states", "arcs"), size(f))) for name, f in self.fsts.items()}
 

@@ -4,14 +4,14 @@ from __future__ import annotations
 
 from pathlib import Path
 
-from . import model as m
+from ..errors import Position, UserError
+from ..language import model as m
+from ..language.lexicon import read_lexicon
+from ..language.normalize import make_normalizer
+from ..language.syntax import parse_grammar_file
+from ..language.validate import validate
 from .compiler import Compiler
-from .errors import Position, UserError
-from .lexicon import read_lexicon
-from .normalize import make_normalizer
 from .stemrules import derive_stems
-from .syntax import parse_grammar_file
-from .validate import validate
 
 
 def load_model(path: str | Path, extra_entries: list[m.LexEntry] | None = None) -> m.Grammar:

@@ -10,10 +10,10 @@ from __future__ import annotations
 from pathlib import Path
 from typing import Any
 
-from . import model as m
+from ..language import model as m
+from ..language.symbols import SymbolSpace
+from ..version import FORMAT_VERSION, __version__
 from .sourcehash import COMPILER_MODULES, compiler_digest, file_hash, sources_digest
-from .symbols import SymbolSpace
-from .version import FORMAT_VERSION, __version__
 
 __all__ = ["COMPILER_MODULES", "build_metadata", "compiler_digest", "file_hash", "sources_digest"]
 
