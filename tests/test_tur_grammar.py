@@ -276,6 +276,10 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("beş", "NUM;ORD;ADJ;SG;NOM", "beşinci"),
         ("üç", "NUM;ORD;ADJ;SG;NOM", "üçüncü"),
         ("iki", "NUM;DISTR;ADJ", "ikişer"),
+        # the interrogative numeral kaç inflects as a numeral (G&K 15.7; from memory)
+        ("kaç", "NUM;SG;LOC", "kaçta"),
+        ("kaç", "NUM;ORD;ADJ;SG;NOM", "kaçıncı"),
+        ("kaç", "NUM;SG;DAT", "kaça"),
         ("2023", "NUM;SG;LOC", "2023'te"),
         ("5", "NUM;ORD;ADJ;SG;NOM", "5'inci"),
         ("6", "NUM;SG;DAT", "6'ya"),
