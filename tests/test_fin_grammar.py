@@ -328,6 +328,9 @@ INVERTED = (
     + cells("kolmekymmentä", "NUM", "SG;GEN=kolmenkymmenen SG;PRT=kolmeakymmentä")
     + cells("seitsemänkymmentä", "NUM", "SG;NOM=seitsemänkymmentä SG;AT+ESS=seitsemälläkymmenellä")
     + cells("parikymmentä", "NUM", "SG;GEN=parinkymmenen")
+    # Karlsson (3rd ed., 2018), the hundreds and thousands inflect both parts as the tens do — from memory
+    + cells("kolmesataa", "NUM", "SG;NOM=kolmesataa SG;GEN=kolmensadan SG;IN+ESS=kolmessasadassa SG;PRT=kolmeasataa")
+    + cells("kaksituhatta", "NUM", "SG;NOM=kaksituhatta SG;GEN=kahdentuhannen SG;IN+ALL=kahteentuhanteen")
 )
 
 ALL = PARADIGMS + VERBS + CELLS + INVERTED
