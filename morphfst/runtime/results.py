@@ -10,7 +10,7 @@ from dataclasses import asdict, dataclass, field
 from typing import Any
 
 
-@dataclass(frozen=True)
+@dataclass(frozen=True, slots=True)
 class Morph:
     """One morph of a word: its surface form, gloss and features."""
 
@@ -24,7 +24,7 @@ class Morph:
     new_pos: str | None = None
 
 
-@dataclass(frozen=True)
+@dataclass(frozen=True, slots=True)
 class Analysis:
     """One analysis of a word: lemma, part of speech, ordered features, morphs and weight."""
 
