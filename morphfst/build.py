@@ -9,8 +9,9 @@ Grammars are compiled into a cache under ``$MORPHFST_CACHE`` (default ``~/.cache
 by a hash of the compiler version and every source file, so loading reuses the compiled file while
 the sources are unchanged and recompiles when any of them changes. A damaged cache entry (checksum)
 is reported in one line and rebuilt; only the newest :data:`CACHE_KEEP` entries per language are
-kept, besides the current compile of every other copy of the grammar still on disk. When the cache cannot be written the language is compiled in memory. A compiled file named by
-the user is loaded as it is, never recompiled or overwritten.
+kept, besides the current compile of every other copy of the grammar still on disk. When the cache
+cannot be written the language is compiled in memory. A compiled file named by the user is loaded as
+it is, never recompiled or overwritten.
 """
 
 from __future__ import annotations

@@ -2,9 +2,9 @@
 
 Layout: ``metadata.json`` (everything but the lexicon), ``lexicon.json`` (the lexicon entries),
 ``glosses.tsv`` (lemma, part of speech and gloss of every entry: what decoding needs), one
-``<name>.fst`` per transducer and a packed arc table ``<name>.arcs`` (:mod:`morphfst.compile.arctable`) of each
-transducer the walk reads, so that the analyzer starts without parsing an OpenFst binary. The archive comment holds a SHA-256 checksum of every byte before it,
-so a damaged file is detected when it is opened, by one pass over the raw bytes, without inflating
+``<name>.fst`` per transducer and a packed arc table ``<name>.arcs`` (:mod:`morphfst.compile.arctable`)
+of each transducer the walk reads, so that the analyzer starts without parsing an OpenFst binary. The
+archive comment holds a SHA-256 checksum of every byte before it, so a damaged file is detected when it is opened, by one pass over the raw bytes, without inflating
 anything. Loading reads only ``metadata.json``; each transducer is read the first time it is used
 (:class:`LazyFsts`) and the lexicon the first time a tool asks for it (:class:`Metadata`), so start-up
 does not grow with the lexicon. Files are written to a temporary name and renamed when complete,
@@ -205,8 +205,6 @@ def _open(path: str | Path) -> tuple[zipfile.ZipFile, dict[str, Any]]:
     damaged file and a :class:`UserError` for one of another format."""
     try:
         raw = Path(path).read_bytes()
-    except (FileNotFoundError, PermissionError, IsADirectoryError) as exc:
-        raise _unreadable(path, exc) from None
     except OSError as exc:
         raise _unreadable(path, exc) from None
     tail = raw[-(len(CHECKSUM_PREFIX) + _DIGEST_LEN) :]

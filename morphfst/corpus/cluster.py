@@ -132,8 +132,7 @@ def run_dask(
         client.register_plugin(GrammarPlugin(mfc.read_bytes(), mfc.name, options), name="morphfst-grammar")
         addresses = sorted(client.scheduler_info().get("workers", {}))
         if partition_bytes is None:
-            known = len(client.scheduler_info().get("workers", {})) if address else workers
-            partition_bytes = auto_partition_bytes(sources, max(known, 1))
+            partition_bytes = auto_partition_bytes(sources, max(len(addresses) if address else workers, 1))
         parts = partitions(sources, partition_bytes)
         counts = client.gather(
             client.map(

@@ -1,8 +1,9 @@
 """The runtime API: a compiled language that analyzes, generates and segments words.
 
-``analyze`` composes the word with the segmenter (surface → surface with morph boundaries) and each
-bounded string with the bounded analyzer, so every analysis comes with its surface morphs aligned
-with glosses and features. Ties are broken by the analysis text, so the order is deterministic.
+``analyze`` walks the bounded analyzer (internal analysis → surface with morph boundaries) from
+Python (:mod:`morphfst.runtime.walk`), so every analysis comes with its surface morphs aligned with
+glosses and features; ``analyze_composed`` gives the same analyses by composition with the segmenter
+and the bounded analyzer. Ties are broken by the analysis text, so the order is deterministic.
 """
 
 from __future__ import annotations
