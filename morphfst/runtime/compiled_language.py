@@ -21,6 +21,7 @@ from ..compile.fstutil import Arc, Weight, acc, is_empty, paths
 from ..errors import UserError
 from ..language.normalize import Normalization, make_normalizer, restore_case
 from ..language.symbols import PRIVATE_START, SymbolSpace
+from .hyphenated import HYPHEN, hyphenated
 from .results import Analysis, Form, Segmentation
 from .walk import FastAnalyzer
 
@@ -100,6 +101,14 @@ class Language:
         surface = self.normalize(word)
         if not self.acceptable(surface):
             return ()
+        found = self._composed_surface(surface)
+        if not found and HYPHEN in surface:
+            return tuple(hyphenated(surface, word, self._composed_surface))
+        return found
+
+    def _composed_surface(self, surface: str) -> tuple[Analysis, ...]:
+        if not self.acceptable(surface):
+            return ()
         found: list[tuple[str, str, float]] = []
         for bounded, _ in self._bounded(surface):
             lattice = pynini.compose(acc(bounded), self.fsts["bounded"])
@@ -134,7 +143,9 @@ class Language:
         surface = self.normalize(word)
         if not self.acceptable(surface):
             return False
-        return not is_empty(pynini.compose(acc(surface), self.fsts["analyzer"]).connect())
+        if not is_empty(pynini.compose(acc(surface), self.fsts["analyzer"]).connect()):
+            return True
+        return HYPHEN in surface and bool(self.analyze(word))
 
     # ---- generation -------------------------------------------------------------------------------
     def labels(self) -> dict[str, str]:

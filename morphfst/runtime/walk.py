@@ -25,6 +25,7 @@ import pynini
 from ..compile.arctable import Arcs, FstArcs
 from ..compile.fstutil import NO_STATE_ID
 from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
+from .hyphenated import HYPHEN, hyphenated
 from .results import Analysis, Morph
 
 
@@ -517,9 +518,17 @@ class FastAnalyzer:
         if not self.lang.acceptable(surface):
             return []
         found = self.decode_all(surface, self.bounded.walk(surface, limit), False)
+        if not found and HYPHEN in surface:
+            found = hyphenated(surface, word, self._analyze_part)
         if not found and guess:
             return self.guess_normalized(surface)
         return found
+
+    def _analyze_part(self, part: str) -> list[Analysis]:
+        """Lexicon analyses of one part of a hyphenated word (normalized; no guesses)."""
+        if not self.lang.acceptable(part):
+            return []
+        return self.decode_all(part, self.bounded.walk(part, MAX_PATHS), False)
 
     def guess(self, word: str, limit: int = MAX_GUESSES) -> list[Analysis]:
         """Guessed analyses of ``word`` (a stem the lexicon may not have), best first, marked ``guessed``."""
