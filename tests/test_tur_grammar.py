@@ -294,6 +294,29 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("Ahmet", "PROPN;SG;DAT", "Ahmet'e"),
         ("Ahmet", "PROPN;SG;GEN", "Ahmet'in"),
     ],
+    # 22: compounds whose last part carries the 3rd person possessive: the case after n, the plural
+    # on the bare compound with its final stop voiceless (Göksel & Kerslake 2005, compound nouns —
+    # from memory)
+    "possessive compounds": [
+        ("anaokulu", "N;SG;ACC", "anaokulunu"),
+        ("anaokulu", "N;SG;DAT", "anaokuluna"),
+        ("buzdolabı", "N;SG;ACC", "buzdolabını"),
+        ("buzdolabı", "N;PL;NOM", "buzdolapları"),
+        ("başsağlığı", "N;PL;NOM", "başsağlıkları"),
+        ("ipucu", "N;PL;NOM", "ipuçları"),
+        ("gökkuşağı", "N;SG;LOC", "gökkuşağında"),
+    ],
+    # 23: reviewed entries: loans with front suffixes, one-syllable stems that voice, the aorist of
+    # compounds of a one-syllable -Ar root (Göksel & Kerslake 2005 — from memory)
+    "reviewed entries": [
+        ("general", "N;SG;ACC", "generali"),
+        ("grip", "N;SG;ACC", "gribi"),
+        ("demet", "N;SG;ACC", "demeti"),
+        ("had", "N;SG;ACC", "haddi"),
+        ("vazgeçmek", "V;HAB;3;SG", "vazgeçer"),
+        ("varsaymak", "V;HAB;3;SG", "varsayar"),
+        ("denmek", "V;HAB;3;SG", "denir"),
+    ],
 }
 
 CASES_FLAT = [(name, *row) for name, rows in PARADIGMS.items() for row in rows]
@@ -334,6 +357,9 @@ REJECTED = [
     "kaybedir",  # an etmek compound keeps -Ar (kaybeder)
     "gitiyor",  # the d of gitmek not voiced
     "okuyorlardılar",  # person marked twice
+    "anaokuluyu",  # a possessive compound takes n before the case (anaokulunu)
+    "buzdolabları",  # the plural has the voiceless stop (buzdolapları)
+    "varsayır",  # varsayar: the compound keeps saymak's -Ar
 ]
 
 
@@ -358,3 +384,11 @@ def test_informal_spellings_are_accepted_but_never_generated(tur: morphfst.Langu
 def test_circumflex_is_normalized(tur: morphfst.Language) -> None:
     # â, î, û are written in some loans (kâğıt, hâlâ); they are read as a, i, u (common practice)
     assert tur.analyze("kâğıdı") and tur.analyze("kâğıdı")[0].lemma in {"kağıt", "kâğıt"}
+
+
+def test_hyphenated_words_inflect_the_last_part(tur: morphfst.Language) -> None:
+    # common practice (Turkish orthography): parts joined by a hyphen, the last one inflected
+    best = tur.analyze("Türk-Yunan")[0]
+    assert best.lemma == "Türk-Yunan" and best.segmentation == "türk-yunan"
+    assert tur.analyze("Türk-Yunan") == tur.analyze_composed("Türk-Yunan")
+    assert tur.analyze("xqz-yunan") == []
