@@ -399,6 +399,8 @@ REVIEWED = (
     + cells("raaka", "ADJ", "SG;GEN=raa'an PL;NOM=raa'at SG;IN+ESS=raa'assa")
     + cells("naukua", "V", "IND;PRS;1;SG=nau'un")
     + cells("maata", "V", "V.PTCP;ACT;PST;ADJ;SG;NOM=maannut")
+    # Kotus word list: type 14 rounds a final ä like a (kännykkä: kännyköitä) — from memory
+    + cells("kännykkä", "N", "PL;PRT=kännyköitä PL;IN+ESS=kännyköissä")
 )
 
 ALL = PARADIGMS + VERBS + CELLS + INVERTED + REVIEWED
