@@ -316,6 +316,22 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("vazgeçmek", "V;HAB;3;SG", "vazgeçer"),
         ("varsaymak", "V;HAB;3;SG", "varsayar"),
         ("denmek", "V;HAB;3;SG", "denir"),
+        # the passive of çevirmek, ayırmak, savurmak drops the root's last vowel, the suffix keeping
+        # its rounding (Göksel & Kerslake 2005, the passive — from memory)
+        ("çevirmek", "V;PASS;PST;3;SG", "çevrildi"),
+        ("ayırmak", "V;PASS;PST;3;SG", "ayrıldı"),
+        ("savurmak", "V;PASS;PST;3;SG", "savruldu"),
+        # quantifier pronouns with the possessive (Göksel & Kerslake 2005, quantifiers — from memory)
+        ("tüm", "PRO;SG;PSS3S;NOM", "tümü"),
+        ("birçok", "PRO;SG;PSS3S;NOM", "birçoğu"),
+        ("birkaç", "PRO;SG;PSS3S;NOM", "birkaçı"),
+        # a proper name derives without its apostrophe (Ankaralı, İstanbullu), the negative aorist is
+        # also a participle (görmezden gelmek), -CAsInA and -CAğIz (Göksel & Kerslake 2005 — from memory)
+        ("Ankara", "PROPN;PROPR;ADJ;SG;NOM", "Ankaralı"),
+        ("İstanbul", "PROPN;PROPR;ADJ;PL;NOM", "İstanbullular"),
+        ("görmek", "V;NEG;V.PTCP;HAB;ADJ;SG;ABL", "görmezden"),
+        ("deli", "ADJ;ASIF;ADV", "delicesine"),
+        ("kız", "N;DIM;N;SG;NOM", "kızcağız"),
     ],
 }
 
@@ -392,3 +408,11 @@ def test_hyphenated_words_inflect_the_last_part(tur: morphfst.Language) -> None:
     assert best.lemma == "Türk-Yunan" and best.segmentation == "türk-yunan"
     assert tur.analyze("Türk-Yunan") == tur.analyze_composed("Türk-Yunan")
     assert tur.analyze("xqz-yunan") == []
+
+
+def test_the_urging_imperative_ranks_below_the_plain_one(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake 2005, the imperative: -sAnA, -sAnIzA (gelsene, baksanıza) — from memory
+    assert [f.form for f in tur.generate("gelmek", "V;IMP;2;SG")] == ["gel", "gelsene"]
+    best = tur.analyze("baksana")[0]
+    assert best.text == "bakmak V;IMP;2;SG" and best.segmentation == "bak-sana"
+    assert tur.analyze("gelsenize")[0].text == "gelmek V;IMP;2;PL"
