@@ -401,6 +401,14 @@ REVIEWED = (
     + cells("maata", "V", "V.PTCP;ACT;PST;ADJ;SG;NOM=maannut")
     # Kotus word list: type 14 rounds a final ä like a (kännykkä: kännyköitä) — from memory
     + cells("kännykkä", "N", "PL;PRT=kännyköitä PL;IN+ESS=kännyköissä")
+    # Karlsson (3rd ed., 2018), comparison: hyvä parempi paras (irregular) — from memory
+    + cells("hyvä", "ADJ", "CMPR;SG;NOM=parempi CMPR;SG;GEN=paremman SPRL;SG;NOM=paras SPRL;SG;GEN=parhaan")
+    # Karlsson (3rd ed., 2018), the negative participle in harmony (tekemätön) and the caritive
+    # -tOn on the vowel stem (rahaton, koditon, miehetön) — from memory
+    + cells("tehdä", "V", "V.PTCP;PRIV;ADJ;SG;NOM=tekemätön V.PTCP;PRIV;ADJ;SG;GEN=tekemättömän")
+    + cells("raha", "N", "CAR;ADJ;SG;NOM=rahaton CAR;ADJ;SG;GEN=rahattoman")
+    + cells("mies", "N", "CAR;ADJ;SG;NOM=miehetön")
+    + cells("käsi", "N", "CAR;ADJ;PL;NOM=kädettömät")
 )
 
 ALL = PARADIGMS + VERBS + CELLS + INVERTED + REVIEWED
@@ -565,6 +573,8 @@ WRONG = [
     "kotimaaan",  # kotimaahan — from memory
     "hiiden",  # haiden — from memory
     "raaan",  # raa'an — common practice
+    "hyvempi",  # parempi — from memory
+    "tekemäton",  # tekemätön — from memory
 ]
 
 
