@@ -446,7 +446,8 @@ def _relaxed_paths(
             lemma, pos, _ = session.decode_internal(internal)
             entry = next((e for e in group if e.lemma == lemma and e.pos_tag == pos), None)
             out.append((entry, internal, weight))
-    return sorted(out, key=lambda t: t[2])
+    # ties in weight broken by the analysis string, so the order is the grammar's, not the lattice's
+    return sorted(out, key=lambda t: (round(t[2], 5), t[1]))
 
 
 def free_order_graph(session: DebugSession, starts: list[str], zero: bool = False) -> pynini.Fst:
@@ -483,16 +484,26 @@ def morphotactics_finding(session: DebugSession, surface: str) -> MorphotacticsF
                     constraint={"name": c.name, "line": c.pos.line, "text": f"{c.left} {c.kind} {c.right}"},
                     segmentation=_segmentation(session, entry, ids, surface),
                 )
-    for entry, internal, _ in _relaxed_paths(
+    # Of the best relaxed paths (equal weight), the one whose break comes latest: the longest prefix
+    # the slot graph accepts is the most telling (and the choice no longer depends on how the
+    # lattice happens to order paths of equal weight).
+    best: tuple[float, int, m.LexEntry, str, list[int], Any] | None = None
+    for entry, internal, weight in _relaxed_paths(
         session, surface, entries, lambda starts: free_order_graph(session, starts), name="free"
     ):
         if entry is None:
             continue
-        lemma, pos, ids = session.decode_internal(internal)
-        affixes = [session.affixes[i] for i in ids]
-        brk = find_break(g, entry.klass, affixes)
+        if best is not None and round(weight, 5) > best[0]:
+            break
+        _, _, ids = session.decode_internal(internal)
+        brk = find_break(g, entry.klass, [session.affixes[i] for i in ids])
         if brk is None:
             continue
+        if best is None or brk.index > best[1]:
+            best = (round(weight, 5), brk.index, entry, internal, ids, brk)
+    if best is not None:
+        _, _, entry, internal, ids, brk = best
+        lemma, _, _ = session.decode_internal(internal)
         line = g.slots[brk.after].pos.line if brk.after_kind == "slot" else g.classes[brk.after].pos.line
         return MorphotacticsFinding(
             "end" if brk.wanted == m.END_SLOT else "order",

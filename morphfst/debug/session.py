@@ -165,11 +165,15 @@ class DebugSession:
         key = (surface, blocked)
         if rules is None and key in self._lattices:
             return self._lattices[key]
-        fst = pynini.compose(self.realize, acc(surface)).connect()
+        # Only the input side is ever used (the output is the word itself), so each step keeps an
+        # acceptor of the forms before the rule, made small again: the inverse of the final step and
+        # of every deleting rule lets markers and deleted symbols in almost anywhere, and without
+        # this the machine grows with every rule (minutes for one Turkish word).
+        fst = _shrink(pynini.compose(self.realize, acc(surface)))
         for rule in reversed(rules if rules is not None else self.rules_for(blocked)):
             if fst.num_states() == 0:
                 break
-            fst = pynini.compose(self.compiler.rule_fst(rule), fst).connect()
+            fst = _shrink(pynini.compose(self.compiler.rule_fst(rule), fst))
         if rules is None:
             self._lattices[key] = fst
         return fst
@@ -257,3 +261,19 @@ class DebugSession:
             "file": entry.pos.file,
             "line": entry.pos.line,
         }
+
+
+SHRINK_STATES = 1_000_000  # a determinized lattice step larger than this is kept as it was
+
+
+def _shrink(fst: pynini.Fst) -> pynini.Fst:
+    """The input side of ``fst`` as a trimmed, epsilon-free, determinized and minimized acceptor."""
+    fst = fst.connect().project("input").rmepsilon()
+    if fst.num_states() == 0:
+        return fst
+    # determinizing bounds the machine (the inserted markers collapse into one set of states); the
+    # state limit keeps a pathological grammar from running away: past it, the plain machine is kept
+    small = pynini.determinize(fst, nstate=SHRINK_STATES)
+    if small.num_states() >= SHRINK_STATES:
+        return fst
+    return small.minimize()
