@@ -650,3 +650,15 @@ def test_hyphenated_compounds_inflect_the_last_part(fin: morphfst.Language) -> N
     assert not fin.accepts("xqz-maissa")
     # a word the lexicon has with its hyphen keeps its own analysis (tasa-arvo)
     assert fin.analyze("tasa-arvon")[0].text == "tasa-arvo N;SG;GEN"
+
+
+def test_postpositions_in_n_and_ksi_take_possessive_suffixes(fin: morphfst.Language) -> None:
+    # Karlsson (3rd ed., 2018), postpositions with possessive suffixes: mukaani, jälkeeni, vuokseni — from memory
+    for word, text in [
+        ("mukaani", "mukaan ADP;PSS1S"),
+        ("jälkeeni", "jälkeen ADP;PSS1S"),
+        ("vastaani", "vastaan ADP;PSS1S"),
+        ("vuokseni", "vuoksi ADP;PSS1S"),
+        ("kanssani", "kanssa ADP;PSS1S"),
+    ]:
+        assert fin.analyze(word)[0].text == text
