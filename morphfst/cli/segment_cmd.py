@@ -16,7 +16,7 @@ from ..corpus.reading import CHUNK_BYTES, MAX_LINE_BYTES, Chunk, chunks, read_bl
 from ..corpus.records import decode
 from ..runtime.compiled_language import Language
 from ..runtime.results import Segmentation
-from ..runtime.tokenize import Tokenizer, split_line
+from ..runtime.tokenize import HYPHENS, Tokenizer, split_line
 from ..textio import ReadStats, open_binary
 from .common import Aligned, add_input, add_language, open_language, report_stats, shorten, tsv_field, write_json
 
@@ -54,6 +54,10 @@ def project(original: str, normalized: str, morphs: list[str]) -> list[str]:
         return morphs
     out, pos = [], 0
     for morph in morphs:
+        # a hyphen that no morph carries (a hyphenated word analyzed by its last part) is skipped:
+        # the separator stands for it
+        while pos < len(normalized) and normalized[pos] in HYPHENS and not normalized.startswith(morph, pos):
+            pos += 1
         out.append(original[pos : pos + len(morph)])
         pos += len(morph)
     return out

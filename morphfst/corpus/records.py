@@ -162,7 +162,15 @@ class TypeResult:
 
     def stem_form(self, apostrophes: str) -> str:
         best = self.analyses[0]
-        return self.prefix + best.morphs[0].form.rstrip(apostrophes)
+        # the leading stem morphs: one for a lexicon word, the parts of a hyphenated word (joined
+        # with its hyphen: etelä-suome), the first part of a compound as before
+        stems = [best.morphs[0].form]
+        if "-" in best.word:
+            for morph in best.morphs[1:]:
+                if morph.kind != "stem":
+                    break
+                stems.append(morph.form)
+        return self.prefix + "-".join(stems).rstrip(apostrophes)
 
     def terms(self, kind: str, apostrophes: str, mark: str = "") -> str:
         if mark and self.status == GUESSED:
