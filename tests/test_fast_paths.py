@@ -211,6 +211,29 @@ def test_a_loaded_language_walks_its_packed_tables(tmp_path: Path, own_cache: Pa
     assert [a.text for a in lang.analyze("kalarna")] == [a.text for a in lang.analyze_composed("kalarna")]
 
 
+def test_arc_tables_are_stored_and_the_rest_deflated(tmp_path: Path, own_cache: Path) -> None:
+    import zipfile
+
+    path = morphfst.compile_grammar(write_toy(tmp_path / "g"), tmp_path / "toy.mfc")
+    with zipfile.ZipFile(path) as zf:
+        kinds = {info.filename: info.compress_type for info in zf.infolist()}
+    assert kinds["bounded.arcs"] == zipfile.ZIP_STORED  # read at every start: a copy, no inflation
+    assert kinds["lexicon.json"] == kinds["bounded.fst"] == zipfile.ZIP_DEFLATED
+
+
+def test_glosses_found_in_the_text_are_the_parsed_glosses(tur: morphfst.Language, monkeypatch: pytest.MonkeyPatch) -> None:
+    text = archive.glosses_tsv(tur.lexicon)
+    parsed = archive.read_glosses(text)
+    monkeypatch.setattr(archive.Glosses, "FINDS", 50)
+    found = archive.Glosses(text)
+    keys = list(parsed)[::37]
+    assert len(keys) > 60  # past FINDS: the rest are answered from the whole parse
+    assert [found.get(k) for k in keys] == [parsed[k] for k in keys]
+    fresh = archive.Glosses(text)
+    assert fresh.get(("no such lemma", "N"), "?") == "?" and ("ev", "N") in fresh and fresh[("ev", "N")] == parsed[("ev", "N")]
+    assert dict(fresh) == parsed and len(fresh) == len(parsed)
+
+
 def test_the_walk_ends_on_a_cycle_of_arcs_that_read_nothing() -> None:
     # 0 -a:a-> 2 (final), and a loop 0 -eps:x-> 1 -eps:y-> 0 that reads nothing: the recursive fold
     # meets the cycle and falls back to the depth-bounded closure.

@@ -19,8 +19,8 @@ from __future__ import annotations
 import array
 import struct
 import sys
-from collections.abc import Iterable
-from typing import Protocol
+from collections.abc import Iterable, Sequence
+from typing import Any, Protocol
 
 import pynini
 
@@ -62,8 +62,8 @@ class FstArcs:
 class PackedArcs:
     """A packed table (see the module docstring): a state's arcs are slices of five arrays."""
 
-    def __init__(self, data: bytes) -> None:
-        if not data.startswith(MAGIC):
+    def __init__(self, data: bytes | memoryview) -> None:
+        if bytes(data[: len(MAGIC)]) != MAGIC:
             raise ValueError("not an arc table")
         start, states, arcs = _HEADER.unpack_from(data, len(MAGIC))
         self.start = start
@@ -113,12 +113,16 @@ def pack(fst: pynini.Fst) -> bytes:
     return b"".join(parts)
 
 
-def _array(code: str, data: bytes, pos: int, count: int) -> tuple[array.array, int]:  # type: ignore[type-arg]
-    arr = array.array(code)
-    end = pos + count * arr.itemsize
+def _array(code: str, data: bytes | memoryview, pos: int, count: int) -> tuple[Sequence[Any], int]:
+    """``count`` items of type ``code`` at ``pos``: a view of ``data`` on a little-endian machine (no
+    copy), else a byte-swapped array."""
+    size = array.array(code).itemsize
+    end = pos + count * size
     if end > len(data):
         raise ValueError("arc table is truncated")
+    if sys.byteorder == "little":
+        return memoryview(data)[pos:end].cast("B").cast(code), end
+    arr = array.array(code)
     arr.frombytes(data[pos:end])
-    if sys.byteorder != "little":
-        arr.byteswap()
+    arr.byteswap()
     return arr, end

@@ -23,6 +23,8 @@ COMPILER_MODULES = (  # paths under the morphfst package
     "language/normalize.py",
     "compile/loader.py",
     "compile/compiler.py",
+    "compile/archive.py",  # the compiled file's layout (which members, how stored)
+    "compile/arctable.py",
     "compile/fstutil.py",
     "compile/metadata.py",
     "compile/sourcehash.py",

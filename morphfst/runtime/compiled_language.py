@@ -48,7 +48,7 @@ class Language:
         for slot_name, slot in meta["slots"].items():
             for affix in slot["affixes"]:
                 self.affixes[affix["id"]] = affix | {"slot": slot_name}
-        self._glosses: dict[tuple[str, str], str] | None = None
+        self._glosses: Mapping[tuple[str, str], str] | None = None
         self._by_lemma: dict[str, list[dict[str, Any]]] | None = None
         self.plus = self.space.code("+")
         self.analyze_cached = lru_cache(maxsize=65536)(self._analyze_tuple)
@@ -206,7 +206,7 @@ class Language:
 
     # ---- information -----------------------------------------------------------------------------------
     @property
-    def glosses(self) -> dict[tuple[str, str], str]:
+    def glosses(self) -> Mapping[tuple[str, str], str]:
         """The gloss of every (lemma, part of speech) of the lexicon (the first entry's), read on first use."""
         if self._glosses is None:
             if isinstance(self.meta, Metadata) and not self.meta.is_loaded("lexicon") and "glosses" in self.meta:
