@@ -121,7 +121,7 @@ def _array(code: str, data: bytes | memoryview, pos: int, count: int) -> tuple[S
     if end > len(data):
         raise ValueError("arc table is truncated")
     if sys.byteorder == "little":
-        return memoryview(data)[pos:end].cast("B").cast(code), end
+        return memoryview(data)[pos:end].cast("B").cast(code), end  # type: ignore[call-overload]
     arr = array.array(code)
     arr.frombytes(data[pos:end])
     arr.byteswap()
