@@ -342,3 +342,12 @@ def test_decoded_keys_are_the_analysis_text_and_segmentation(name: str, request:
                     assert key == (analysis.text, analysis.segmentation)
                     checked += 1
     assert checked > len(words)
+
+
+def test_analyses_share_their_affix_morphs(tur: morphfst.Language) -> None:
+    # one object per (form, affix, labels): fewer objects for the cycle collector to walk
+    first, second = tur.analyze("evlerde")[0], tur.analyze("kitaplarda")[0]
+    assert (first.text, second.text) == ("ev N;PL;LOC", "kitap N;PL;LOC")
+    other = tur.analyze("adamlarda")[0]
+    assert other.morphs[1] is second.morphs[1] and other.morphs[2] is second.morphs[2]  # -lar, -da
+    assert first.morphs[1] is not second.morphs[1]  # -ler is another form

@@ -502,6 +502,9 @@ class FastAnalyzer:
         self.pos_re = re.compile(f"[{re.escape(pos_codes)}]" if pos_codes else "(?!)")
         self._tails: dict[str, Tail] = {}
         self._affix_morphs: dict[tuple[str, str], tuple[tuple[Morph, ...], str]] = {}  # with their segmentation
+        # one Morph per (form, affix, labels), shared by every analysis that has it: fewer objects for
+        # the cycle collector to walk (a word's own objects are what a new word costs it)
+        self._affix_pool: dict[tuple[str, int, tuple[str, ...]], Morph] = {}
         self._stems: dict[tuple[str, str, str], Morph] = {}
 
     @property
@@ -585,6 +588,7 @@ class FastAnalyzer:
             built = (affixes, "-".join(m.form for m in affixes if m.form))
             if len(self._affix_morphs) > 100_000:
                 self._affix_morphs.clear()
+                self._affix_pool.clear()
             self._affix_morphs[key] = built
         affixes, affix_seg = built
         stem_key = (stem_form, lemma, pos)
@@ -647,14 +651,19 @@ class FastAnalyzer:
         aligned = len(forms) == nforms
         out = []
         k = 0
+        pool = self._affix_pool
         for ident, group_labels in groups:
-            gloss, underlying, slot, new_pos, has_form = self.affix_rows[ident]
-            if has_form:
+            if self.affix_rows[ident][4]:
                 form = forms[k] if aligned else "?"
                 k += 1
             else:
                 form = ""
-            out.append(_new_morph(form, gloss, group_labels, "affix", underlying, slot, ident, new_pos))
+            key = (form, ident, group_labels)
+            morph = pool.get(key)
+            if morph is None:
+                gloss, underlying, slot, new_pos, _ = self.affix_rows[ident]
+                morph = pool[key] = _new_morph(form, gloss, group_labels, "affix", underlying, slot, ident, new_pos)
+            out.append(morph)
         return tuple(out)
 
     def decode_all(self, surface: str, walked: list[tuple[str, str, float]], guessed: bool = False) -> list[Analysis]:
