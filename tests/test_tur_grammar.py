@@ -332,6 +332,26 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("görmek", "V;NEG;V.PTCP;HAB;ADJ;SG;ABL", "görmezden"),
         ("deli", "ADJ;ASIF;ADV", "delicesine"),
         ("kız", "N;DIM;N;SG;NOM", "kızcağız"),
+        # su keeps the link vowel of its possessives behind y (Göksel & Kerslake 2005, su — from memory)
+        ("su", "N;SG;PSS1S;NOM", "suyum"),
+        ("su", "N;SG;PSS1P;NOM", "suyumuz"),
+        ("su", "N;SG;PSS2P;NOM", "suyunuz"),
+        # Arabic words whose final consonant the spelling lost take the possessive -I without s
+        # (Sultanahmet Camii, Türk sanayii; common practice in the written standard)
+        ("cami", "N;SG;PSS3S;NOM", "camii"),
+        ("cami", "N;SG;PSS3S;LOC", "camiinde"),
+        ("sanayi", "N;SG;PSS3S;NOM", "sanayii"),
+        ("cami", "N;SG;ACC", "camiyi"),
+        # yemek raises its e before y also in -(y)Ip, -(y)IncA, -(y)In; demek does not there
+        # (the standard spelling: yiyip, yiyince, deyip, deyince — from memory)
+        ("yemek", "V;V.CVB;SEQ", "yiyip"),
+        ("yemek", "V;V.CVB;WHEN", "yiyince"),
+        ("yemek", "V;IMP;2;PL", "yiyin"),
+        ("demek", "V;V.CVB;SEQ", "deyip"),
+        ("demek", "V;V.CVB;WHEN", "deyince"),
+        # the copula after a third-person possessive keeps its buffer y (G&K ch. 12 — from memory)
+        ("arkadaş", "N;SG;PSS3S;NOM;1;SG", "arkadaşıyım"),
+        ("arkadaş", "N;SG;PSS3S;NOM;1;PL", "arkadaşıyız"),
     ],
 }
 
@@ -376,6 +396,9 @@ REJECTED = [
     "anaokuluyu",  # a possessive compound takes n before the case (anaokulunu)
     "buzdolabları",  # the plural has the voiceless stop (buzdolapları)
     "varsayır",  # varsayar: the compound keeps saymak's -Ar
+    "diyip",  # demek keeps its e before -(y)Ip (deyip)
+    "yeyip",  # yemek raises it (yiyip)
+    "sumuz",  # su's possessive keeps y and the link vowel (suyumuz)
 ]
 
 
@@ -389,6 +412,16 @@ def test_usual_reading_first(tur: morphfst.Language) -> None:
     assert [a.text for a in tur.analyze("kitabı")][:2] == ["kitap N;SG;ACC", "kitap N;SG;PSS3S;NOM"]
     # a lexicon word before a derivation that spells it: gözlük 'glasses' before göz-lük
     assert tur.analyze("gözlük")[0].lemma == "gözlük"
+    # eviniz: 'your house' before the genitive as a predicate ('we are of the house'); the copula
+    # after a third-person possessive is -yIm, so arkadaşınım is not 'I am his friend' (common practice)
+    assert tur.analyze("eviniz")[0].text == "ev N;SG;PSS2P;NOM"
+    assert "arkadaş N;SG;PSS3S;NOM;1;SG" not in [a.text for a in tur.analyze("arkadaşınım")]
+
+
+def test_the_everyday_possessive_of_ayn_words_is_analyzed_not_generated(tur: morphfst.Language) -> None:
+    # camisi is common in informal writing; the written standard is camii (common practice)
+    assert "cami N;SG;PSS3S;NOM" in [a.text for a in tur.analyze("camisi")]
+    assert [f.form for f in tur.generate("cami", "N;SG;PSS3S;NOM")] == ["camii"]
 
 
 def test_informal_spellings_are_accepted_but_never_generated(tur: morphfst.Language) -> None:
