@@ -409,6 +409,12 @@ REVIEWED = (
     + cells("raha", "N", "CAR;ADJ;SG;NOM=rahaton CAR;ADJ;SG;GEN=rahattoman")
     + cells("mies", "N", "CAR;ADJ;SG;NOM=miehetön")
     + cells("käsi", "N", "CAR;ADJ;PL;NOM=kädettömät")
+    # Kotus word list: veli has the stem velje- (veljen, veljeä, veljet, veljiä) — from memory
+    + cells("veli", "N", "SG;NOM=veli SG;GEN=veljen SG;PRT=veljeä PL;NOM=veljet PL;PRT=veljiä SG;NOM;PSS1S=veljeni")
+    + cells("pikkuveli", "N", "SG;NOM=pikkuveli SG;AT+ALL=pikkuveljelle")
+    # Kotus word list: hioa is type 52 like sanoa; its i-o is two syllables, not a diphthong
+    # (hioi, hiotaan, hiottiin; not like juoda) — from memory
+    + cells("hioa", "V", "NFIN=hioa IND;PST;3;SG=hioi PASS;IND;PRS=hiotaan PASS;IND;PST=hiottiin")
 )
 
 ALL = PARADIGMS + VERBS + CELLS + INVERTED + REVIEWED
@@ -575,6 +581,10 @@ WRONG = [
     "raaan",  # raa'an — common practice
     "hyvempi",  # parempi — from memory
     "tekemäton",  # tekemätön — from memory
+    "velen",  # veljen — from memory
+    "velji",  # veli: the stem velje- has no nominative of its own — from memory
+    "hioda",  # hioa — from memory
+    "hoi",  # hioi — from memory
 ]
 
 
