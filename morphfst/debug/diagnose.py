@@ -485,9 +485,11 @@ def morphotactics_finding(session: DebugSession, surface: str) -> MorphotacticsF
                     segmentation=_segmentation(session, entry, ids, surface),
                 )
     # Of the best relaxed paths (equal weight), the one whose break comes latest: the longest prefix
-    # the slot graph accepts is the most telling (and the choice no longer depends on how the
-    # lattice happens to order paths of equal weight).
-    best: tuple[float, int, m.LexEntry, str, list[int], Any] | None = None
+    # the slot graph accepts is the most telling; between breaks as late, the one that wants the slot
+    # defined first (the grammar's main slot, e.g. case before a relative's own case), so the choice
+    # depends neither on how the lattice orders paths of equal weight nor on affix numbering.
+    order = {name: i for i, name in enumerate(g.slots)}
+    best: tuple[float, tuple[int, int], m.LexEntry, str, list[int], Any] | None = None
     for entry, internal, weight in _relaxed_paths(
         session, surface, entries, lambda starts: free_order_graph(session, starts), name="free"
     ):
@@ -499,8 +501,9 @@ def morphotactics_finding(session: DebugSession, surface: str) -> MorphotacticsF
         brk = find_break(g, entry.klass, [session.affixes[i] for i in ids])
         if brk is None:
             continue
-        if best is None or brk.index > best[1]:
-            best = (round(weight, 5), brk.index, entry, internal, ids, brk)
+        rank = (brk.index, -order.get(brk.wanted, len(order)))
+        if best is None or rank > best[1]:
+            best = (round(weight, 5), rank, entry, internal, ids, brk)
     if best is not None:
         _, _, entry, internal, ids, brk = best
         lemma, _, _ = session.decode_internal(internal)
