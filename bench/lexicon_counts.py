@@ -2,7 +2,8 @@
 
 Each word of the wordfreq list (ranks 1 to 20,000 only; higher ranks are kept for evaluation and are
 never read) is analyzed without the guesser; its frequency (per billion words) is shared equally by
-the lemmas (lemma and part of speech) of its best-weighted analyses. The totals are written into the
+the lemmas (lemma and part of speech) of its best-weighted analyses, or, when the word is itself a
+postposition, conjunction or adverb of the lexicon, by those invariable readings. The totals are written into the
 ``count`` column of the language's lexicon files, which the compiler turns into tropical weights
 ``-ln(count / total)``: frequent lemmas then rank first among competing analyses. An entry whose words
 are not in the list gets half the smallest count seen (simple smoothing), so that a rare lexicon word
@@ -30,6 +31,7 @@ from morphfst.language.lexicon import lexicon_files  # noqa: E402
 from morphfst.language.syntax import parse_grammar_file  # noqa: E402
 
 DEV_RANKS = 20_000
+INVARIABLE = {"ADP", "CONJ", "ADV"}  # parts of speech whose word is its only form
 WORDFREQ_CODES = {"tur": "tr", "fin": "fi"}
 
 
@@ -42,7 +44,11 @@ def lemma_counts(lang: morphfst.Language, code: str) -> collections.Counter[tupl
         if not analyses:
             continue
         best = analyses[0].weight
-        lemmas = {(a.lemma, a.pos) for a in analyses if abs(a.weight - best) < 1e-6}
+        # a word that is itself an invariable lexicon word (a postposition, conjunction or adverb
+        # spelt like it) counts for that word: without it the first pass gives için to iç's genitive
+        # and en to the noun 'width', and the counts then keep them there
+        invariable = {(a.lemma, a.pos) for a in analyses if a.pos in INVARIABLE and a.lemma.lower() == word.lower()}
+        lemmas = invariable or {(a.lemma, a.pos) for a in analyses if abs(a.weight - best) < 1e-6}
         share = word_frequency(word, code) * 1e9 / len(lemmas)
         for key in lemmas:
             counts[key] += share
