@@ -44,15 +44,27 @@ def lemma_counts(lang: morphfst.Language, code: str) -> collections.Counter[tupl
         if not analyses:
             continue
         best = analyses[0].weight
-        # a word that is itself an invariable lexicon word (a postposition, conjunction or adverb
-        # spelt like it) counts for that word: without it the first pass gives için to iç's genitive
-        # and en to the noun 'width', and the counts then keep them there
-        invariable = {(a.lemma, a.pos) for a in analyses if a.pos in INVARIABLE and a.lemma.lower() == word.lower()}
-        lemmas = invariable or {(a.lemma, a.pos) for a in analyses if abs(a.weight - best) < 1e-6}
+        lemmas = _bare_readings(word, analyses) or {(a.lemma, a.pos) for a in analyses if abs(a.weight - best) < 1e-6}
         share = word_frequency(word, code) * 1e9 / len(lemmas)
         for key in lemmas:
             counts[key] += share
     return counts
+
+
+def _bare_readings(word: str, analyses: list[morphfst.Analysis]) -> set[tuple[str, str]]:
+    """When ``word`` is itself a postposition or adverb of the lexicon (or only a conjunction), the
+    lexicon words it is the bare form of (lemma spelt like it, no affix with a form) that take its
+    frequency. Without this the first pass gives için to iç's genitive and en to the noun 'width',
+    and the counts then keep them there. An adjective spelt like the adverb shares it (an adjective
+    is used as an adverb unchanged: doğru, başka); a noun or pronoun does not (sonra, çok, en); a
+    conjunction only when every bare reading is invariable (de; not ne, a pronoun first)."""
+    bare = {(a.lemma, a.pos) for a in analyses if a.lemma.lower() == word.lower() and not any(m.form for m in a.morphs[1:])}
+    kinds = {pos for _, pos in bare}
+    if kinds & {"ADP", "ADV"}:
+        return {(lemma, pos) for lemma, pos in bare if pos in ("ADP", "ADV", "ADJ") or (pos == "CONJ" and kinds <= INVARIABLE)}
+    if kinds and kinds <= INVARIABLE:
+        return bare
+    return set()
 
 
 def rewrite(path: Path, counts: collections.Counter[tuple[str, str]], floor: int) -> int:

@@ -416,6 +416,18 @@ def test_usual_reading_first(tur: morphfst.Language) -> None:
     # after a third-person possessive is -yIm, so arkadaşınım is not 'I am his friend' (common practice)
     assert tur.analyze("eviniz")[0].text == "ev N;SG;PSS2P;NOM"
     assert "arkadaş N;SG;PSS3S;NOM;1;SG" not in [a.text for a in tur.analyze("arkadaşınım")]
+    # function words before the inflected forms of other words spelt like them (common practice:
+    # için 'for' is far more frequent than iç 'inside' in the genitive; de 'also' than 'say!')
+    for word, best in [
+        ("için", "için ADP"),
+        ("de", "de CONJ"),
+        ("ile", "ile ADP"),
+        ("en", "en ADV"),
+        ("sonra", "sonra ADP"),
+        ("çok", "çok ADV"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    assert tur.analyze("ne")[0].text == "ne PRO;SG;NOM"
 
 
 def test_the_everyday_possessive_of_ayn_words_is_analyzed_not_generated(tur: morphfst.Language) -> None:
