@@ -415,6 +415,11 @@ REVIEWED = (
     # Kotus word list: hioa is type 52 like sanoa; its i-o is two syllables, not a diphthong
     # (hioi, hiotaan, hiottiin; not like juoda) — from memory
     + cells("hioa", "V", "NFIN=hioa IND;PST;3;SG=hioi PASS;IND;PRS=hiotaan PASS;IND;PST=hiottiin")
+    # Karlsson (3rd ed., 2018), the third infinitive's local cases take the third-person possessive
+    # as -Vn, like the second infinitive (tekemässään, tekemästään, tekemällään) — from memory
+    + cells("tehdä", "V", "NFIN;INF3;IN+ESS;PSS3S=tekemässään NFIN;INF3;IN+ABL;PSS3S=tekemästään NFIN;INF3;AT+ESS;PSS3S=tekemällään")
+    # Kotus word list: lyhyt compares as lyhyempi, lyhin (lyhyin beside it) — from memory
+    + cells("lyhyt", "ADJ", "SPRL;SG;NOM=lyhin SPRL;SG;GEN=lyhimmän CMPR;SG;NOM=lyhyempi")
 )
 
 ALL = PARADIGMS + VERBS + CELLS + INVERTED + REVIEWED
@@ -585,6 +590,9 @@ WRONG = [
     "velji",  # veli: the stem velje- has no nominative of its own — from memory
     "hioda",  # hioa — from memory
     "hoi",  # hioi — from memory
+    "kukaankaan",  # a pronoun that ends in a clitic takes no second one — common practice
+    "mitäänkään",
+    "jotakinkin",
 ]
 
 
