@@ -417,7 +417,9 @@ REVIEWED = (
     + cells("hioa", "V", "NFIN=hioa IND;PST;3;SG=hioi PASS;IND;PRS=hiotaan PASS;IND;PST=hiottiin")
     # Karlsson (3rd ed., 2018), the third infinitive's local cases take the third-person possessive
     # as -Vn, like the second infinitive (tekemässään, tekemästään, tekemällään) — from memory
-    + cells("tehdä", "V", "NFIN;INF3;IN+ESS;PSS3S=tekemässään NFIN;INF3;IN+ABL;PSS3S=tekemästään NFIN;INF3;AT+ESS;PSS3S=tekemällään")
+    + cells(
+        "tehdä", "V", "NFIN;INF3;IN+ESS;PSS3S=tekemässään NFIN;INF3;IN+ABL;PSS3S=tekemästään NFIN;INF3;AT+ESS;PSS3S=tekemällään"
+    )
     # Kotus word list: lyhyt compares as lyhyempi, lyhin (lyhyin beside it) — from memory
     + cells("lyhyt", "ADJ", "SPRL;SG;NOM=lyhin SPRL;SG;GEN=lyhimmän CMPR;SG;NOM=lyhyempi")
 )
