@@ -428,6 +428,12 @@ def test_usual_reading_first(tur: morphfst.Language) -> None:
     ]:
         assert tur.analyze(word)[0].text == best, word
     assert tur.analyze("ne")[0].text == "ne PRO;SG;NOM"
+    # an adjective with the copula before the same adjective with a possessive (hazırım 'I am
+    # ready'), the copula after a voicing stem (büyüğüm 'I am big'), and -mAktAdIr as the progressive
+    # with -DIr (G&K ch. 12 and 21 — from memory)
+    assert tur.analyze("hazırım")[0].text == "hazır ADJ;SG;NOM;1;SG"
+    assert tur.analyze("büyüğüm")[0].text == "büyük ADJ;SG;NOM;1;SG"
+    assert tur.analyze("yapmaktadır")[0].text == "yapmak V;PROG;3;SG;ASSR"
 
 
 def test_the_everyday_possessive_of_ayn_words_is_analyzed_not_generated(tur: morphfst.Language) -> None:
