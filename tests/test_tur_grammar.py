@@ -352,6 +352,10 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         # the copula after a third-person possessive keeps its buffer y (G&K ch. 12 — from memory)
         ("arkadaş", "N;SG;PSS3S;NOM;1;SG", "arkadaşıyım"),
         ("arkadaş", "N;SG;PSS3S;NOM;1;PL", "arkadaşıyız"),
+        # sepet keeps its t (sepeti); the diminutives küçücük, kısacık voice like küçük (from memory)
+        ("sepet", "N;SG;ACC", "sepeti"),
+        ("küçücük", "ADJ;SG;ACC", "küçücüğü"),
+        ("kısacık", "ADJ;SG;NOM", "kısacık"),
     ],
 }
 
