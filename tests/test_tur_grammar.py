@@ -353,6 +353,9 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("arkadaş", "N;SG;PSS3S;NOM;1;SG", "arkadaşıyım"),
         ("arkadaş", "N;SG;PSS3S;NOM;1;PL", "arkadaşıyız"),
         # sepet keeps its t (sepeti); the diminutives küçücük, kısacık voice like küçük (from memory)
+        # o, bu, şu: the instrumental on the genitive (G&K ch. 18 — from memory)
+        ("bu", "PRO;SG;INS", "bununla"),
+        ("o", "PRO;SG;INS", "onunla"),
         ("sepet", "N;SG;ACC", "sepeti"),
         ("küçücük", "ADJ;SG;ACC", "küçücüğü"),
         ("kısacık", "ADJ;SG;NOM", "kısacık"),
@@ -403,6 +406,8 @@ REJECTED = [
     "diyip",  # demek keeps its e before -(y)Ip (deyip)
     "yeyip",  # yemek raises it (yiyip)
     "sumuz",  # su's possessive keeps y and the link vowel (suyumuz)
+    "buyla",  # bununla
+    "şuyla",  # şununla
 ]
 
 
