@@ -3,7 +3,8 @@
 Each word of the wordfreq list (ranks 1 to 20,000 only; higher ranks are kept for evaluation and are
 never read) is analyzed without the guesser; its frequency (per billion words) is shared equally by
 the lemmas (lemma and part of speech) of its best-weighted analyses, or, when the word is itself a
-postposition, conjunction or adverb of the lexicon, by those invariable readings. The totals are written into the
+postposition or adverb of the lexicon (or only a conjunction), by those readings (see
+:func:`_bare_readings`). The totals are written into the
 ``count`` column of the language's lexicon files, which the compiler turns into tropical weights
 ``-ln(count / total)``: frequent lemmas then rank first among competing analyses. An entry whose words
 are not in the list gets half the smallest count seen (simple smoothing), so that a rare lexicon word
@@ -32,6 +33,7 @@ from morphfst.language.syntax import parse_grammar_file  # noqa: E402
 
 DEV_RANKS = 20_000
 INVARIABLE = {"ADP", "CONJ", "ADV"}  # parts of speech whose word is its only form
+CARRIERS = {"ADP", "ADV"}  # a word that is one of these counts for its bare readings
 WORDFREQ_CODES = {"tur": "tr", "fin": "fi"}
 
 
@@ -60,8 +62,8 @@ def _bare_readings(word: str, analyses: list[morphfst.Analysis]) -> set[tuple[st
     conjunction only when every bare reading is invariable (de; not ne, a pronoun first)."""
     bare = {(a.lemma, a.pos) for a in analyses if a.lemma.lower() == word.lower() and not any(m.form for m in a.morphs[1:])}
     kinds = {pos for _, pos in bare}
-    if kinds & {"ADP", "ADV"}:
-        return {(lemma, pos) for lemma, pos in bare if pos in ("ADP", "ADV", "ADJ") or (pos == "CONJ" and kinds <= INVARIABLE)}
+    if kinds & CARRIERS:
+        return {(lemma, pos) for lemma, pos in bare if pos in CARRIERS | {"ADJ"} or (pos == "CONJ" and kinds <= INVARIABLE)}
     if kinds and kinds <= INVARIABLE:
         return bare
     return set()

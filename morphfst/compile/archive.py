@@ -182,18 +182,14 @@ class Glosses(Mapping[tuple[str, str], str]):
         self._finds = 0
 
     def __getitem__(self, key: tuple[str, str]) -> str:
-        gloss = self._found.get(key)
-        if gloss is not None or self._parsed:
-            if gloss is None:
-                raise KeyError(key)
-            return gloss
+        if key in self._found or self._parsed:
+            return self._found[key]
         self._finds += 1
         if self._finds > self.FINDS:
             self._parse()
             return self._found[key]
-        lemma, pos = key
-        head = f"\n{lemma}\t{pos}\t"
-        at = self._text.find(head) if "\t" not in lemma + pos and "\n" not in lemma + pos else -1
+        head = "\n{}\t{}\t".format(*key)
+        at = self._text.find(head) if head.count("\t") == 2 and head.count("\n") == 1 else -1
         if at < 0:
             raise KeyError(key)
         start = at + len(head)
