@@ -24,7 +24,7 @@ from pathlib import Path
 
 from ..build import load
 from ..compile.compiler import Compiler
-from ..compile.fstutil import acc, union
+from ..compile.fstutil import strings
 from ..compile.loader import load_model
 from ..compile.metadata import build_metadata
 from ..language import model as m
@@ -172,7 +172,7 @@ def _short_cells(filler: CellFiller, lang: Language, klass: str, pos: str, max_t
     index: dict[str, int] = {}
     for i, t in enumerate(templates):
         index.setdefault(filler.encode(t), i)
-    return Shape(templates, union(acc(code) for code in index).optimize(), index)
+    return Shape(templates, strings(index), index)
 
 
 def _sample_forms(grammar: m.Grammar, entries: list[m.LexEntry], rng: random.Random, max_tags: int = 4) -> dict[str, int]:

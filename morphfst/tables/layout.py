@@ -324,7 +324,8 @@ def arrange(paradigm: Paradigm, meta: dict[str, Any], override: LayoutSpec | Non
         remaining = values
         for spec in specs:
             taken = [(v, c) for v, c in remaining if all(v.get(index.get(f, "")) == f for f in spec.fixed)]
-            remaining = [(v, c) for v, c in remaining if not any(c is t for _, t in taken)]
+            taken_ids = {id(c) for _, c in taken}
+            remaining = [(v, c) for v, c in remaining if id(c) not in taken_ids]
             if taken:
                 sections.append(_section(title, stem, pos, citation, spec, taken, inventory))
         if remaining:
@@ -443,17 +444,25 @@ def _section(
     for v, cell in values:
         key = (tuple(v.get(d) for d in tables), tuple(v.get(d) for d in rows), tuple(v.get(d) for d in columns))
         lookup.setdefault(key, cell)
+    # the cells of each sub-table; sub-tables in the order of the product of their dimensions' values
+    # (only those with cells: the product of many dimensions is far larger than the cells there are)
+    by_table: dict[Key, dict[tuple[Key, Key], Cell]] = {}
+    for (t, r, c), cell in lookup.items():
+        by_table.setdefault(t, {})[(r, c)] = cell
+    rank = [{v: i for i, v in enumerate(present[d])} for d in tables]
     grids: list[Grid] = []
-    for tkey in itertools.product(*(present[d] for d in tables)):
+    for tkey in sorted(by_table, key=lambda t: tuple(order[v] for order, v in zip(rank, t))):
+        here = by_table[tkey]
         if spec.listing:
-            all_rows = list(dict.fromkeys(r for (t, r, _) in lookup if t == tkey))
+            all_rows = list(dict.fromkeys(r for r, _ in here))
         else:
             all_rows = list(itertools.product(*(present[d] for d in rows)))
-        rkeys = [r for r in all_rows if any((tkey, r, c) in lookup for c in _all(present, columns))]
-        ckeys = [c for c in _all(present, columns) if any((tkey, r, c) in lookup for r in rkeys)]
+        all_columns = _all(present, columns)
+        rkeys = [r for r in all_rows if any((r, c) in here for c in all_columns)]
+        ckeys = [c for c in all_columns if any((r, c) in here for r in rkeys)]
         if not rkeys or not ckeys:
             continue
-        grid_cells = [[lookup.get((tkey, r, c)) for c in ckeys] for r in rkeys]
+        grid_cells = [[here.get((r, c)) for c in ckeys] for r in rkeys]
         # a value labelled "" (e.g. 'label Mood.none ""') is left out of the title
         gtitle = ", ".join(x for x in (spec.value_label(d, val) for d, val in zip(tables, tkey)) if x)
         grids.append(

@@ -33,7 +33,7 @@ from typing import Any
 
 import pynini
 
-from ..compile.fstutil import ACYCLIC, TOKEN, acc, is_empty, union
+from ..compile.fstutil import ACYCLIC, TOKEN, acc, is_empty, strings
 from ..errors import Position, UserError
 from ..language import model as m
 from ..language.normalize import restore_case
@@ -381,7 +381,7 @@ class CellFiller:
             index: dict[str, int] = {}
             for i, t in enumerate(templates):
                 index.setdefault(self.encode(t), i)
-            trie = union(acc(code) for code in index).optimize() if index else pynini.Fst()
+            trie = strings(index) if index else pynini.Fst()
             found = self._shapes[key] = Shape(templates, trie, index)
         return found
 

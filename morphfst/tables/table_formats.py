@@ -11,6 +11,7 @@ data.
 from __future__ import annotations
 
 import csv
+import functools
 import html
 import io
 import json
@@ -55,8 +56,12 @@ def cell_lines(cell: Cell | None) -> list[str]:
     return [v.form if v.preferred else f"({v.form})" for v in cell.forms]
 
 
+@functools.lru_cache(maxsize=1 << 16)
 def display_width(text: str) -> int:
-    """Terminal columns taken by ``text`` (combining marks take none, wide characters two)."""
+    """Terminal columns taken by ``text`` (combining marks take none, wide characters two; Unicode
+    East Asian Width). Memoized: a table measures the same labels and forms many times."""
+    if text.isascii():
+        return len(text)
     width = 0
     for ch in text:
         if unicodedata.combining(ch):
