@@ -422,6 +422,23 @@ REVIEWED = (
     )
     # Kotus word list: lyhyt compares as lyhyempi, lyhin (lyhyin beside it) — from memory
     + cells("lyhyt", "ADJ", "SPRL;SG;NOM=lyhin SPRL;SG;GEN=lyhimmän CMPR;SG;NOM=lyhyempi")
+    # Kotus word list: types 48 and 15 have the plural illative -isiin, listed first (huoneisiin,
+    # korkeisiin), and -ihin beside it (see VARIANTS) — from memory
+    + cells("huone", "N", "PL;IN+ALL=huoneisiin")
+    + cells("korkea", "ADJ", "PL;IN+ALL=korkeisiin PL;IN+ALL;PSS3S=korkeisiinsa")
+    + cells("tärkeä", "ADJ", "PL;IN+ALL=tärkeisiin")
+    # Karlsson (3rd ed., 2018), the pronouns: mikään and kukaan have the plural nominatives mitkään,
+    # ketkään; jompikumpi declines both its parts — from memory
+    + cells("mikään", "PRON", "PL;NOM=mitkään")
+    + cells("kukaan", "PRON", "PL;NOM=ketkään")
+    + cells(
+        "jompikumpi",
+        "PRON",
+        "SG;NOM=jompikumpi SG;GEN=jommankumman SG;PRT=jompaakumpaa SG;IN+ESS=jommassakummassa "
+        "SG;IN+ALL=jompaankumpaan SG;AT+ESS=jommallakummalla SG;AT+ALL=jommallekummalle SG;TRANS=jommaksikummaksi",
+    )
+    # Karlsson (3rd ed., 2018), verb type 1 (Kotus 52): seisoa as sanoa (seison, seisoo, seisoi) — from memory
+    + cells("seisoa", "V", "IND;PRS;1;SG=seison IND;PRS;3;SG=seisoo IND;PST;3;SG=seisoi NFIN=seisoa")
 )
 
 ALL = PARADIGMS + VERBS + CELLS + INVERTED + REVIEWED
@@ -458,6 +475,24 @@ VARIANTS = [
     ("tupakoida", "V;IND;PST;3;SG", ["tupakoi", "tupakoitsi"]),
     ("tupakoida", "V;COND;3;SG", ["tupakoisi", "tupakoitsisi"]),
     ("tupakoida", "V;V.PTCP;ACT;PRS;ADJ;SG;NOM", ["tupakoiva", "tupakoitseva"]),
+    # Kotus word list: types 48 and 15, the plural illative -isiin ~ -ihin — from memory
+    ("huone", "N;PL;IN+ALL", ["huoneisiin", "huoneihin"]),
+    ("sade", "N;PL;IN+ALL", ["sateisiin", "sateihin"]),
+    ("korkea", "ADJ;PL;IN+ALL", ["korkeisiin", "korkeihin"]),
+    # Kotus word list: type 49 (askel ~ askele) declines on the stem askele- of type 32 and on the long
+    # stem askelee- of type 48 — from memory; the short stem first, as the word list's headword
+    ("askel", "N;SG;GEN", ["askelen", "askeleen"]),
+    ("askel", "N;PL;NOM", ["askelet", "askeleet"]),
+    ("askel", "N;PL;PRT", ["askelia", "askeleita"]),
+    ("askel", "N;PL;IN+ALL", ["askeliin", "askeleisiin", "askeleihin"]),
+    ("taival", "N;SG;AT+ESS", ["taipalella", "taipaleella"]),
+    # common practice (standard written Finnish): seisoa has a second stem seis- in the infinitives,
+    # the passive and the past participles (seistä, seistään, seissyt) beside seiso- (seisoa,
+    # seisotaan, seisonut) — from memory; the headword's stem first
+    ("seisoa", "V;NFIN", ["seisoa", "seistä"]),
+    ("seisoa", "V;PASS;IND;PRS", ["seisotaan", "seistään"]),
+    ("seisoa", "V;V.PTCP;ACT;PST;ADJ;SG;NOM", ["seisonut", "seissyt"]),
+    ("seisoa", "V;NFIN;INF2;IN+ESS", ["seisoessa", "seistessä"]),
 ]
 
 
@@ -469,6 +504,16 @@ SINGLE = [
     ("tupakoida", "V;NFIN", ["tupakoida"]),
     ("murtaa", "V;IND;PST;3;SG", ["mursi"]),
     ("soutaa", "V;IND;PRS;1;SG", ["soudan"]),
+    # common practice: type 49 uses the short stem in the nominative and partitive (askel, askelta;
+    # the word list's askele, askeletta are rare and not generated), and seisoa's finite active forms
+    # have only the stem seiso- — from memory
+    ("askel", "N;SG;PRT", ["askelta"]),
+    ("askel", "N;SG;NOM", ["askel"]),
+    ("seisoa", "V;IND;PRS;3;SG", ["seisoo"]),
+    ("seisoa", "V;IND;PST;3;SG", ["seisoi"]),
+    ("seisoa", "V;IMP;2;PL", ["seisokaa"]),
+    # Kotus word list: type 17 has only -isiin (vapaisiin) — from memory
+    ("vapaa", "ADJ;PL;IN+ALL", ["vapaisiin"]),
 ]
 
 
@@ -516,6 +561,26 @@ BEST = [
     ("ajo", "ajo N;SG;NOM"),  # aikoa's connegative is aio
     ("jotakin", "jokin PRON;SG;PRT"),  # the indefinite pronoun, not joka with -kin
     ("kenellekään", "kukaan PRON;SG;AT+ALL"),
+    # a lexicon word without a clitic before a particle with one: the pronoun jokin, not jo + -kin;
+    # kaikin (tavoin) is kaikki's instructive; the question -kO before the imperative connegative
+    ("jokin", "jokin PRON;SG;NOM"),
+    ("kaikin", "kaikki PRON;PL;INS"),
+    ("mihinkään", "mikään PRON;SG;IN+ALL"),
+    ("saako", "saada V;IND;PRS;3;SG;KO"),
+    ("käykö", "käydä V;IND;PRS;3;SG;KO"),
+    # the ordinal's partitive before the cardinal's rare abessive
+    ("neljättä", "neljäs NUM;SG;PRT"),
+    ("viidettä", "viides NUM;SG;PRT"),
+    # the pronoun te before tie's plural (roads)
+    ("teille", "te PRON;PL;AT+ALL"),
+    ("teitä", "te PRON;PL;PRT"),
+    ("teillä", "te PRON;PL;AT+ESS"),
+    # type 49: the long stem's genitive before the short stem's illative spelt alike
+    ("askeleen", "askel N;SG;GEN"),
+    ("mantereen", "manner N;SG;GEN"),
+    ("mantereella", "manner N;SG;AT+ESS"),
+    ("seistä", "seisoa V;NFIN"),
+    ("jommankumman", "jompikumpi PRON;SG;GEN"),
 ]
 
 
@@ -592,6 +657,10 @@ WRONG = [
     "velji",  # veli: the stem velje- has no nominative of its own — from memory
     "hioda",  # hioa — from memory
     "hoi",  # hioi — from memory
+    "seisen",  # seison: seisoa's stem seis- has no vowel-stem forms — common practice, from memory
+    "seiskää",  # seisokaa — common practice, from memory
+    "askeleeton",  # askeleton: the caritive is on the short stem — common practice, from memory
+    "askeletten",  # askelten: the -ten genitive is on the consonant stem — from memory
     "kukaankaan",  # a pronoun that ends in a clitic takes no second one — common practice
     "mitäänkään",
     "jotakinkin",
