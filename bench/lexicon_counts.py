@@ -3,8 +3,8 @@
 Each word of the wordfreq list (ranks 1 to 20,000 only; higher ranks are kept for evaluation and are
 never read) is analyzed without the guesser; its frequency (per billion words) is shared equally by
 the lemmas (lemma and part of speech) of its best-weighted analyses, or, when the word is itself a
-postposition or adverb of the lexicon (or only a conjunction), by those readings (see
-:func:`_bare_readings`). The totals are written into the
+postposition or adverb of the lexicon (or only a conjunction), by those readings, and when it is
+the citation form of other lexicon entries, by the best of those (see :func:`_bare_readings`). The totals are written into the
 ``count`` column of the language's lexicon files, which the compiler turns into tropical weights
 ``-ln(count / total)``: frequent lemmas then rank first among competing analyses. An entry whose words
 are not in the list gets half the smallest count seen (simple smoothing), so that a rare lexicon word
@@ -34,6 +34,7 @@ from morphfst.language.syntax import parse_grammar_file  # noqa: E402
 DEV_RANKS = 20_000
 INVARIABLE = {"ADP", "CONJ", "ADV"}  # parts of speech whose word is its only form
 CARRIERS = {"ADP", "ADV"}  # a word that is one of these counts for its bare readings
+NAMES = {"PROPN"}  # the word list is lowercased: a bare name reading (doğan, yaşar) is no evidence
 WORDFREQ_CODES = {"tur": "tr", "fin": "fi"}
 
 
@@ -59,13 +60,23 @@ def _bare_readings(word: str, analyses: list[morphfst.Analysis]) -> set[tuple[st
     frequency. Without this the first pass gives için to iç's genitive and en to the noun 'width',
     and the counts then keep them there. An adjective spelt like the adverb shares it (an adjective
     is used as an adverb unchanged: doğru, başka); a noun or pronoun does not (sonra, çok, en); a
-    conjunction only when every bare reading is invariable (de; not ne, a pronoun first)."""
-    bare = {(a.lemma, a.pos) for a in analyses if a.lemma.lower() == word.lower() and not any(m.form for m in a.morphs[1:])}
+    conjunction only when every bare reading is invariable (de; not ne, a pronoun first). Any other
+    word that is the citation form of lexicon entries (a noun's nominative, a verb's infinitive)
+    counts for the best-weighted of them, not for a form of another word spelt alike: without it
+    var went to varmak's imperative, kaç to kaçmak's, çalışma to the verbal noun, and such entries
+    kept the smallest count for good. Proper names are left out (the list is lowercased)."""
+    readings = [a for a in analyses if a.lemma.lower() == word.lower() and not any(m.form for m in a.morphs[1:])]
+    bare = {(a.lemma, a.pos) for a in readings}
     kinds = {pos for _, pos in bare}
     if kinds & CARRIERS:
         return {(lemma, pos) for lemma, pos in bare if pos in CARRIERS | {"ADJ"} or (pos == "CONJ" and kinds <= INVARIABLE)}
     if kinds and kinds <= INVARIABLE:
         return bare
+    # a lexicon word's citation form (a noun's nominative, a verb's infinitive) counts for it
+    common = [a for a in analyses if a.lemma.lower() == word.lower() and a.pos not in NAMES]
+    if common:
+        best = min(a.weight for a in common)
+        return {(a.lemma, a.pos) for a in common if abs(a.weight - best) < 1e-6}
     return set()
 
 
