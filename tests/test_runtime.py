@@ -132,3 +132,20 @@ def test_unknown_language_name() -> None:
     with pytest.raises(UserError) as info:
         morphfst.load("klingon")
     assert "tur" in (info.value.hint or "")
+
+
+def test_a_word_without_capitals_reads_as_a_name_last(fin: morphfst.Language) -> None:
+    """kiveä is the partitive of kivi 'stone' and of the name Kivi (both in the lexicon, equally
+    frequent): written without capitals the name weighs ln 10 more and comes second; capitalized,
+    both readings keep their weights. The composed path ranks the same way, and a word that is only
+    a name keeps its reading."""
+    from morphfst.runtime.walk import LOWER_CASE_NAME_WEIGHT
+
+    lower, upper = fin.analyze("kiveä"), fin.analyze("Kiveä")
+    assert lower[0].text == "kivi N;SG;PRT"
+    name_lower = next(a for a in lower if a.lemma == "Kivi")
+    name_upper = next(a for a in upper if a.lemma == "Kivi")
+    assert name_lower.weight == pytest.approx(name_upper.weight + LOWER_CASE_NAME_WEIGHT)
+    assert next(a for a in upper if a.lemma == "kivi").weight == pytest.approx(lower[0].weight)
+    assert [(a.text, round(a.weight, 5)) for a in fin.analyze_composed("kiveä")] == [(a.text, round(a.weight, 5)) for a in lower]
+    assert fin.analyze("helsingissä")[0].lemma == "Helsinki"

@@ -101,12 +101,12 @@ class Language:
         surface = self.normalize(word)
         if not self.acceptable(surface):
             return ()
-        found = self._composed_surface(surface)
+        found = self._composed_surface(surface, word)
         if not found and HYPHEN in surface:
             return tuple(hyphenated(surface, word, self._composed_surface))
         return found
 
-    def _composed_surface(self, surface: str) -> tuple[Analysis, ...]:
+    def _composed_surface(self, surface: str, written: str | None = None) -> tuple[Analysis, ...]:
         if not self.acceptable(surface):
             return ()
         found: list[tuple[str, str, float]] = []
@@ -114,7 +114,7 @@ class Language:
             lattice = pynini.compose(acc(bounded), self.fsts["bounded"])
             found.extend((bounded, internal, weight) for _, internal, weight in paths(lattice, MAX_PATHS))
         # the same decoding, deduplication and ranking as the arc walk: only the path search differs
-        return tuple(self.fast.decode_all(surface, found))
+        return tuple(self.fast.decode_all(surface, found, False, written))
 
     def acceptable(self, surface: str) -> bool:
         """False for words the transducers cannot read: empty, too long, or using reserved code points."""

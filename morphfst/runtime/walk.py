@@ -15,6 +15,7 @@ semiring: weights add, lower is better).
 from __future__ import annotations
 
 import heapq
+import math
 import re
 from collections.abc import Callable, Iterable, Mapping
 from dataclasses import MISSING, fields
@@ -71,6 +72,11 @@ MAX_SETS = 200_000  # sets of states remembered before the subset automaton is s
 MAX_GUESSES = 10  # guessed analyses kept per word
 MAX_PATHS = 200  # paths read from one walk
 MAX_GUESS_LENGTH = 60  # longer words get no guess (they are rarely words, and guessing grows with length)
+# A word written without capitals is a proper name rarely: an analysis whose lemma is capitalized
+# (a name, Kivi) weighs ln 10 more for it than for the same word capitalized (the estimate that a
+# lower-case token spelt like a name is the name about one time in ten is from memory), so that
+# kiveä reads as the noun kivi first and Kiveä as either; words without another reading keep theirs.
+LOWER_CASE_NAME_WEIGHT = math.log(10)
 
 
 class ArcWalker:
@@ -520,7 +526,7 @@ class FastAnalyzer:
         surface = self.lang.normalize(word)
         if not self.lang.acceptable(surface):
             return []
-        found = self.decode_all(surface, self.bounded.walk(surface, limit), False)
+        found = self.decode_all(surface, self.bounded.walk(surface, limit), False, word)
         if not found and HYPHEN in surface:
             found = hyphenated(surface, word, self._analyze_part)
         if not found and guess:
@@ -556,6 +562,18 @@ class FastAnalyzer:
     def decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool = False) -> Analysis:
         """One :class:`Analysis` from a walked or composed path, through precomputed tables."""
         return self._decode(surface, internal, bounded, weight, guessed)[0]
+
+    def _lower_case_names(self, walked: list[tuple[str, str, float]]) -> list[tuple[str, str, float]]:
+        """The paths with :data:`LOWER_CASE_NAME_WEIGHT` added where the lemma (the analysis before the
+        part of speech) starts with a capital; a compound's lemma starts with its first part as
+        written, so compounds are left as they are."""
+        seam = self.seam
+        return [
+            (bounded, internal, weight + LOWER_CASE_NAME_WEIGHT)
+            if internal[:1].isupper() and not (seam and seam in internal)
+            else (bounded, internal, weight)
+            for bounded, internal, weight in walked
+        ]
 
     def _decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool) -> tuple[Analysis, Key | None]:
         """:meth:`decode`, with the analysis's (text, segmentation) when the tables give it for free
@@ -666,10 +684,17 @@ class FastAnalyzer:
             out.append(morph)
         return tuple(out)
 
-    def decode_all(self, surface: str, walked: list[tuple[str, str, float]], guessed: bool = False) -> list[Analysis]:
-        """Decoded analyses of (bounded surface, internal analysis, weight) paths, deduplicated and ranked."""
+    def decode_all(
+        self, surface: str, walked: list[tuple[str, str, float]], guessed: bool = False, written: str | None = None
+    ) -> list[Analysis]:
+        """Decoded analyses of (bounded surface, internal analysis, weight) paths, deduplicated and ranked.
+
+        ``written`` is the word as written: when it has no capitals, readings with a capitalized lemma
+        weigh :data:`LOWER_CASE_NAME_WEIGHT` more."""
         if not walked:
             return []
+        if written is not None and len(walked) > 1 and written.islower():
+            walked = self._lower_case_names(walked)
         seam = self.seam
         if seam and len(walked) > 1:
             # a word the lexicon spells needs no compound reading: compounds are for the words it lacks
