@@ -38,7 +38,7 @@ from typing import Any
 
 from ..errors import Position, UserError
 from ..runtime.compiled_language import Language
-from .paradigm import Cell, Paradigm, make_bound, paradigms, trial_paradigm
+from .paradigm import Cell, Paradigm, make_bound, paradigms, rank_forms, trial_paradigm
 
 MAX_DEFAULT_COLUMNS = 4
 LISTING_MAX_CELLS = 3  # a group of this few cells is listed, one row per cell
@@ -443,7 +443,9 @@ def _section(
     lookup: dict[tuple[Key, Key, Key], Cell] = {}
     for v, cell in values:
         key = (tuple(v.get(d) for d in tables), tuple(v.get(d) for d in rows), tuple(v.get(d) for d in columns))
-        lookup.setdefault(key, cell)
+        kept = lookup.get(key)
+        # cells with the same values in another affix order (gelmiştirler, gelmişlerdir) share a place
+        lookup[key] = cell if kept is None else _merged(kept, cell)
     # the cells of each sub-table; sub-tables in the order of the product of their dimensions' values
     # (only those with cells: the product of many dimensions is far larger than the cells there are)
     by_table: dict[Key, dict[tuple[Key, Key], Cell]] = {}
@@ -481,6 +483,19 @@ def _section(
     heading = spec.title if spec.origin == "declared" or (spec.origin == "derived" and spec.title not in ("", pos)) else ""
     full = " — ".join(x for x in (title, heading) if x)
     return Section(full, stem, pos, citation, spec, grids, note)
+
+
+def _merged(kept: Cell, other: Cell) -> Cell:
+    """One cell with the forms of two cells that a layout puts in one place, ranked together (the
+    first cell's labels name it)."""
+    if not other.forms:
+        return kept
+    if not kept.forms:
+        return Cell(kept.lemma, kept.template, list(other.forms))
+    weights: dict[str, float] = {}
+    for variant in (*kept.forms, *other.forms):
+        weights[variant.form] = min(variant.weight, weights.get(variant.form, variant.weight))
+    return Cell(kept.lemma, kept.template, rank_forms(weights))
 
 
 def _joined(spec: LayoutSpec, dims: list[str], key: Key) -> str:
