@@ -581,6 +581,25 @@ BEST = [
     ("mantereella", "manner N;SG;AT+ESS"),
     ("seistä", "seisoa V;NFIN"),
     ("jommankumman", "jompikumpi PRON;SG;GEN"),
+    # common practice, from memory: lexicalized particles before a particle with a clitic spelt
+    # alike (jopa 'even', not jo + -pA; ainakin 'at least'; joko 'either'); a conjunction takes a
+    # clitic rarely (kunhan, josko, vaikkakin are words of their own; kunkin is kukin's genitive)
+    # and ja none (jako 'division')
+    ("jopa", "jopa ADV"),
+    ("ainakin", "ainakin ADV"),
+    ("ainakaan", "ainakaan ADV"),
+    ("varsinkin", "varsinkin ADV"),
+    ("joko", "joko CONJ"),
+    ("kunhan", "kunhan CONJ"),
+    ("josko", "josko CONJ"),
+    ("vaikkakin", "vaikkakin CONJ"),
+    ("kunkin", "kukin PRON;SG;GEN"),
+    ("jako", "jako N;SG;NOM"),
+    # common practice, from memory: the verb, the noun and the pronoun before a rare uninflected
+    # word spelt alike (voi 'oh', aika 'quite'); mitä is mikä's partitive
+    ("voi", "voida V;IND;PRS;3;SG"),
+    ("aika", "aika N;SG;NOM"),
+    ("mitä", "mikä PRON;SG;PRT"),
 ]
 
 
