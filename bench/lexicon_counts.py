@@ -43,7 +43,7 @@ def lemma_counts(lang: morphfst.Language, code: str) -> collections.Counter[tupl
 
     counts: collections.Counter[tuple[str, str]] = collections.Counter()
     for word in top_n_list(code, DEV_RANKS):
-        analyses = lang.analyze(word)
+        analyses = lang.fast.analyze(word, cased=False)  # the list is lower-cased: a name is no rarer for it
         if not analyses:
             continue
         best = analyses[0].weight

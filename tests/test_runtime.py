@@ -149,3 +149,6 @@ def test_a_word_without_capitals_reads_as_a_name_last(fin: morphfst.Language) ->
     assert next(a for a in upper if a.lemma == "kivi").weight == pytest.approx(lower[0].weight)
     assert [(a.text, round(a.weight, 5)) for a in fin.analyze_composed("kiveä")] == [(a.text, round(a.weight, 5)) for a in lower]
     assert fin.analyze("helsingissä")[0].lemma == "Helsinki"
+    # a word list that is lower-cased throughout (the lexicon counts' source) says nothing of capitals
+    blind = fin.fast.analyze("kiveä", cased=False)
+    assert next(a for a in blind if a.lemma == "Kivi").weight == pytest.approx(name_upper.weight)

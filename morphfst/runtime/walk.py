@@ -521,12 +521,15 @@ class FastAnalyzer:
             self._guesser = ArcWalker(self.lang.arcs("guesser"), skip=[self.lang.plus]) if has else None
         return self._guesser  # type: ignore[return-value]
 
-    def analyze(self, word: str, guess: bool = False, limit: int = MAX_PATHS) -> list[Analysis]:
-        """Every analysis of ``word``, best first; with ``guess``, guessed ones when the lexicon has none."""
+    def analyze(self, word: str, guess: bool = False, limit: int = MAX_PATHS, cased: bool = True) -> list[Analysis]:
+        """Every analysis of ``word``, best first; with ``guess``, guessed ones when the lexicon has none.
+
+        ``cased=False`` says the word's capitals are not known (a lower-cased word list): names then
+        weigh what they weigh for a capitalized word (no :data:`LOWER_CASE_NAME_WEIGHT`)."""
         surface = self.lang.normalize(word)
         if not self.lang.acceptable(surface):
             return []
-        found = self.decode_all(surface, self.bounded.walk(surface, limit), False, word)
+        found = self.decode_all(surface, self.bounded.walk(surface, limit), False, word if cased else None)
         if not found and HYPHEN in surface:
             found = hyphenated(surface, word, self._analyze_part)
         if not found and guess:
