@@ -427,6 +427,10 @@ REJECTED = [
     "sumuz",  # su's possessive keeps y and the link vowel (suyumuz)
     "buyla",  # bununla
     "şuyla",  # şununla
+    "yeraldı",  # a compound ending in a one-syllable noun keeps its stop (yeraltı: alt-ı)
+    "gözaldında",
+    "katalogu",  # a loan in -og of two syllables softens its g (kataloğu; TDK spelling, from memory)
+    "psikologa",
 ]
 
 
@@ -568,3 +572,20 @@ def test_inflected_forms_cost_a_realistic_share(tur: morphfst.Language) -> None:
     assert best["geliştirdi"] == "geliştirmek V;PST;3;SG"
     # kitabı keeps the accusative first, the 3rd person possessive second (common practice)
     assert [a.text for a in tur.analyze("kitabı")][:2] == ["kitap N;SG;ACC", "kitap N;SG;PSS3S;NOM"]
+
+
+def test_compounds_keep_a_voiceless_stop_and_loans_soften_g(tur: morphfst.Language) -> None:
+    # yeraltı 'underground', gözaltı 'custody': compounds on alt 'bottom' + possessive, whose t does
+    # not voice (alt: altı), inflect on that stem (G&K ch. 10, compounds with the possessive — from
+    # memory)
+    assert tur.analyze("yeraltında")[0].text == "yeraltı N;SG;LOC"
+    assert tur.analyze("gözaltına")[0].text == "gözaltı N;SG;DAT"
+    assert [f.form for f in tur.generate("yeraltı", "N;PL;NOM")][:1] == ["yeraltları"]
+    # katalog, diyalog, psikolog: the final g becomes ğ before a vowel (kataloğu, diyaloğa); a word of
+    # one syllable keeps it (lig: ligi) (TDK spelling dictionary entries 'katalog, -ğu', 'lig, -gi' — from memory)
+    assert tur.analyze("kataloğu")[0].lemma == "katalog"
+    assert [f.form for f in tur.generate("diyalog", "N;SG;DAT")][:1] == ["diyaloğa"]
+    assert [f.form for f in tur.generate("lig", "N;SG;ACC")][:1] == ["ligi"]
+    # colloquial spellings of bura-da, ora-da, nere-de are words of their own in informal text
+    # (common practice), with the copula (burdayım 'I am here')
+    assert tur.analyze("burdayım")[0].text == "burda ADV;1;SG"
