@@ -452,14 +452,12 @@ def _section(
     for (t, r, c), cell in lookup.items():
         by_table.setdefault(t, {})[(r, c)] = cell
     rank = [{v: i for i, v in enumerate(present[d])} for d in tables]
+    every_row = _all(present, rows)
+    all_columns = _all(present, columns)
     grids: list[Grid] = []
     for tkey in sorted(by_table, key=lambda t: tuple(order[v] for order, v in zip(rank, t))):
         here = by_table[tkey]
-        if spec.listing:
-            all_rows = list(dict.fromkeys(r for r, _ in here))
-        else:
-            all_rows = list(itertools.product(*(present[d] for d in rows)))
-        all_columns = _all(present, columns)
+        all_rows = list(dict.fromkeys(r for r, _ in here)) if spec.listing else every_row
         rkeys = [r for r in all_rows if any((r, c) in here for c in all_columns)]
         ckeys = [c for c in all_columns if any((r, c) in here for r in rkeys)]
         if not rkeys or not ckeys:

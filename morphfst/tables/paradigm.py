@@ -381,7 +381,7 @@ class CellFiller:
             index: dict[str, int] = {}
             for i, t in enumerate(templates):
                 index.setdefault(self.encode(t), i)
-            trie = strings(index) if index else pynini.Fst()
+            trie = strings(index)  # accepts nothing when there are no cells
             found = self._shapes[key] = Shape(templates, trie, index)
         return found
 
