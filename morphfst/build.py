@@ -344,6 +344,9 @@ def load(name_or_path: str | Path, recompile: bool = False) -> Language:
         try:
             save_archive(cached, *loaded)
             prune_cache(name, keep=cached)
+            # read back as every later run reads it: the walk then has the file's packed arc tables
+            # (and the walk in C), not the in-memory transducers read through pynini
+            loaded = load_archive(cached)
         except UserError as exc:
             where = None
             warn(

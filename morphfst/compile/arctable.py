@@ -85,6 +85,11 @@ class PackedArcs:
         weight = self._final[state]
         return None if weight == _INF else weight
 
+    def arrays(self) -> tuple[Sequence[Any], Sequence[Any], Sequence[Any], Sequence[Any], Sequence[Any], Sequence[Any]]:
+        """The table's arrays ``first, ilabel, olabel, weight, next, final`` (buffers in machine order),
+        for the walk in C (:mod:`morphfst.runtime.native`)."""
+        return (self._first, self._ilabel, self._olabel, self._weight, self._next, self._final)
+
     @property
     def num_states(self) -> int:
         return len(self._final)

@@ -27,6 +27,7 @@ from ..compile.arctable import Arcs, FstArcs
 from ..compile.fstutil import NO_STATE_ID
 from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 from .hyphenated import HYPHEN, hyphenated
+from .native import native_walker
 from .results import Analysis, Morph
 
 
@@ -116,6 +117,9 @@ class ArcWalker:
         self._firsts: dict[int, str] = {}
         self._active_firsts: set[int] = set()
         self._reset_sets()
+        # the same walk in C over a packed table, when the extension is built: a word it gives up on
+        # (too many paths, a cycle of arcs that read nothing) is walked here
+        self._native = native_walker(self.table, self._skip)
 
     # ---- one state: its arcs, closure and folded table (built on first use) ---------------------------
     def _arcs(self, state: int) -> Raw:
@@ -360,6 +364,10 @@ class ArcWalker:
         """
         if self.start == NO_STATE_ID:
             return []
+        if self._native is not None and not best:
+            paths = self._native.paths(word, MAX_LIVE)
+            if paths is not None:
+                return _ranked(paths, limit)
         found = self._forward(word)
         if found is None:
             return []
@@ -370,20 +378,37 @@ class ArcWalker:
         results = None if best else _follow_back(trail, partial)
         if results is None:
             results = _breadth_back(trail, partial, best)
-        if len(results) > 1:
-            results.sort(key=lambda r: (r[2], r[1]))
-        return results[:limit]
+        return _ranked(results, limit)
 
     def accepts(self, word: str) -> bool:
         """True when some path reads ``word`` (no outputs are built)."""
         if self.start == NO_STATE_ID:
             return False
+        if self._native is not None:
+            accepted = self._native.accepts(word)
+            if accepted is not None:
+                return bool(accepted)
         found = self._forward(word)
         return found is not None and bool(self._final_pieces(found[0]))
 
     def size(self) -> int:
         """Number of folded steps built so far (a measure of the tables' memory; they grow with use)."""
         return sum(map(len, self._folded.values())) + sum(map(len, self._ends_memo.values()))
+
+
+def _ranked(paths: list[tuple[str, str, float]], limit: int) -> list[tuple[str, str, float]]:
+    """At most ``limit`` paths, each (side tape, output) once at its lowest weight, by weight, then
+    output, then side tape (the order both walks give, whatever order they found the paths in)."""
+    if len(paths) > 1:
+        low: dict[tuple[str, str], float] = {}
+        for side, out, weight in paths:
+            kept = low.get((side, out))
+            if kept is None or weight < kept:
+                low[(side, out)] = weight
+        if len(low) < len(paths):
+            paths = [(side, out, weight) for (side, out), weight in low.items()]
+        paths.sort(key=lambda r: (r[2], r[1], r[0]))
+    return paths[:limit]
 
 
 def _follow_back(trail: list[Back], partial: tuple[Path, ...]) -> list[tuple[str, str, float]] | None:
