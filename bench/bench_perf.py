@@ -1008,6 +1008,16 @@ def main(argv: list[str] | None = None) -> int:
     runner, runner_text = pick_runner(args.runner)
     start = time.perf_counter()
     say(f"morphfst {morphfst.__version__} performance targets; {os.cpu_count()} CPUs, load average {os.getloadavg()[0]:.1f}")
+    from morphfst.runtime import native
+
+    say(
+        "walk: "
+        + (
+            "in C (morphfst.runtime._cwalk)"
+            if native.available()
+            else f"in Python (C extension not built, or {native.PURE_PYTHON_ENV} set)"
+        )
+    )
     say(
         f"languages {','.join(args.langs)}; lexicon sizes {args.sizes}; corpus {args.tokens:,} tokens; {args.runs} run(s) per measure"
     )

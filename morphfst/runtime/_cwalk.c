@@ -54,6 +54,12 @@ typedef struct {
     double weight;
 } Frame;
 
+typedef struct PathRec {
+    size_t side, out; /* offsets in the pool */
+    uint32_t side_len, out_len;
+    double weight;
+} PathRec;
+
 typedef struct {
     PyObject_HEAD
     Py_buffer views[6];
@@ -88,6 +94,11 @@ typedef struct {
     size_t frames_cap;
     Py_UCS4 *side, *out;
     size_t tape_cap;
+    /* the paths of the last word: their tapes one after another in `pool` */
+    struct PathRec *found;
+    size_t found_cap;
+    Py_UCS4 *pool;
+    size_t pool_cap;
     /* the last word's figures: (position, state) pairs and edges of the forward pass */
     Py_ssize_t last_pairs, last_edges, last_looked;
     int back_edges; /* some edge of the last word leads to a pair added no later than its source */
@@ -363,17 +374,86 @@ static int mark_useful(Walker *w, size_t npairs, Py_ssize_t n) {
     return w->useful[0] ? 1 : 0;
 }
 
-static PyObject *new_path(const Walker *w, uint32_t side_len, uint32_t out_len, double weight) {
-    PyObject *side = PyUnicode_FromKindAndData(PyUnicode_4BYTE_KIND, w->side, side_len);
-    PyObject *out = PyUnicode_FromKindAndData(PyUnicode_4BYTE_KIND, w->out, out_len);
-    PyObject *wt = PyFloat_FromDouble(weight);
-    if (!side || !out || !wt) { Py_XDECREF(side); Py_XDECREF(out); Py_XDECREF(wt); return NULL; }
-    PyObject *t = PyTuple_New(3);
-    if (!t) { Py_DECREF(side); Py_DECREF(out); Py_DECREF(wt); return NULL; }
-    PyTuple_SET_ITEM(t, 0, side);
-    PyTuple_SET_ITEM(t, 1, out);
-    PyTuple_SET_ITEM(t, 2, wt);
-    return t;
+/* Keep one accepting path: its tapes go to the pool. */
+static int keep_path(Walker *w, size_t *count, size_t *used, uint32_t side_len, uint32_t out_len, double weight) {
+    if (grow((void **)&w->found, &w->found_cap, *count + 1, sizeof(PathRec)) < 0) return -1;
+    if (grow((void **)&w->pool, &w->pool_cap, *used + side_len + out_len + 1, sizeof(Py_UCS4)) < 0) return -1;
+    PathRec *r = &w->found[(*count)++];
+    r->side = *used;
+    memcpy(w->pool + *used, w->side, side_len * sizeof(Py_UCS4));
+    *used += side_len;
+    r->out = *used;
+    memcpy(w->pool + *used, w->out, out_len * sizeof(Py_UCS4));
+    *used += out_len;
+    r->side_len = side_len;
+    r->out_len = out_len;
+    r->weight = weight;
+    return 0;
+}
+
+static const Py_UCS4 *sort_pool; /* qsort has no context argument; the GIL is held throughout */
+
+static int compare_tape(const Py_UCS4 *a, uint32_t na, const Py_UCS4 *b, uint32_t nb) {
+    uint32_t n = na < nb ? na : nb;
+    for (uint32_t i = 0; i < n; i++)
+        if (a[i] != b[i]) return a[i] < b[i] ? -1 : 1;
+    return na == nb ? 0 : (na < nb ? -1 : 1);
+}
+
+/* By side tape, output, weight: a (side, output) pair's copies are then together, lowest first. */
+static int by_tapes(const void *x, const void *y) {
+    const PathRec *a = x, *b = y;
+    int c = compare_tape(sort_pool + a->side, a->side_len, sort_pool + b->side, b->side_len);
+    if (!c) c = compare_tape(sort_pool + a->out, a->out_len, sort_pool + b->out, b->out_len);
+    if (!c) c = a->weight < b->weight ? -1 : (a->weight > b->weight ? 1 : 0);
+    return c;
+}
+
+/* By weight, output, side tape: the order the walk returns (as walk._ranked sorts). */
+static int by_rank(const void *x, const void *y) {
+    const PathRec *a = x, *b = y;
+    if (a->weight != b->weight) return a->weight < b->weight ? -1 : 1;
+    int c = compare_tape(sort_pool + a->out, a->out_len, sort_pool + b->out, b->out_len);
+    if (!c) c = compare_tape(sort_pool + a->side, a->side_len, sort_pool + b->side, b->side_len);
+    return c;
+}
+
+/* The kept paths, each (side, output) once at its lowest weight, ranked, at most `limit`, as a list
+ * of (side, output, weight) tuples. */
+static PyObject *ranked(Walker *w, size_t count, long limit) {
+    sort_pool = w->pool;
+    if (count > 1) {
+        qsort(w->found, count, sizeof(PathRec), by_tapes);
+        size_t kept = 1;
+        for (size_t i = 1; i < count; i++) {
+            const PathRec *a = &w->found[kept - 1], *b = &w->found[i];
+            if (compare_tape(w->pool + a->side, a->side_len, w->pool + b->side, b->side_len) == 0 &&
+                compare_tape(w->pool + a->out, a->out_len, w->pool + b->out, b->out_len) == 0)
+                continue;
+            w->found[kept++] = *b;
+        }
+        count = kept;
+        qsort(w->found, count, sizeof(PathRec), by_rank);
+    }
+    if (limit >= 0 && (size_t)limit < count) count = (size_t)limit;
+    PyObject *list = PyList_New((Py_ssize_t)count);
+    if (!list) return NULL;
+    for (size_t i = 0; i < count; i++) {
+        const PathRec *r = &w->found[i];
+        PyObject *side = PyUnicode_FromKindAndData(PyUnicode_4BYTE_KIND, w->pool + r->side, r->side_len);
+        PyObject *out = PyUnicode_FromKindAndData(PyUnicode_4BYTE_KIND, w->pool + r->out, r->out_len);
+        PyObject *weight = PyFloat_FromDouble(r->weight);
+        PyObject *t = side && out && weight ? PyTuple_New(3) : NULL;
+        if (!t) {
+            Py_XDECREF(side); Py_XDECREF(out); Py_XDECREF(weight); Py_DECREF(list);
+            return NULL;
+        }
+        PyTuple_SET_ITEM(t, 0, side);
+        PyTuple_SET_ITEM(t, 1, out);
+        PyTuple_SET_ITEM(t, 2, weight);
+        PyList_SET_ITEM(list, (Py_ssize_t)i, t);
+    }
+    return list;
 }
 
 /* The letters of `text` in `buffer` (MAX_WORD + 1 code points); 0 when it is longer, -1 on error. */
@@ -384,19 +464,18 @@ static int word_of(PyObject *text, Py_UCS4 *buffer, Py_ssize_t *n) {
     return PyUnicode_AsUCS4(text, buffer, MAX_WORD + 1, 0) ? 1 : -1;
 }
 
-/* Pass 3: every accepting path, depth first along useful edges. Returns a new list, Py_None (new
- * reference) when a bound is passed, NULL on error. */
-static PyObject *search(Walker *w, const Py_UCS4 *word, Py_ssize_t n, long max_paths) {
-    PyObject *found = PyList_New(0);
-    if (!found) return NULL;
-    if (grow((void **)&w->frames, &w->frames_cap, 64, sizeof(Frame)) < 0) goto error;
+/* Pass 3: every accepting path, depth first along useful edges, ranked (see ranked()). Returns a new
+ * list, Py_None (new reference) when a bound is passed, NULL on error. */
+static PyObject *search(Walker *w, const Py_UCS4 *word, Py_ssize_t n, long max_paths, long limit) {
+    size_t count = 0, used = 0;
+    if (grow((void **)&w->frames, &w->frames_cap, 64, sizeof(Frame)) < 0) return NULL;
     size_t tape = (size_t)(n + 1) * (MAX_FREE_DEPTH + 2) + 16;
     if (tape > w->tape_cap) {
         Py_UCS4 *s = realloc(w->side, tape * sizeof *s);
-        if (!s) { PyErr_NoMemory(); goto error; }
+        if (!s) { PyErr_NoMemory(); return NULL; }
         w->side = s;
         Py_UCS4 *o = realloc(w->out, tape * sizeof *o);
-        if (!o) { PyErr_NoMemory(); goto error; }
+        if (!o) { PyErr_NoMemory(); return NULL; }
         w->out = o;
         w->tape_cap = tape;
     }
@@ -407,9 +486,7 @@ static PyObject *search(Walker *w, const Py_UCS4 *word, Py_ssize_t n, long max_p
     depth = 1;
     /* the start pair is final when the word is empty or the first pair is at position n */
     if (w->pair_pos[0] == (uint32_t)n && !isinf(w->final[w->pair_state[0]])) {
-        PyObject *t = new_path(w, 0, 0, w->final[w->pair_state[0]]);
-        if (!t || PyList_Append(found, t) < 0) { Py_XDECREF(t); goto error; }
-        Py_DECREF(t);
+        if (keep_path(w, &count, &used, 0, 0, w->final[w->pair_state[0]]) < 0) return NULL;
     }
     while (depth) {
         f = &w->frames[depth - 1];
@@ -422,47 +499,39 @@ static PyObject *search(Walker *w, const Py_UCS4 *word, Py_ssize_t n, long max_p
             continue;
         }
         f->cursor = e + 1;
-        if (++steps > MAX_STEPS) goto bound;
+        if (++steps > MAX_STEPS) Py_RETURN_NONE;
         const Edge *edge = &w->edges[e];
         uint32_t arc = edge->arc;
         uint32_t il = w->ilabel[arc], ol = w->olabel[arc];
         int reads = w->pair_pos[edge->to] != w->pair_pos[f->pair];
         uint32_t free_depth = reads ? 0 : f->free_depth + 1;
-        if (free_depth > MAX_FREE_DEPTH) goto bound;
+        if (free_depth > MAX_FREE_DEPTH) Py_RETURN_NONE;
         uint32_t side_len = f->side_len, out_len = f->out_len;
         if (reads) w->side[side_len++] = word[w->pair_pos[f->pair]];
         else if (il != 0) w->side[side_len++] = il;
         if (ol != 0) w->out[out_len++] = ol;
-        if (side_len >= w->tape_cap || out_len >= w->tape_cap) goto bound;
+        if (side_len >= w->tape_cap || out_len >= w->tape_cap) Py_RETURN_NONE;
         double weight = f->weight + w->weight[arc];
         uint32_t to = edge->to;
         if (w->pair_pos[to] == (uint32_t)n) {
             double fin = w->final[w->pair_state[to]];
             if (!isinf(fin)) {
-                if (PyList_GET_SIZE(found) >= max_paths) goto bound;
-                PyObject *t = new_path(w, side_len, out_len, weight + fin);
-                if (!t || PyList_Append(found, t) < 0) { Py_XDECREF(t); goto error; }
-                Py_DECREF(t);
+                if ((long)count >= max_paths) Py_RETURN_NONE;
+                if (keep_path(w, &count, &used, side_len, out_len, weight + fin) < 0) return NULL;
             }
         }
-        if (grow((void **)&w->frames, &w->frames_cap, depth + 1, sizeof(Frame)) < 0) goto error;
+        if (grow((void **)&w->frames, &w->frames_cap, depth + 1, sizeof(Frame)) < 0) return NULL;
         Frame *g = &w->frames[depth++];
         g->pair = to; g->cursor = w->free_begin[to]; g->letters = 0; g->side_len = side_len; g->out_len = out_len;
         g->free_depth = free_depth; g->weight = weight;
     }
-    return found;
-bound:
-    Py_DECREF(found);
-    Py_RETURN_NONE;
-error:
-    Py_DECREF(found);
-    return NULL;
+    return ranked(w, count, limit);
 }
 
 static PyObject *Walker_paths(Walker *w, PyObject *args) {
     PyObject *text;
-    long max_paths;
-    if (!PyArg_ParseTuple(args, "Ul", &text, &max_paths)) return NULL;
+    long max_paths, limit = -1;
+    if (!PyArg_ParseTuple(args, "Ul|l", &text, &max_paths, &limit)) return NULL;
     if (w->start < 0) return PyList_New(0);
     Py_ssize_t n;
     Py_UCS4 word[MAX_WORD + 1];
@@ -476,7 +545,7 @@ static PyObject *Walker_paths(Walker *w, PyObject *args) {
     else if (nedges == 0 && npairs == 0) result = PyList_New(0);
     else if (nedges >= 0) {
         int live = mark_useful(w, npairs, n);
-        result = live ? search(w, word, n, max_paths) : PyList_New(0);
+        result = live ? search(w, word, n, max_paths, limit) : PyList_New(0);
     }
     return result;
 }
@@ -574,7 +643,8 @@ static PyObject *Walker_sorted(Walker *w, void *closure) {
 
 static PyMethodDef Walker_methods[] = {
     {"paths", (PyCFunction)Walker_paths, METH_VARARGS,
-     "paths(word, max_paths) -> list of (side tape, output, weight) of every accepting path, in no set order;\n"
+     "paths(word, max_paths, limit=-1) -> list of (side tape, output, weight) of the accepting paths, each\n"
+     "(side tape, output) once at its lowest weight, by weight, output, side tape, at most limit (-1: all);\n"
      "None when the word passes a bound (more than max_paths paths, a long chain of arcs that read nothing)."},
     {"accepts", (PyCFunction)Walker_accepts, METH_VARARGS,
      "accepts(word) -> True when some path reads the word; None when a bound is passed."},

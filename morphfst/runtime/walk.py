@@ -365,9 +365,9 @@ class ArcWalker:
         if self.start == NO_STATE_ID:
             return []
         if self._native is not None and not best:
-            paths = self._native.paths(word, MAX_LIVE)
+            paths = self._native.paths(word, MAX_LIVE, limit)  # ranked as _ranked ranks
             if paths is not None:
-                return _ranked(paths, limit)
+                return paths
         found = self._forward(word)
         if found is None:
             return []
@@ -721,7 +721,7 @@ class FastAnalyzer:
         weigh :data:`LOWER_CASE_NAME_WEIGHT` more."""
         if not walked:
             return []
-        if written is not None and len(walked) > 1 and written.islower():
+        if written is not None and written.islower() and any(w[1][:1].isupper() for w in walked):
             walked = self._lower_case_names(walked)
         seam = self.seam
         if seam and len(walked) > 1:
