@@ -351,3 +351,27 @@ def test_analyses_share_their_affix_morphs(tur: morphfst.Language) -> None:
     other = tur.analyze("adamlarda")[0]
     assert other.morphs[1] is second.morphs[1] and other.morphs[2] is second.morphs[2]  # -lar, -da
     assert first.morphs[1] is not second.morphs[1]  # -ler is another form
+
+
+@pytest.mark.parametrize(
+    ("name", "words"),
+    [
+        # stems the lexicons lack, with real endings (common practice: loanwords take native suffixes)
+        ("tur", ["blogunda", "tweetlerimiz", "kriptoparalar", "vlogcular", "podcastlerden", "selfieyi"]),
+        ("fin", ["vloggaamassa", "striimaajat", "podcasteissa", "meemeissä"]),
+    ],
+)
+def test_the_best_guesses_are_the_first_of_all_guesses_decoded(
+    name: str, words: list[str], request: pytest.FixtureRequest
+) -> None:
+    lang: morphfst.Language = request.getfixturevalue(name)
+    fast = lang.fast
+    assert fast.guesser is not None
+    assert any(len(fast.guess(word, 10)) > 1 for word in words)  # ties and cuts are compared
+    for word in words:
+        for limit in (1, 3, 10):
+            every = fast.decode_all(word, fast.guesser.walk(word, walk.MAX_PATHS), True)[:limit]
+            best = fast.guess(word, limit)
+            assert best, word
+            assert [(a.text, a.segmentation) for a in best] == [(a.text, a.segmentation) for a in every], (word, limit)
+            assert [a.weight for a in best] == pytest.approx([a.weight for a in every]), (word, limit)

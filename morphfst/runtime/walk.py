@@ -60,6 +60,7 @@ Raw = tuple[tuple[Step, ...], str, float | None]  # a state's arcs that read not
 _Piece = TypeVar("_Piece", Step, End)
 Key = tuple[str, str]  # an analysis's text and segmentation: what makes two decoded paths the same
 Tail = tuple[str, tuple[str, ...], tuple[tuple[int, tuple[str, ...]], ...], int, str]  # see FastAnalyzer._parse_tail
+Parts = tuple[str, str, tuple[str, ...], str, tuple[Morph, ...], Key]  # see FastAnalyzer._parts
 _UNSEEN: Any = object()
 
 
@@ -581,11 +582,32 @@ class FastAnalyzer:
             return []
         walked = guesser.walk(surface, MAX_PATHS, best=limit == 1)
         if len(walked) > limit:
-            # Paths come sorted by weight; keep every path that ties with the last one kept, so the
-            # final order (weight, then analysis text) is the same as when everything is decoded.
-            bound = round(walked[limit - 1][2], 5)
-            walked = [w for w in walked if round(w[2], 5) <= bound]
+            return self._best_guesses(surface, walked, limit)
         return self.decode_all(surface, walked, True)[:limit]
+
+    def _best_guesses(self, surface: str, walked: list[tuple[str, str, float]], limit: int) -> list[Analysis]:
+        """``decode_all(surface, walked, True)[:limit]``, building only the analyses kept.
+
+        The paths come sorted by weight. Their (text, segmentation) keys are read in that order until
+        ``limit`` distinct keys are found, and on through the paths that tie with the last of them
+        (weights rounded as :meth:`decode_all` rounds them): no later path can be among the best, and
+        every key met has its lowest weight first. Then the keys are ranked as :meth:`decode_all`
+        ranks them and only the first ``limit`` are built."""
+        low: dict[Key, tuple[float, Parts]] = {}
+        bound: float | None = None
+        for bounded, internal, weight in walked:
+            rounded = round(weight, 5)
+            if bound is not None and rounded > bound:
+                break
+            parts = self._parts(internal, bounded, True)
+            if parts is None:  # not a plain guess: decode everything
+                return self.decode_all(surface, walked, True)[:limit]
+            if parts[5] not in low:
+                low[parts[5]] = (weight, parts)
+                if bound is None and len(low) >= limit:
+                    bound = rounded
+        ranked = sorted(low.items(), key=lambda item: (round(item[1][0], 5), item[0]))[:limit]
+        return [self._build(surface, parts, weight, True) for _, (weight, parts) in ranked]
 
     def decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool = False) -> Analysis:
         """One :class:`Analysis` from a walked or composed path, through precomputed tables."""
@@ -605,7 +627,15 @@ class FastAnalyzer:
 
     def _decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool) -> tuple[Analysis, Key | None]:
         """:meth:`decode`, with the analysis's (text, segmentation) when the tables give it for free
-        (``None`` for compounds: :func:`_key` builds it).
+        (``None`` for compounds: :func:`_key` builds it)."""
+        parts = self._parts(internal, bounded, guessed)
+        if parts is None:
+            return self._decode_compound(surface, internal, bounded, weight), None
+        return self._build(surface, parts, weight, guessed), parts[5]
+
+    def _parts(self, internal: str, bounded: str, guessed: bool) -> Parts | None:
+        """Lemma, part of speech, features, stem form, affix morphs and (text, segmentation) of a path
+        (``None`` for a compound), without building the analysis.
 
         The analysis after the lemma (part of speech, affix ids, features) and the affix morphs are
         shared by many words: both are parsed once and kept in dicts, with their parts of the
@@ -614,7 +644,7 @@ class FastAnalyzer:
         if guessed:
             internal = internal.replace(self.mark, "")
         elif self.seam and self.seam in internal:
-            return self._decode_compound(surface, internal, bounded, weight), None
+            return None
         found = self.pos_re.search(internal)
         i = found.start() if found else len(internal)
         lemma = internal[:i]
@@ -637,6 +667,13 @@ class FastAnalyzer:
                 self._affix_pool.clear()
             self._affix_morphs[key] = built
         affixes, affix_seg = built
+        # Analysis.text and .segmentation, from the cached parts
+        segmentation = f"{stem_form}-{affix_seg}" if stem_form and affix_seg else stem_form or affix_seg
+        return lemma, pos, features, stem_form, affixes, (f"{lemma} {tags}", segmentation)
+
+    def _build(self, surface: str, parts: Parts, weight: float, guessed: bool) -> Analysis:
+        """The :class:`Analysis` of :meth:`_parts` (the stem morph shared by every analysis that has it)."""
+        lemma, pos, features, stem_form, affixes, _ = parts
         stem_key = (stem_form, lemma, pos)
         stem = self._stems.get(stem_key)
         if stem is None:
@@ -644,10 +681,7 @@ class FastAnalyzer:
                 self._stems.clear()
             gloss = self.lang.glosses.get((lemma, pos), lemma)
             stem = self._stems[stem_key] = _new_morph(stem_form, gloss, (pos,), "stem", lemma, None, None, None)
-        analysis = _new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, self.lang.ud, guessed)
-        # Analysis.text and .segmentation, from the cached parts
-        segmentation = f"{stem_form}-{affix_seg}" if stem_form and affix_seg else stem_form or affix_seg
-        return analysis, (f"{lemma} {tags}", segmentation)
+        return _new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, self.lang.ud, guessed)  # type: ignore[no-any-return]
 
     def _decode_compound(self, surface: str, internal: str, bounded: str, weight: float) -> Analysis:
         """A compound: every part but the last is lemma and part of speech (its surface form between
