@@ -97,3 +97,22 @@ def test_turkish_guesses_follow_the_grammar(tur: morphfst.Language) -> None:
     assert (best.lemma, best.segmentation, best.guessed) == ("kalem", "kalem-ler", True)
     name = tur.guess("Eskişehir'de")[0]
     assert (name.lemma, name.pos, name.features) == ("eskişehir", "PROPN", ("SG", "LOC"))
+
+
+@pytest.mark.parametrize(
+    ("word", "segmentation", "text"),
+    [
+        # Loanwords not in the lexicon, with native suffixes (common practice: Turkish loans take the
+        # regular plural, possessive and case suffixes by vowel harmony; Göksel & Kerslake, ch. 8 and 14)
+        ("blogunda", "blog-u-nda", "blog N;SG;PSS3S;LOC"),
+        ("tweetlerimiz", "tweet-ler-imiz", "tweet N;PL;PSS1P;NOM"),
+        ("kriptoparalar", "kriptopara-lar", "kriptopara N;PL;NOM"),
+        ("vlogcular", "vlogcu-lar", "vlogcu N;PL;NOM"),
+    ],
+)
+def test_the_first_guess_finds_the_suffixes_of_an_unknown_word(
+    tur: morphfst.Language, word: str, segmentation: str, text: str
+) -> None:
+    assert not tur.analyze(word)
+    first = tur.guess(word)[0]
+    assert (first.segmentation, first.text) == (segmentation, text)
