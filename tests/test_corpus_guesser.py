@@ -104,8 +104,8 @@ def test_turkish_guesses_follow_the_grammar(tur: morphfst.Language) -> None:
     [
         # Loanwords not in the lexicon, with native suffixes (common practice: Turkish loans take the
         # regular plural, possessive and case suffixes by vowel harmony; Göksel & Kerslake, ch. 8 and 14)
-        ("blogunda", "blog-u-nda", "blog N;SG;PSS3S;LOC"),
-        ("tweetlerimiz", "tweet-ler-imiz", "tweet N;PL;PSS1P;NOM"),
+        ("vlogunda", "vlog-u-nda", "vlog N;SG;PSS3S;LOC"),
+        ("selfielerimiz", "selfie-ler-imiz", "selfie N;PL;PSS1P;NOM"),
         ("kriptoparalar", "kriptopara-lar", "kriptopara N;PL;NOM"),
         ("vlogcular", "vlogcu-lar", "vlogcu N;PL;NOM"),
     ],
