@@ -379,6 +379,55 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("dopdolu", "ADJ;SG;NOM", "dopdolu"),
         ("tertemiz", "ADJ;SG;NOM", "tertemiz"),
     ],
+    # 24: everyday vocabulary added by domain, one or two key forms per lexical class. The stems
+    # follow the spelling dictionary's principal parts (TDK Güncel Türkçe Sözlük entries such as
+    # 'kükürt, -dü', 'hısım, -smı', 'hattat, -tı', 'kolesterol, -lü', 'menşe, -i' — from memory);
+    # the rules they obey are those of G&K 2.3-2.4 (from memory).
+    "vocabulary by domain": [
+        # a final stop of two or more syllables voices (kükürdü, kiremidi, haydudu, tülbendi)
+        ("kükürt", "N;SG;ACC", "kükürdü"),
+        ("kiremit", "N;SG;ACC", "kiremidi"),
+        ("haydut", "N;SG;ACC", "haydudu"),
+        ("tülbent", "N;SG;ACC", "tülbendi"),
+        ("kepenk", "N;SG;ACC", "kepengi"),
+        ("teleskop", "N;SG;ACC", "teleskobu"),
+        # ... unless the loan keeps it (hattatı, gastriti, greyfurtu, yapıtı)
+        ("hattat", "N;SG;ACC", "hattatı"),
+        ("gastrit", "N;SG;ACC", "gastriti"),
+        ("greyfurt", "N;SG;ACC", "greyfurtu"),
+        ("yapıt", "N;SG;ACC", "yapıtı"),
+        # vowel loss (hısmı, cebri, hizbi with the voiced stop, akdi)
+        ("hısım", "N;SG;ACC", "hısmı"),
+        ("cebir", "N;SG;DAT", "cebre"),
+        ("hizip", "N;SG;ACC", "hizbi"),
+        ("akit", "N;SG;ACC", "akdi"),
+        ("hısım", "N;PL;NOM", "hısımlar"),
+        # front suffixes after a back vowel in loans (kolesterolü, itidali, zevale)
+        ("kolesterol", "N;SG;ACC", "kolesterolü"),
+        ("itidal", "N;SG;ACC", "itidali"),
+        ("zeval", "N;SG;DAT", "zevale"),
+        # the possessive -I without s after a lost Arabic final consonant (menşei, mevzii, tevazuu)
+        ("menşe", "N;SG;PSS3S;NOM", "menşei"),
+        ("mevzi", "N;SG;PSS3S;NOM", "mevzii"),
+        ("tevazu", "N;SG;PSS3S;NOM", "tevazuu"),
+        # compounds with the possessive on the last part (G&K, compound nouns — from memory)
+        ("denizanası", "N;PL;NOM", "denizanaları"),
+        ("yılanbalığı", "N;PL;NOM", "yılanbalıkları"),
+        ("buzdağı", "N;PL;NOM", "buzdağları"),
+        ("aslanağzı", "N;PL;NOM", "aslanağızları"),
+        ("semizotu", "N;PL;NOM", "semizotları"),
+        ("bilinçaltı", "N;SG;LOC", "bilinçaltında"),
+        # verbs: the aorist of a compound of koymak keeps -Ar; fused etmek and olmak compounds;
+        # a passive with vowel loss (kayrıldı) (G&K 8.2.3 and 8.2.1 — from memory)
+        ("alıkoymak", "V;HAB;3;SG", "alıkoyar"),
+        ("nakşetmek", "V;HAB;3;SG", "nakşeder"),
+        ("gasbetmek", "V;PASS;PST;3;SG", "gasbedildi"),
+        ("hapsolmak", "V;HAB;3;SG", "hapsolur"),
+        ("kayırmak", "V;PASS;PST;3;SG", "kayrıldı"),
+        ("umursamak", "V;NEG;PROG;3;SG", "umursamıyor"),
+        ("sekmek", "V;HAB;3;SG", "seker"),
+        ("ulumak", "V;FUT;3;SG", "uluyacak"),
+    ],
 }
 
 CASES_FLAT = [(name, *row) for name, rows in PARADIGMS.items() for row in rows]
@@ -589,3 +638,24 @@ def test_compounds_keep_a_voiceless_stop_and_loans_soften_g(tur: morphfst.Langua
     # colloquial spellings of bura-da, ora-da, nere-de are words of their own in informal text
     # (common practice), with the copula (burdayım 'I am here')
     assert tur.analyze("burdayım")[0].text == "burda ADV;1;SG"
+
+
+def test_words_added_from_the_unanalyzed_list(tur: morphfst.Language) -> None:
+    best = {w: tur.analyze(w)[0].text for w in "uğruna umurumda umrumda onsuz bunsuz nerdeyse yemek nezdinde".split()}
+    # uğruna 'for the sake of' is uğur with vowel loss before the possessive (uğrunda, uğruma), while
+    # uğur 'luck' keeps its vowel (uğuru, uğurlu) (TDK Güncel Türkçe Sözlük, 'uğur' — from memory)
+    assert best["uğruna"] == "uğur N;SG;PSS3S;DAT"
+    assert tur.analyze("uğuru")[0].text == "uğur N;SG;ACC"
+    # umurumda değil: both umurumda and the older umrumda are written (common practice)
+    assert best["umurumda"] == best["umrumda"] == "umur N;SG;PSS1S;LOC"
+    # o, bu, şu take the pronominal n before -sIz as before the cases: onsuz, bunsuz (G&K ch. 18 —
+    # from memory); sensiz has none
+    assert best["onsuz"] == "o PRO;PRIV;ADJ;SG;NOM" and best["bunsuz"] == "bu PRO;PRIV;ADJ;SG;NOM"
+    assert [f.form for f in tur.generate("o", "PRO;PRIV;ADJ;SG;NOM")][:1] == ["onsuz"]
+    # nerdeyse is the colloquial spelling of neredeyse 'almost', not nerde + conditional (common
+    # practice); yemek is first the noun 'meal' (common practice: yemek yemek 'to eat a meal')
+    assert best["nerdeyse"] == "nerdeyse ADV"
+    assert best["yemek"] == "yemek N;SG;NOM"
+    assert "yemek V;NFIN;NOM" in [a.text for a in tur.analyze("yemek")]
+    # nezdinde 'in the eyes of' is nezt with its d before a vowel (TDK, 'nezt, -zdi' — from memory)
+    assert best["nezdinde"] == "nezt N;SG;PSS3S;LOC"
