@@ -66,6 +66,18 @@ def test_segment_text_keeps_lines_and_reports_coverage(
     assert "tokens:" in err and "most frequent unanalyzed" in err and "qqq (1)" in err
 
 
+def test_segment_splits_unknown_words_by_the_guesser_when_asked(
+    capsys: pytest.CaptureFixture[str], tmp_path: Path, tur: morphfst.Language
+) -> None:
+    text = tmp_path / "text.txt"
+    text.write_text("Evlerde vlogunda konuştu.\n", encoding="utf-8")
+    code, out, err = run(capsys, "segment", "-i", str(text))
+    assert code == 0 and out.splitlines() == ["Ev-ler-de vlogunda konuş-tu."]
+    code, out, err = run(capsys, "segment", "-i", str(text), "--guess", "--mark-unknown", "?")
+    assert code == 0 and out.splitlines() == ["Ev-ler-de ?vlog-u-nda konuş-tu."]
+    assert "split by the guesser: 1" in err and "vlogunda (1)" in err
+
+
 def test_invalid_utf8_is_replaced_and_counted(capsys: pytest.CaptureFixture[str], tmp_path: Path, tur: morphfst.Language) -> None:
     data = tmp_path / "bad.txt"
     data.write_bytes(b"evlerde \xff\xfe odaya\n")

@@ -25,6 +25,7 @@ EXAMPLES = """examples:
   morphfst segment -i demo/tur_library.txt        a text: same lines, words split into morphs
   morphfst segment -i demo/tur_library.txt --sep ' +'  morphs as separate terms for an indexer
   morphfst segment -i demo/tur_library.txt -f jsonl  one JSON object per token, all segmentations
+  morphfst segment -i demo/tur_library.txt --guess --mark-unknown '?'  unknown words split by the guesser, marked
 """
 
 
@@ -43,6 +44,12 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
     add_input(p, "a text")
     p.add_argument("-f", "--format", choices=("text", "tsv", "jsonl"), default="text", help="text (default), tsv or jsonl")
     p.add_argument("--sep", default="-", help="string put between morphs in text output (default '-')")
+    p.add_argument(
+        "--guess",
+        action="store_true",
+        help="split words the lexicon does not know by the guesser's best reading (counted apart in the summary; "
+        "--mark-unknown marks them too)",
+    )
     p.add_argument("--mark-unknown", default="", metavar="MARK", help="put MARK before words with no analysis in text output")
     p.add_argument("--no-summary", action="store_true", help="do not print the coverage summary")
     p.set_defaults(func=run)
@@ -70,13 +77,18 @@ class Coverage:
         self.tokens = 0
         self.analyzed = 0
         self.analyses = 0
+        self.guessed = 0
         self.types: Counter[str] = Counter()
         self.unknown: Counter[str] = Counter()
 
-    def add(self, word: str, n_analyses: int) -> None:
+    def add(self, word: str, n_analyses: int, guessed: bool = False) -> None:
+        """Count a token with ``n_analyses`` lexicon analyses (a guessed token counts as unanalyzed)."""
         self.tokens += 1
         self.types[word] += 1
-        if n_analyses:
+        if guessed:
+            self.guessed += 1
+            self.unknown[word] += 1
+        elif n_analyses:
             self.analyzed += 1
             self.analyses += n_analyses
         else:
@@ -94,6 +106,8 @@ class Coverage:
             f"  types:   {types:>8}   analyzed {known_types:>8}  ({tpct:5.1f}%)",
             f"  analyses per analyzed token: {amb:.2f}",
         ]
+        if self.guessed:
+            lines.append(f"  unanalyzed tokens split by the guesser: {self.guessed}")
         if self.unknown:
             common = ", ".join(f"{w} ({n})" for w, n in self.unknown.most_common(top))
             lines.append(f"  most frequent unanalyzed: {common}")
@@ -109,8 +123,8 @@ def run(args: argparse.Namespace) -> int:
     if args.words:
         table = Aligned(["word", "segmentation", "gloss", "analysis"], out)
         for word in args.words:
-            segs = lang.segment(word)
-            coverage.add(word, len(segs))
+            segs = lang.segment(word, guess=args.guess)
+            coverage.add(word, len(segs), _guessed(segs))
             if args.format == "jsonl":
                 write_json({"word": word, "segmentations": [s.to_dict() for s in segs]}, out)
             elif args.format == "tsv":
@@ -175,8 +189,8 @@ def _segment_text(
                     if segs is None:
                         if len(cache) >= CACHE_TYPES:
                             cache.clear()
-                        segs = cache[piece] = lang.segment(piece)
-                    coverage.add(piece, len(segs))
+                        segs = cache[piece] = lang.segment(piece, guess=args.guess)
+                    coverage.add(piece, len(segs), _guessed(segs))
                     tokens += 1
                     _emit_token(args, out, chunk.first_line + i, piece, segs, pieces)
                 if args.format == "text":
@@ -206,9 +220,14 @@ def _emit_token(
             pieces.append(args.mark_unknown + text)
         else:
             morphs = project(text, best.word, [m for m in best.morphs if m])
-            pieces.append(args.sep.join(morphs))
+            pieces.append((args.mark_unknown if _guessed(segs) else "") + args.sep.join(morphs))
     elif args.format == "tsv":
         lemma = best.analyses[0].lemma if best else ""
         out.write(f"{number}\t{tsv_field(text)}\t{best.text if best else ''}\t{best.gloss if best else ''}\t{lemma}\n")
     else:
         write_json({"line": number, "word": text, "segmentations": [s.to_dict() for s in segs]}, out)
+
+
+def _guessed(segs: list[Segmentation]) -> bool:
+    """True when the segmentations are the guesser's (the lexicon does not know the word)."""
+    return bool(segs) and segs[0].analyses[0].guessed

@@ -129,10 +129,11 @@ class Language:
             found[bounded] = min(weight, found.get(bounded, weight))
         return sorted(found.items(), key=lambda kv: (round(kv[1], 5), kv[0]))
 
-    def segment(self, word: str) -> list[Segmentation]:
-        """Distinct splits of ``word`` into surface morphs, best first, each with its analyses."""
+    def segment(self, word: str, guess: bool = False) -> list[Segmentation]:
+        """Distinct splits of ``word`` into surface morphs, best first, each with its analyses; with
+        ``guess``, a word the lexicon does not know is split by the guesser's analyses (marked ``guessed``)."""
         groups: dict[tuple[str, ...], list[Analysis]] = {}
-        for analysis in self.analyze(word):
+        for analysis in self.analyze(word, guess=guess):
             key = tuple(m.form for m in analysis.morphs if m.kind == "stem" or m.underlying)
             groups.setdefault(key, []).append(analysis)
         # analyses arrive ranked, so the first analysis of each split decides the split's rank
