@@ -659,3 +659,92 @@ def test_words_added_from_the_unanalyzed_list(tur: morphfst.Language) -> None:
     assert "yemek V;NFIN;NOM" in [a.text for a in tur.analyze("yemek")]
     # nezdinde 'in the eyes of' is nezt with its d before a vowel (TDK, 'nezt, -zdi' — from memory)
     assert best["nezdinde"] == "nezt N;SG;PSS3S;LOC"
+
+
+def test_lexicalized_derivations_before_the_productive_ones(tur: morphfst.Language) -> None:
+    # An agent noun in -(y)IcI or a numeral in -lI, -lIk that the dictionary lists as a word of its
+    # own is read as that word first: sürücü 'driver', yönetici 'manager', izleyici 'viewer', geçici
+    # 'temporary', birlik 'union', ikili 'dual' (TDK Güncel Türkçe Sözlük, headwords — from memory;
+    # ranking a dictionary word above a derivation that spells it is common practice)
+    for word, best in [
+        ("sürücü", "sürücü N;SG;NOM"),
+        ("sürücüler", "sürücü N;PL;NOM"),
+        ("yönetici", "yönetici N;SG;NOM"),
+        ("izleyici", "izleyici N;SG;NOM"),
+        ("geçici", "geçici ADJ;SG;NOM"),
+        ("yapıcı", "yapıcı ADJ;SG;NOM"),
+        ("birlik", "birlik N;SG;NOM"),
+        ("birliği", "birlik N;SG;ACC"),
+        ("ikili", "ikili ADJ;SG;NOM"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    # the derivation stays for the words the lexicon lacks: söndürücü 'extinguisher' is söndür-ücü,
+    # beşlik 'a five (note)' beş-lik, altılı 'sextet' altı-lı (Lewis 2000, the suffixes -ici, -lik, -li;
+    # G&K ch. 7 and 15 — from memory)
+    assert tur.analyze("söndürücü")[0].text == "söndürmek V;AGT;N;SG;NOM"
+    assert tur.analyze("beşlik")[0].text == "beş NUM;ABSTR;N;SG;NOM"
+    assert tur.analyze("altılı")[0].text == "altı NUM;PROPR;ADJ;SG;NOM"
+    # and the derived reading is still among the analyses of a listed word
+    assert "sürmek V;AGT;N;SG;NOM" in [a.text for a in tur.analyze("sürücü")]
+    assert "bir NUM;ABSTR;N;SG;NOM" in [a.text for a in tur.analyze("birlik")]
+    # a causative with a meaning of its own is a dictionary verb, read first as itself: öldürmek
+    # 'kill', kaldırmak 'lift, abolish', bastırmak 'print, suppress', oluşturmak 'form' (TDK Güncel
+    # Türkçe Sözlük, headwords — from memory); the causative reading stays second
+    for word, best in [
+        ("öldürdü", "öldürmek V;PST;3;SG"),
+        ("kaldırıldı", "kaldırmak V;PASS;PST;3;SG"),
+        ("bastırdı", "bastırmak V;PST;3;SG"),
+        ("oluşturan", "oluşturmak V;V.PTCP;ADJ;SG;NOM"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    assert "ölmek V;CAUS;PST;3;SG" in [a.text for a in tur.analyze("öldürdü")]
+    # a causative the lexicon lacks is still built and read first: sevdirdi, ödetti (G&K ch. 13, the
+    # causative — from memory)
+    assert tur.analyze("sevdirdi")[0].text == "sevmek V;CAUS;PST;3;SG"
+    assert tur.analyze("ödetti")[0].text == "ödemek V;CAUS;PST;3;SG"
+
+
+def test_the_infinitive_in_cases_ranks_below_a_noun_spelt_alike(tur: morphfst.Language) -> None:
+    # -mAk takes the locative, ablative and instrumental (G&K ch. 24, the short infinitive's cases;
+    # Lewis 2000, the infinitive — from memory): gelmekten, korkmaktan, yemekle
+    assert [f.form for f in tur.generate("gelmek", "V;NFIN;ABL")] == ["gelmekten"]
+    assert [f.form for f in tur.generate("gelmek", "V;NFIN;INS")] == ["gelmekle"]
+    assert tur.analyze("korkmaktan")[0].text == "korkmak V;NFIN;ABL"
+    # yemek 'meal' is a noun of its own, and its case forms come before the infinitive's
+    # (yemekten sonra 'after the meal', yemekte 'at dinner': common practice)
+    assert tur.analyze("yemekten")[0].text == "yemek N;SG;ABL"
+    assert tur.analyze("yemekte")[0].text == "yemek N;SG;LOC"
+    assert "yemek V;NFIN;ABL" in [a.text for a in tur.analyze("yemekten")]
+    # a bare -mAktA is the formal progressive first, the locative infinitive second; -mAktAdIr is the
+    # progressive with -DIr (G&K ch. 21, the progressive -mAktA — from memory)
+    assert [a.text for a in tur.analyze("yapmakta")][:2] == ["yapmak V;PROG;3;SG", "yapmak V;NFIN;LOC"]
+    assert tur.analyze("yapmaktadır")[0].text == "yapmak V;PROG;3;SG;ASSR"
+
+
+def test_verbs_and_nouns_added_by_hand(tur: morphfst.Language) -> None:
+    def first(lemma: str, features: str) -> str:
+        return [f.form for f in tur.generate(lemma, features)][0]
+
+    # one-syllable roots in -Ar (kıyar, sıçar, burar, söğer, derer) and longer stems in -Ir
+    # (göğerir, salıverir) (TDK Güncel Türkçe Sözlük, the aorist given with each verb — from memory)
+    for lemma, aorist in [("kıymak", "kıyar"), ("burmak", "burar"), ("söğmek", "söğer"),
+                          ("dermek", "derer"), ("göğermek", "göğerir"), ("salıvermek", "salıverir")]:
+        assert first(lemma, "V;HAB;3;SG") == aorist, lemma
+    # -etmek compounds voice the t before a vowel (bahşeder, bahşedildi); evirmek loses its vowel
+    # before the passive (evrildi) (G&K 2.4 and ch. 8 — from memory)
+    assert first("bahşetmek", "V;HAB;3;SG") == "bahşeder"
+    assert first("bahşetmek", "V;PASS;PST;3;SG") == "bahşedildi"
+    assert first("evirmek", "V;PASS;PST;3;SG") == "evrildi"
+    assert first("demlemek", "V;PROG;3;SG") == "demliyor"
+    # nouns: -log loans soften g (jeoloğu), -oit and -it loans voice t (asteroidi, oksidi), lokavt and
+    # mahkumiyet keep it, temettü takes -I without s (TDK spelling entries — from memory)
+    assert first("jeolog", "N;SG;ACC") == "jeoloğu"
+    assert first("asteroit", "N;SG;ACC") == "asteroidi"
+    assert first("oksit", "N;SG;DAT") == "okside"
+    assert first("lokavt", "N;SG;ACC") == "lokavtı"
+    assert first("mahkumiyet", "N;SG;DAT") == "mahkumiyete"
+    assert first("temettü", "N;SG;PSS3S;NOM") == "temettüü"
+    # kuşburnu 'rose hip' is a compound with the possessive; burun loses its vowel only before it
+    # (kuşburnunu, kuşburunları) (G&K ch. 10, compounds with the possessive — from memory)
+    assert first("kuşburnu", "N;SG;ACC") == "kuşburnunu"
+    assert first("kuşburnu", "N;PL;NOM") == "kuşburunları"
