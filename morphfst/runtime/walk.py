@@ -362,11 +362,13 @@ class ArcWalker:
         With ``best``, only the best paths are sought: at each input position a state keeps only the
         partial paths (from there to the end) of its lowest weight, ties kept, which is exact for the
         best complete paths because what leads to a state costs the same whichever way it continues.
+        (The walk in C, when it takes the word, returns every path, ranked: the best ones first.)
         """
         if self.start == NO_STATE_ID:
             return []
-        if self._native is not None and not best:
-            paths = self._native.paths(word, MAX_LIVE, limit)  # ranked as _ranked ranks
+        if self._native is not None:
+            # every path, ranked as _ranked ranks (with ``best``, the best come first: what is asked for)
+            paths = self._native.paths(word, MAX_LIVE, limit)
             if paths is not None:
                 return paths
         found = self._forward(word)
