@@ -85,3 +85,17 @@ def test_split_line_has_the_shape_of_the_simple_splitter() -> None:
     line = "Evlerde, kitaplar var."
     assert [t for t, w in split_line(line, TOK) if w] == ["Evlerde", "kitaplar", "var"]
     assert "".join(t for t, _ in split_line(line, TOK)) == line
+
+
+def test_the_combining_mark_class_has_every_mark_of_the_unicode_database() -> None:
+    # Unicode general category M (Mn, Mc, Me), as Python's unicodedata gives it (a published standard)
+    import re
+    import sys
+    import unicodedata
+
+    from morphfst.runtime.tokenize import combining_marks
+
+    marks = re.compile(f"[{combining_marks()}]")
+    every = [chr(cp) for cp in range(sys.maxunicode + 1) if unicodedata.category(chr(cp))[0] == "M"]
+    assert every and all(marks.fullmatch(c) for c in every)
+    assert not marks.search("aA9 -'\u4e00\U00020000")
