@@ -203,3 +203,15 @@ def test_malformed_arrays_are_refused() -> None:
         _cwalk.Walker(first, ilabel, olabel, ilabel, nxt, final, 0, "")  # weights must be doubles
     with pytest.raises(ValueError):
         _cwalk.Walker(first, ilabel, olabel, weight, nxt, final[:1], 0, "")  # states disagree
+
+
+def test_info_says_which_walk_analyzes(
+    tur: morphfst.Language, capsys: pytest.CaptureFixture[str], monkeypatch: pytest.MonkeyPatch
+) -> None:
+    from morphfst.cli import main
+
+    assert main(["info", "-l", tur.path or "tur"]) == 0
+    assert "analysis walk: in C" in capsys.readouterr().out
+    monkeypatch.setenv(native.PURE_PYTHON_ENV, "1")
+    assert main(["info", "-l", tur.path or "tur"]) == 0
+    assert "analysis walk: in Python" in capsys.readouterr().out

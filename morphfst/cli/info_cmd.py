@@ -58,6 +58,14 @@ def run(args: argparse.Namespace) -> int:
                 form = "".join(a["form"]) or "∅"
                 nxt = f" -> {' '.join(a['next'])}" if a["next"] else ""
                 w(f"    {form:<12} {';'.join(a['features']):<16} {a['gloss']}{nxt}\n")
+    from ..runtime import native
+
+    walk = (
+        "in C (morphfst.runtime._cwalk)"
+        if native.available()
+        else "in Python (the C extension is not built, or MORPHFST_PURE_PYTHON is set)"
+    )
+    w(f"  analysis walk: {walk}\n")
     w("transducers:\n")
     for name, stat in lang.stats().items():
         w(f"  {name:<10} {stat['states']:>8} states {stat['arcs']:>9} arcs\n")
