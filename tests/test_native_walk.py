@@ -215,3 +215,14 @@ def test_info_says_which_walk_analyzes(
     monkeypatch.setenv(native.PURE_PYTHON_ENV, "1")
     assert main(["info", "-l", tur.path or "tur"]) == 0
     assert "analysis walk: in Python" in capsys.readouterr().out
+
+
+def test_threads_walking_at_once_get_the_paths_of_one_thread(tur: morphfst.Language) -> None:
+    from concurrent.futures import ThreadPoolExecutor
+
+    words = _words(tur, "tur", every=40)[:1500]
+    walker = tur.fast.bounded
+    alone = [walker.walk(w) for w in words]
+    with ThreadPoolExecutor(4) as pool:
+        together = list(pool.map(walker.walk, words, chunksize=7))
+    assert all(_same(a, b) for a, b in zip(alone, together))

@@ -102,6 +102,9 @@ typedef struct {
     /* the last word's figures: (position, state) pairs and edges of the forward pass */
     Py_ssize_t last_pairs, last_edges, last_looked;
     int back_edges; /* some edge of the last word leads to a pair added no later than its source */
+    /* set while a word is walked: building the result objects can run a finalizer that lets another
+     * thread in, and a second word must not reuse the scratch buffers of the first (it gets None) */
+    int busy;
 } Walker;
 
 static int grow(void **p, size_t *cap, size_t need, size_t item) {
@@ -537,7 +540,8 @@ static PyObject *Walker_paths(Walker *w, PyObject *args) {
     Py_UCS4 word[MAX_WORD + 1];
     int ok = word_of(text, word, &n);
     if (ok < 0) return NULL;
-    if (!ok) Py_RETURN_NONE;
+    if (!ok || w->busy) Py_RETURN_NONE;
+    w->busy = 1;
     size_t npairs = 0;
     long long nedges = forward(w, word, n, &npairs);
     PyObject *result = NULL;
@@ -547,6 +551,7 @@ static PyObject *Walker_paths(Walker *w, PyObject *args) {
         int live = mark_useful(w, npairs, n);
         result = live ? search(w, word, n, max_paths, limit) : PyList_New(0);
     }
+    w->busy = 0;
     return result;
 }
 
@@ -558,9 +563,9 @@ static PyObject *Walker_accepts(Walker *w, PyObject *args) {
     Py_UCS4 word[MAX_WORD + 1];
     int ok = word_of(text, word, &n);
     if (ok < 0) return NULL;
-    if (!ok) Py_RETURN_NONE;
+    if (!ok || w->busy) Py_RETURN_NONE;
     size_t npairs = 0;
-    long long nedges = forward(w, word, n, &npairs);
+    long long nedges = forward(w, word, n, &npairs); /* no Python object is made: no other thread runs */
     if (nedges == -1) return NULL;
     if (nedges == -2) Py_RETURN_NONE;
     for (size_t p = 0; p < npairs; p++)
