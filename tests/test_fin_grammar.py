@@ -875,3 +875,58 @@ def test_postpositions_in_n_and_ksi_take_possessive_suffixes(fin: morphfst.Langu
         ("kanssani", "kanssa ADP;PSS1S"),
     ]:
         assert fin.analyze(word)[0].text == text
+
+
+def test_lexicalized_participles_rank_before_the_verb(fin: morphfst.Language) -> None:
+    # common practice (Finnish dictionaries list seuraava, tuleva, merkittävä, kuollut, tunnettu,
+    # tuntematon and the nouns in -minen as words of their own): the lexicon adjective or noun comes
+    # first, the participle of its verb after it
+    for word, text in [
+        ("seuraava", "seuraava ADJ;SG;NOM"),
+        ("tulevan", "tuleva ADJ;SG;GEN"),
+        ("merkittävä", "merkittävä ADJ;SG;NOM"),
+        ("kuollut", "kuollut ADJ;SG;NOM"),
+        ("tunnetut", "tunnettu ADJ;PL;NOM"),
+        ("tuntematon", "tuntematon ADJ;SG;NOM"),
+        ("oppiminen", "oppiminen N;SG;NOM"),
+    ]:
+        analyses = [a.text for a in fin.analyze(word)]
+        assert analyses[0] == text
+        assert any("V.PTCP" in a or "V.MSDR" in a for a in analyses[1:])
+    # a participle with no lexicon homograph keeps its verb reading (common practice)
+    assert fin.analyze("tekevä")[0].text == "tehdä V;V.PTCP;ACT;PRS;ADJ;SG;NOM"
+    assert fin.analyze("tullut")[0].text == "tulla V;V.PTCP;ACT;PST;ADJ;SG;NOM"
+
+
+def test_rule_gaps_of_aika_intae_liene_and_kotoaan(fin: morphfst.Language) -> None:
+    # Karlsson (3rd ed., 2018), aika : ajan, also as the last part of a compound — from memory
+    assert fin.analyze("kellonajan")[0].text == "kellonaika N;SG;GEN"
+    assert fin.analyze("kellonaian") == []
+    assert [f.form for f in fin.generate("vuodenaika", "N;PL;IN+ESS")] == ["vuodenajoissa"]
+    assert [f.form for f in fin.generate("lounasaika", "N;SG;GEN")] == ["lounasajan"]
+    assert [f.form for f in fin.generate("taika", "N;SG;GEN")] == ["taian"]
+    # Kotus word list inflection types, -intä nouns round ä to ö before the plural i like -nta
+    # nouns (merkintöjä as tarjontoja) — from memory
+    assert [f.form for f in fin.generate("merkintä", "N;PL;PRT")] == ["merkintöjä"]
+    assert [f.form for f in fin.generate("etsintä", "N;PL;GEN")][0] == "etsintöjen"
+    # Karlsson (3rd ed., 2018), the potential of olla: lienee, and its connegative ei liene — from memory
+    assert fin.analyze("liene")[0].text == "olla V;POT;NEG"
+    assert fin.analyze("lienee")[0].text == "olla V;POT;3;SG"
+    # Karlsson (3rd ed., 2018), adverbs of place with possessive suffixes: kotonaan, kotoaan — from memory
+    assert fin.analyze("kotoaan")[0].text == "kotoa ADV;PSS3S"
+
+
+def test_added_verbs_and_adjectives_inflect_by_their_type(fin: morphfst.Language) -> None:
+    # Kotus word list inflection types (52F heittäytyä, 54K kaivertaa, 67J käännellä, 72 himmetä,
+    # 73B siepata, 41A sisukas, 33 vahvistin) — from memory
+    for lemma, features, form in [
+        ("heittäytyä", "V;IND;PRS;1;SG", "heittäydyn"),
+        ("kaivertaa", "V;IND;PST;3;SG", "kaiversi"),
+        ("käännellä", "V;IND;PRS;1;SG", "kääntelen"),
+        ("himmetä", "V;IND;PRS;3;SG", "himmenee"),
+        ("siepata", "V;IND;PRS;1;SG", "sieppaan"),
+        ("sisukas", "ADJ;SG;GEN", "sisukkaan"),
+        ("vahvistin", "N;SG;GEN", "vahvistimen"),
+        ("ahdasmielinen", "ADJ;SG;PRT", "ahdasmielistä"),
+    ]:
+        assert [f.form for f in fin.generate(lemma, features)][0] == form
