@@ -727,8 +727,14 @@ def test_verbs_and_nouns_added_by_hand(tur: morphfst.Language) -> None:
 
     # one-syllable roots in -Ar (kıyar, sıçar, burar, söğer, derer) and longer stems in -Ir
     # (göğerir, salıverir) (TDK Güncel Türkçe Sözlük, the aorist given with each verb — from memory)
-    for lemma, aorist in [("kıymak", "kıyar"), ("burmak", "burar"), ("söğmek", "söğer"),
-                          ("dermek", "derer"), ("göğermek", "göğerir"), ("salıvermek", "salıverir")]:
+    for lemma, aorist in [
+        ("kıymak", "kıyar"),
+        ("burmak", "burar"),
+        ("söğmek", "söğer"),
+        ("dermek", "derer"),
+        ("göğermek", "göğerir"),
+        ("salıvermek", "salıverir"),
+    ]:
         assert first(lemma, "V;HAB;3;SG") == aorist, lemma
     # -etmek compounds voice the t before a vowel (bahşeder, bahşedildi); evirmek loses its vowel
     # before the passive (evrildi) (G&K 2.4 and ch. 8 — from memory)
@@ -748,3 +754,43 @@ def test_verbs_and_nouns_added_by_hand(tur: morphfst.Language) -> None:
     # (kuşburnunu, kuşburunları) (G&K ch. 10, compounds with the possessive — from memory)
     assert first("kuşburnu", "N;SG;ACC") == "kuşburnunu"
     assert first("kuşburnu", "N;PL;NOM") == "kuşburunları"
+
+
+def test_lexicon_nouns_in_yis_before_the_verbal_noun_and_the_reciprocal(tur: morphfst.Language) -> None:
+    # -(y)Iş nouns with a meaning of their own are dictionary words and read first as themselves:
+    # geliş 'arrival', görüş 'view', çıkış 'exit', bakış 'look', giriş 'entrance', dönüş 'return',
+    # yürüyüş 'walk, march', anlayış 'understanding' (TDK Güncel Türkçe Sözlük, headwords — from
+    # memory; a dictionary word before a derivation that spells it is common practice)
+    for word, best in [
+        ("geliş", "geliş N;SG;NOM"),
+        ("görüş", "görüş N;SG;NOM"),
+        ("görüşleri", "görüş N;PL;ACC"),
+        ("çıkış", "çıkış N;SG;NOM"),
+        ("bakış", "bakış N;SG;NOM"),
+        ("giriş", "giriş N;SG;NOM"),
+        ("dönüş", "dönüş N;SG;NOM"),
+        ("yürüyüş", "yürüyüş N;SG;NOM"),
+        ("anlayışı", "anlayış N;SG;ACC"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    # the verbal noun of the verb and the reciprocal's imperative stay among the readings (G&K ch. 13
+    # and 24, the reciprocal and -(y)Iş — from memory)
+    assert "gelmek V;V.MSDR;N;SG;NOM" in [a.text for a in tur.analyze("geliş")]
+    assert "gelmek V;RECP;IMP;2;SG" in [a.text for a in tur.analyze("geliş")]
+    # for a verb whose -(y)Iş noun the lexicon lacks, the verbal noun comes before the reciprocal's
+    # imperative: okuyuş 'way of reading', yazış 'way of writing' (Lewis 2000, the suffix -iş — from
+    # memory)
+    assert tur.analyze("okuyuş")[0].text == "okumak V;V.MSDR;N;SG;NOM"
+    assert tur.analyze("yazış")[0].text == "yazmak V;V.MSDR;N;SG;NOM"
+    # a reflexive or reciprocal verb in the lexicon comes before the voice built on its root:
+    # gelişti 'developed', görüştük 'we met', göründü 'appeared', edinmek 'acquire' (TDK Güncel
+    # Türkçe Sözlük, headwords — from memory)
+    for word, best in [
+        ("gelişti", "gelişmek V;PST;3;SG"),
+        ("görüştük", "görüşmek V;PST;1;PL"),
+        ("göründü", "görünmek V;PST;3;SG"),
+        ("edinmek", "edinmek V;NFIN;NOM"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    # a voice the lexicon lacks is still built: giymek + reflexive (G&K ch. 13 — from memory)
+    assert "giymek V;REFL;PST;3;SG" in [a.text for a in tur.analyze("giyindi")]
