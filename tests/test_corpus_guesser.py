@@ -124,10 +124,10 @@ def test_the_first_guess_finds_the_suffixes_of_an_unknown_word(
         # Finnish loans inflect by the standard word list's types (from memory): a consonant-final
         # loan takes an -i stem as type 5 (podcast: podcastin, podcasteissa), -i nouns likewise
         # (meemi: meemeissä), -us nouns are type 39 (striimaus: striimauksen), -ata verbs type 73
-        # (striimata: striimaamassa, the third infinitive's inessive)
+        # (tiktokkata: tiktokkaamassa, the third infinitive's inessive)
         ("podcasteissa", "podcaste-i-ssa", "podcast N;PL;IN+ESS"),
         ("striimauksen", "striimaukse-n", "striimaus N;SG;GEN"),
-        ("striimaamassa", "striimaa-massa", "striimata V;NFIN;INF3;IN+ESS"),
+        ("tiktokkaamassa", "tiktokkaa-massa", "tiktokkata V;NFIN;INF3;IN+ESS"),
     ],
 )
 def test_the_first_finnish_guess_finds_the_inflection_type(
