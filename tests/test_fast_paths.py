@@ -12,6 +12,7 @@ from pathlib import Path
 import pynini
 import pytest
 from toygrammar import TOY_LEXICON, write_toy
+from walk_helpers import epsilon_cycle
 
 import morphfst
 from morphfst import build
@@ -235,16 +236,8 @@ def test_glosses_found_in_the_text_are_the_parsed_glosses(tur: morphfst.Language
 
 
 def test_the_walk_ends_on_a_cycle_of_arcs_that_read_nothing() -> None:
-    # 0 -a:a-> 2 (final), and a loop 0 -eps:x-> 1 -eps:y-> 0 that reads nothing: the recursive fold
-    # meets the cycle and falls back to the depth-bounded closure.
-    fst = pynini.Fst()
-    s0, s1, s2 = fst.add_state(), fst.add_state(), fst.add_state()
-    fst.set_start(s0)
-    fst.set_final(s2)
-    fst.add_arc(s0, Arc(ord("a"), ord("a"), 0.0, s2))
-    fst.add_arc(s0, Arc(0, ord("x"), 1.0, s1))
-    fst.add_arc(s1, Arc(0, ord("y"), 0.0, s0))
-    found = walk.ArcWalker(fst).walk("a")
+    # the recursive fold meets the cycle and falls back to the depth-bounded closure
+    found = walk.ArcWalker(epsilon_cycle()).walk("a")
     outputs = [out for _, out, _ in found]
     assert outputs[:3] == ["a", "xya", "xyxya"]
     assert len(found) == walk.MAX_CLOSURE_DEPTH // 2 + 1

@@ -14,6 +14,7 @@ import pynini
 import pytest
 from hypothesis import HealthCheck, given, settings
 from hypothesis import strategies as st
+from walk_helpers import epsilon_cycle
 
 import morphfst
 from morphfst.compile.arctable import PackedArcs, pack
@@ -175,15 +176,7 @@ def test_more_paths_than_kept_live_are_left_to_the_python_walk() -> None:
 
 
 def test_a_cycle_of_arcs_that_read_nothing_is_left_to_the_python_walk() -> None:
-    # as in test_fast_paths: 0 -a:a-> 2 (final) and a loop 0 -eps:x-> 1 -eps:y-> 0
-    fst = pynini.Fst()
-    s0, s1, s2 = fst.add_state(), fst.add_state(), fst.add_state()
-    fst.set_start(s0)
-    fst.set_final(s2)
-    fst.add_arc(s0, Arc(ord("a"), ord("a"), 0.0, s2))
-    fst.add_arc(s0, Arc(0, ord("x"), 1.0, s1))
-    fst.add_arc(s1, Arc(0, ord("y"), 0.0, s0))
-    walker = _packed(fst)
+    walker = _packed(epsilon_cycle())
     assert walker._native.paths("a", walk.MAX_LIVE) is None  # type: ignore[union-attr]
     outputs = [out for _, out, _ in walker.walk("a")]
     assert outputs[:3] == ["a", "xya", "xyxya"] and len(outputs) == walk.MAX_CLOSURE_DEPTH // 2 + 1
