@@ -2,10 +2,12 @@
 
 from __future__ import annotations
 
+import unicodedata
+
 from hypothesis import given, settings
 from hypothesis import strategies as st
 
-from morphfst.runtime.tokenize import Tokenizer, split_line
+from morphfst.runtime.tokenize import EDGE_PUNCTUATION, ZERO_WIDTH_JOINERS, Tokenizer, split_line
 
 TOK = Tokenizer(("'", "’"))
 
@@ -99,3 +101,26 @@ def test_the_combining_mark_class_has_every_mark_of_the_unicode_database() -> No
     every = [chr(cp) for cp in range(sys.maxunicode + 1) if unicodedata.category(chr(cp))[0] == "M"]
     assert every and all(marks.fullmatch(c) for c in every)
     assert not marks.search("aA9 -'\u4e00\U00020000")
+
+
+# The fast path of tokens() and tokens_and_newlines() cuts at white space and strips edge punctuation
+# before it falls back to the regular expression: it must give exactly what the expression gives.
+FAST_PATH_ALPHABET = (
+    ALPHABET + EDGE_PUNCTUATION + ZERO_WIDTH_JOINERS + "\u02bc\u0301\u093f\u0915\n\r\x0b\x0c\x1c\x85\u2028\u200b\u3000²½٣"
+)
+
+
+@settings(max_examples=400, deadline=None)
+@given(st.text(alphabet=FAST_PATH_ALPHABET, max_size=80))
+def test_fast_tokens_are_the_regular_expression_tokens(text: str) -> None:
+    assert TOK.tokens_and_newlines(text) == TOK.word_or_newline_re.findall(text)
+    for line in text.split("\n"):
+        assert TOK.tokens(line) == TOK.word_re.findall(line)
+
+
+def test_edge_punctuation_joins_nothing() -> None:
+    """No edge character is a letter, digit, combining mark or zero-width joiner (the condition under
+    which stripping it from a piece's edges leaves the tokens unchanged)."""
+    for ch in EDGE_PUNCTUATION:
+        assert not ch.isalnum() and not ch.isspace(), repr(ch)
+        assert unicodedata.category(ch)[0] != "M" and ch not in ZERO_WIDTH_JOINERS, repr(ch)

@@ -32,6 +32,9 @@ from typing import Any
 DEFAULT_APOSTROPHES = ("'", "\u2019", "\u02bc")  # ASCII apostrophe, right single quotation mark, modifier letter apostrophe
 HYPHENS = "-\u2010\u2011"  # hyphen-minus, hyphen, non-breaking hyphen
 ZERO_WIDTH_JOINERS = "\u200c\u200d"  # zero-width non-joiner and joiner, inside words of Indic and Arabic scripts
+# punctuation often written against a word (.,;:!? brackets, quotes, dashes, apostrophes): stripped from a
+# piece's edges before the fast check of :meth:`Tokenizer._add_tokens` (no letter, digit or combining mark)
+EDGE_PUNCTUATION = ".,;:!?()[]{}<>\"'`«»“”„‘’‚‹›…-–—/*\u2010\u2011"
 
 
 @lru_cache(maxsize=1)
@@ -96,12 +99,47 @@ class Tokenizer:
 
     # ---- tokens only (the fast path used on corpora) ------------------------------------------------
     def tokens(self, line: str) -> list[str]:
-        """The word tokens of ``line``, in order."""
-        return self.word_re.findall(line)
+        """The word tokens of ``line``, in order (the same as ``word_re.findall(line)``; see
+        :meth:`_add_tokens`)."""
+        out: list[str] = []
+        self._add_tokens(line, out)
+        return out
 
     def tokens_and_newlines(self, text: str) -> list[str]:
-        """The word tokens of a text of several lines, with a ``"\\n"`` item at each line end."""
-        return self.word_or_newline_re.findall(text)
+        """The word tokens of a text of several lines, with a ``"\\n"`` item at each line end (the same
+        as ``word_or_newline_re.findall(text)``, about twice as fast: see :meth:`_add_tokens`)."""
+        out: list[str] = []
+        lines = text.split("\n")
+        last = lines.pop()
+        add = self._add_tokens
+        for line in lines:
+            add(line, out)
+            out.append("\n")
+        add(last, out)
+        return out
+
+    def _add_tokens(self, line: str, out: list[str]) -> None:
+        """Append the word tokens of one line (no ``"\\n"`` in it) to ``out``.
+
+        No token holds white space, so the line is cut at white space first (``str.split``) and each
+        piece read on its own. Most pieces are one token as they stand (every character a letter or a
+        digit: ``str.isalnum``, the very class ``[^\\W_]`` of the regular expression); a piece with
+        punctuation at its edges only is one token once they are stripped (an edge character of
+        :data:`EDGE_PUNCTUATION` joins nothing: a joiner needs a letter on both sides, and those
+        characters are neither letters nor combining marks). Any other piece goes through the regular
+        expression, which gives the same tokens on the piece as on the whole line (its look-arounds
+        see only letters, digits and joiners, which white space never is)."""
+        findall = self.word_re.findall
+        append = out.append
+        for piece in line.split():
+            if piece.isalnum():
+                append(piece)
+                continue
+            core = piece.strip(EDGE_PUNCTUATION)
+            if core.isalnum():
+                append(core)
+            elif core:
+                out.extend(findall(piece))
 
     def spans(self, line: str) -> list[tuple[int, str]]:
         """(start offset, text) of every word token of ``line``."""
