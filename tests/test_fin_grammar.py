@@ -417,6 +417,17 @@ REVIEWED = (
     + cells("raha", "N", "CAR;ADJ;SG;NOM=rahaton CAR;ADJ;SG;GEN=rahattoman")
     + cells("mies", "N", "CAR;ADJ;SG;NOM=miehetön")
     + cells("käsi", "N", "CAR;ADJ;PL;NOM=kädettömät")
+    # Karlsson (3rd ed., 2018), the agent noun -jA on the strong vowel stem, e -> i (lukija, tekijä,
+    # juoksija, valitsija, ottaja, pelaaja, hyppääjä); after i of type 12 (lukijoita, tekijöitä), else of
+    # type 10 (ottajia, uijia) — from memory
+    + cells("lukea", "V", "AGTN;N;SG;NOM=lukija AGTN;N;SG;GEN=lukijan AGTN;N;PL;PRT=lukijoita")
+    + cells("tehdä", "V", "AGTN;N;SG;NOM=tekijä AGTN;N;PL;PRT=tekijöitä AGTN;N;PL;GEN=tekijöiden")
+    + cells("juosta", "V", "AGTN;N;SG;NOM=juoksija")
+    + cells("valita", "V", "AGTN;N;SG;NOM=valitsija AGTN;N;PL;AT+ALL=valitsijoille")
+    + cells("ottaa", "V", "AGTN;N;SG;NOM=ottaja AGTN;N;PL;PRT=ottajia AGTN;N;SG;IN+ESS=ottajassa")
+    + cells("pelata", "V", "AGTN;N;SG;NOM=pelaaja AGTN;N;PL;GEN=pelaajien")
+    + cells("hypätä", "V", "AGTN;N;SG;NOM=hyppääjä")
+    + cells("uida", "V", "AGTN;N;SG;NOM=uija AGTN;N;PL;PRT=uijia")
     # Kotus word list: veli has the stem velje- (veljen, veljeä, veljet, veljiä) — from memory
     + cells("veli", "N", "SG;NOM=veli SG;GEN=veljen SG;PRT=veljeä PL;NOM=veljet PL;PRT=veljiä SG;NOM;PSS1S=veljeni")
     + cells("pikkuveli", "N", "SG;NOM=pikkuveli SG;AT+ALL=pikkuveljelle")
