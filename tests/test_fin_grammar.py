@@ -428,6 +428,12 @@ REVIEWED = (
     + cells("pelata", "V", "AGTN;N;SG;NOM=pelaaja AGTN;N;PL;GEN=pelaajien")
     + cells("hypätä", "V", "AGTN;N;SG;NOM=hyppääjä")
     + cells("uida", "V", "AGTN;N;SG;NOM=uija AGTN;N;PL;PRT=uijia")
+    # Karlsson (3rd ed., 2018), the quality noun -UUs (type 40) of the adjectives in -inen and -tOn
+    # (rehellisyys, ystävällisyys, työttömyys, kodittomuus) — from memory
+    + cells("rehellinen", "ADJ", "ABSTR;N;SG;NOM=rehellisyys ABSTR;N;SG;GEN=rehellisyyden ABSTR;N;PL;PRT=rehellisyyksiä")
+    + cells("ystävällinen", "ADJ", "ABSTR;N;SG;IN+ALL=ystävällisyyteen")
+    + cells("työtön", "ADJ", "ABSTR;N;SG;NOM=työttömyys ABSTR;N;SG;IN+ABL=työttömyydestä")
+    + cells("koditon", "ADJ", "ABSTR;N;SG;NOM=kodittomuus ABSTR;N;SG;PRT=kodittomuutta")
     # Kotus word list: veli has the stem velje- (veljen, veljeä, veljet, veljiä) — from memory
     + cells("veli", "N", "SG;NOM=veli SG;GEN=veljen SG;PRT=veljeä PL;NOM=veljet PL;PRT=veljiä SG;NOM;PSS1S=veljeni")
     + cells("pikkuveli", "N", "SG;NOM=pikkuveli SG;AT+ALL=pikkuveljelle")
