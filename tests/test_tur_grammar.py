@@ -794,3 +794,19 @@ def test_lexicon_nouns_in_yis_before_the_verbal_noun_and_the_reciprocal(tur: mor
         assert tur.analyze(word)[0].text == best, word
     # a voice the lexicon lacks is still built: giymek + reflexive (G&K ch. 13 — from memory)
     assert "giymek V;REFL;PST;3;SG" in [a.text for a in tur.analyze("giyindi")]
+
+
+def test_the_relative_ki_after_a_bare_noun_only_after_time_nouns(tur: morphfst.Language) -> None:
+    # -ki makes an adjective of a locative or genitive (evdeki, benimki) and, without a case, of a
+    # time word only: geçen yılki, o zamanki, akşamki, dünkü, bugünkü with -kü after ün (G&K ch. 8,
+    # the relative suffix -ki — from memory)
+    for word, lemma in [("yılki", "yıl"), ("zamanki", "zaman"), ("akşamki", "akşam"), ("günkü", "gün"), ("seneki", "sene")]:
+        assert tur.analyze(word)[0].text == f"{lemma} N;SG;NOM;RELZ;NOM", word
+    assert [f.form for f in tur.generate("gün", "N;SG;NOM;RELZ;NOM")] == ["günkü"]
+    assert tur.analyze("evdeki")[0].text == "ev N;SG;LOC;RELZ;NOM"
+    # not after other nouns: içki 'drink' is no *iç-ki, telkini is telkin 'suggestion' + accusative
+    # (common practice)
+    assert all("RELZ" not in a.text for a in tur.analyze("içki"))
+    assert [a.text for a in tur.analyze("telkini")][:1] == ["telkin N;SG;ACC"]
+    # the rounded -kü only across a suffix boundary, never inside a stem (Türkiye)
+    assert tur.analyze("Türkiye")[0].lemma == "Türkiye"
