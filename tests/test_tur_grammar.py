@@ -810,3 +810,9 @@ def test_the_relative_ki_after_a_bare_noun_only_after_time_nouns(tur: morphfst.L
     assert [a.text for a in tur.analyze("telkini")][:1] == ["telkin N;SG;ACC"]
     # the rounded -kü only across a suffix boundary, never inside a stem (Türkiye)
     assert tur.analyze("Türkiye")[0].lemma == "Türkiye"
+
+
+def test_passive_vowel_loss_of_cagirmak(tur: morphfst.Language) -> None:
+    # çağırmak 'call': passive çağrılmak, çağrıldı (TDK spelling dictionary entry 'çağrılmak' — from memory)
+    assert [f.form for f in tur.generate("çağırmak", "V;PASS;PST;3;SG")] == ["çağrıldı"]
+    assert tur.analyze("çağrıldı")[0].text == "çağırmak V;PASS;PST;3;SG"
