@@ -478,8 +478,6 @@ REJECTED = [
     "şuyla",  # şununla
     "yeraldı",  # a compound ending in a one-syllable noun keeps its stop (yeraltı: alt-ı)
     "gözaldında",
-    "katalogu",  # a loan in -og of two syllables softens its g (kataloğu; TDK spelling, from memory)
-    "psikologa",
 ]
 
 
@@ -816,3 +814,25 @@ def test_passive_vowel_loss_of_cagirmak(tur: morphfst.Language) -> None:
     # çağırmak 'call': passive çağrılmak, çağrıldı (TDK spelling dictionary entry 'çağrılmak' — from memory)
     assert [f.form for f in tur.generate("çağırmak", "V;PASS;PST;3;SG")] == ["çağrıldı"]
     assert tur.analyze("çağrıldı")[0].text == "çağırmak V;PASS;PST;3;SG"
+
+
+def test_words_written_without_the_turkish_letters(tur: morphfst.Language) -> None:
+    # informal writing on keyboards without ç ğ ı ö ş ü (common practice in web text): the word is
+    # read as the Turkish word, at a cost, and never generated so
+    assert tur.analyze("gercekten")[0].text == "gerçekten ADV"
+    assert tur.analyze("icin")[0].text == "için ADP"
+    assert tur.analyze("oldugunu")[0].lemma == "olmak"
+    assert tur.analyze("cocuklari")[0].lemma == "çocuk"
+    assert tur.analyze("gercekten")[0].weight > tur.analyze("gerçekten")[0].weight
+    assert [f.form for f in tur.generate("çocuk", "N;PL;NOM")] == ["çocuklar"]
+    # a word's own reading comes before a plain spelling of another (acıyor 'it hurts' before
+    # açıyor 'opens' with its ç written plain)
+    assert tur.analyze("acıyor")[0].lemma == "acımak"
+    # a word that is itself Turkish keeps its own reading first (kurs 'course', not kürs)
+    assert tur.analyze("kurs")[0].text == "kurs N;SG;NOM"
+    # katalogu, psikologa: a loan in -og of two syllables softens its g (kataloğu, psikoloğa; TDK
+    # spelling, from memory); written with g they are only the plain spelling of those, at its cost
+    for plain, proper in [("katalogu", "kataloğu"), ("psikologa", "psikoloğa")]:
+        found = tur.analyze(plain)
+        assert found and found[0].weight >= tur.analyze(proper)[0].weight + 4.0, plain
+    assert [f.form for f in tur.generate("katalog", "N;SG;ACC")] == ["kataloğu"]
