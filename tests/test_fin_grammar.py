@@ -947,3 +947,10 @@ def test_added_verbs_and_adjectives_inflect_by_their_type(fin: morphfst.Language
         ("ahdasmielinen", "ADJ;SG;PRT", "ahdasmielistä"),
     ]:
         assert [f.form for f in fin.generate(lemma, features)][0] == form
+
+
+def test_foreign_names_with_u_umlaut(fin: morphfst.Language) -> None:
+    # ü is a front vowel in Finnish spelling of foreign names: Münchenissä, Zürichiin (common
+    # practice, from memory)
+    assert [f.form for f in fin.generate("München", "PROPN;SG;IN+ESS")] == ["Münchenissä"]
+    assert fin.analyze("Zürichiin")[0].text == "Zürich PROPN;SG;IN+ALL"

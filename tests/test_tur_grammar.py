@@ -836,3 +836,10 @@ def test_words_written_without_the_turkish_letters(tur: morphfst.Language) -> No
         found = tur.analyze(plain)
         assert found and found[0].weight >= tur.analyze(proper)[0].weight + 4.0, plain
     assert [f.form for f in tur.generate("katalog", "N;SG;ACC")] == ["kataloğu"]
+
+
+def test_x_is_voiceless(tur: morphfst.Language) -> None:
+    # x is said ks, so a suffix's D and C after it are voiceless: Netflix'te, Marx'ta (TDK spelling
+    # rules on suffixes after foreign names follow pronunciation — from memory)
+    assert [f.form for f in tur.generate("Netflix", "PROPN;SG;LOC")] == ["Netflix'te"]
+    assert tur.analyze("Marx'ta")[0].text == "Marx PROPN;SG;LOC"
