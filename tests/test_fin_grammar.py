@@ -954,3 +954,10 @@ def test_foreign_names_with_u_umlaut(fin: morphfst.Language) -> None:
     # practice, from memory)
     assert [f.form for f in fin.generate("München", "PROPN;SG;IN+ESS")] == ["Münchenissä"]
     assert fin.analyze("Zürichiin")[0].text == "Zürich PROPN;SG;IN+ALL"
+
+
+def test_singular_first_where_the_plural_is_spelt_alike(fin: morphfst.Language) -> None:
+    # maanantaina 'on Monday': the singular essive (a plural i merges with the stem's i) — common
+    # practice, from memory
+    assert fin.analyze("maanantaina")[0].text == "maanantai N;SG;ESS"
+    assert fin.analyze("valmiina")[0].text == "valmis ADJ;SG;ESS"
