@@ -486,7 +486,9 @@ class Compiler:
         """Bounded surface → internal analysis of guessed words (``None`` when no class has a guess pattern).
 
         Each class's guessed stems enter the class's slot graph and go through the same constraints,
-        rule cascade and final step as lexicon stems; the internal analysis carries the guess marker
+        rule cascade (without its lenient rules: an unknown word is guessed as written; the Turkish
+        rule for letters written plain tripled a guess's cost and changed no guess's quality) and
+        final step as lexicon stems; the internal analysis carries the guess marker
         right after the part of speech. Each affix with a surface form costs :data:`GUESS_MORPH_WEIGHT`
         besides its features' weights, against :data:`GUESS_STEM_WEIGHT` for each stem letter it saves.
         """
@@ -502,6 +504,8 @@ class Compiler:
         if filt is not None:
             fst = pynini.compose(filt, fst)
         for rule in self.g.rules:
+            if rule.lenient:
+                continue
             fst = pynini.compose(fst, self.rule_fst(rule))
         fst = pynini.compose(fst, self.final_step())
         morph_cost = union([chars(self.letter_codes), acc(self.plus, weight=GUESS_MORPH_WEIGHT)]).closure()
