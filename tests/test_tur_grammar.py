@@ -828,6 +828,11 @@ def test_words_written_without_the_turkish_letters(tur: morphfst.Language) -> No
     # a word's own reading comes before a plain spelling of another (acıyor 'it hurts' before
     # açıyor 'opens' with its ç written plain)
     assert tur.analyze("acıyor")[0].lemma == "acımak"
+    # a capital I typed for İ is lower-cased to ı (the Turkish rule), so Istanbul, Icin are read too;
+    # a word with its own ı keeps its reading (ılık)
+    assert tur.analyze("Istanbul")[0].text == "İstanbul PROPN;SG;NOM"
+    assert tur.analyze("Icin")[0].text == "için ADP"
+    assert tur.analyze("ılık")[0].text == "ılık ADJ;SG;NOM"
     # a word that is itself Turkish keeps its own reading first (kurs 'course', not kürs)
     assert tur.analyze("kurs")[0].text == "kurs N;SG;NOM"
     # katalogu, psikologa: a loan in -og of two syllables softens its g (kataloğu, psikoloğa; TDK
