@@ -124,3 +124,16 @@ def test_edge_punctuation_joins_nothing() -> None:
     for ch in EDGE_PUNCTUATION:
         assert not ch.isalnum() and not ch.isspace(), repr(ch)
         assert unicodedata.category(ch)[0] != "M" and ch not in ZERO_WIDTH_JOINERS, repr(ch)
+
+
+@settings(max_examples=300, deadline=None)
+@given(st.text(alphabet=FAST_PATH_ALPHABET, max_size=120))
+def test_distinct_tokens_are_the_tokens_in_first_seen_order(text: str) -> None:
+    # what a Dask partition's survey lists: every distinct token, each distinct piece read once
+    every = TOK.word_or_newline_re.findall(text)
+    assert TOK.distinct_tokens(text) == [t for t in dict.fromkeys(every) if t != "\n"]
+
+
+def test_distinct_tokens_of_repeated_pieces() -> None:
+    text = "Evde, evde ev. Evde!\nev (evde) Ankara'da Ankara'da"
+    assert TOK.distinct_tokens(text) == ["Evde", "evde", "ev", "Ankara'da"]

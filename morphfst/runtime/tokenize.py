@@ -129,9 +129,23 @@ class Tokenizer:
         characters are neither letters nor combining marks). Any other piece goes through the regular
         expression, which gives the same tokens on the piece as on the whole line (its look-arounds
         see only letters, digits and joiners, which white space never is)."""
+        self._add_piece_tokens(line.split(), out)
+
+    def distinct_tokens(self, text: str) -> list[str]:
+        """The distinct word tokens of a text of any number of lines, in first-seen order: the same as
+        ``dict.fromkeys(self.tokens_and_newlines(text))`` without the line ends, but each distinct
+        white-space-separated piece is read once (a token never spans white space, and a piece's tokens
+        do not depend on its neighbours: see :meth:`_add_tokens`). On running text this is several
+        times faster than reading every token."""
+        out: list[str] = []
+        self._add_piece_tokens(dict.fromkeys(text.split()), out)
+        return list(dict.fromkeys(out))
+
+    def _add_piece_tokens(self, pieces: Iterable[str], out: list[str]) -> None:
+        """Append the word tokens of white-space-free ``pieces`` to ``out`` (see :meth:`_add_tokens`)."""
         findall = self.word_re.findall
         append = out.append
-        for piece in line.split():
+        for piece in pieces:
             if piece.isalnum():
                 append(piece)
                 continue
