@@ -78,9 +78,22 @@ def test_flag_that_blocks_a_rule(tmp_path: Path) -> None:
     assert [f.form for f in lang.generate("pe", "N;PL;NOM")] == ["pelar"]
 
 
-def test_constraint_excludes(tur: morphfst.Language) -> None:
-    assert tur.generate("ev", "N;PL;PSS3P;NOM") == []
+def test_constraint_excludes(tmp_path: Path) -> None:
+    grammar = TOY_GRAMMAR.replace("rules {", "constraints {\n  no_plural_locative: PL excludes LOC\n}\n\nrules {")
+    lang = morphfst.load(write_toy(tmp_path, grammar))
+    assert lang.generate("ka", "N;PL;LOC") == [] and lang.analyze("kalarna") == []
+    assert [f.form for f in lang.generate("ka", "N;SG;LOC")] == ["kana"]
+    assert [f.form for f in lang.generate("ka", "N;PL;NOM")] == ["kalar"]
+
+
+def test_turkish_their_books_has_no_second_plural(tur: morphfst.Language) -> None:
+    # -lArI 'their' takes no plural -lAr before it: evleri is 'their house' and 'their houses'
+    # (Göksel & Kerslake 2005, 14.1); the singular reading ranks first
+    assert [f.form for f in tur.generate("ev", "N;PL;PSS3P;NOM")] == ["evleri"]
     assert [f.form for f in tur.generate("ev", "N;SG;PSS3P;NOM")] == ["evleri"]
+    texts = [a.text for a in tur.analyze("evlerini")]
+    assert texts.index("ev N;SG;PSS3P;ACC") < texts.index("ev N;PL;PSS3P;ACC")
+    assert not any("ler-leri" in a.segmentation for a in tur.analyze("evlerleri"))
 
 
 def test_derivation_cycle_is_finite_per_word(tur: morphfst.Language) -> None:

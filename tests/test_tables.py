@@ -137,16 +137,26 @@ def test_turkish_table_is_laid_out_like_a_grammar_book(tur: morphfst.Language) -
     assert titles[0] == "no possessor" and len(titles) == 7
 
 
-def test_unfilled_cells_stay_as_empty_cells(tur: morphfst.Language) -> None:
+def test_unfilled_cells_stay_as_empty_cells(tmp_path: Path) -> None:
+    from tabletoy import TABLE_TOY
+
+    grammar = TABLE_TOY.replace("rules {", "constraints {\n  no_plural_locative: PL excludes LOC\n}\n\nrules {")
+    lang = morphfst.load(write_table_toy(tmp_path, grammar))
+    a = arrange(only(lang, "ka"), lang.meta)
+    blocked = [c for g in a.sections[0].grids for row in g.cells for c in row if c is not None and not c.forms]
+    assert blocked and all(c.template.blocked_by == ("no_plural_locative",) for c in blocked)  # shown, not dropped
+    text = render_text([a], 80)
+    assert f"{len(blocked)} of " in text and f"cells have no form (constraint no_plural_locative: {len(blocked)})" in text
+
+
+def test_turkish_their_houses_cell_is_filled(tur: morphfst.Language) -> None:
+    # evleri 'their houses': the plural is not written twice before -lArI (Göksel & Kerslake 2005, 14.1)
     a = arrange(only(tur, "ev", "N"), tur.meta)
     grid = grid_of(a, "possessor 3pl (their)")
-    plural = grid.columns.index("plural")
-    for row in grid.cells:
-        cell = row[plural]
-        assert cell is not None and cell.forms == []  # shown, not dropped
-        assert cell.template.blocked_by == ("plural_possessor_haplology",)
-    text = render_text([a], 80)
-    assert "8 of 112 cells have no form (constraint plural_possessor_haplology: 8)" in text
+    plural, singular = grid.columns.index("plural"), grid.columns.index("singular")
+    assert [row[plural].forms[0].form for row in grid.cells][:3] == ["evleri", "evlerini", "evlerine"]  # type: ignore[union-attr]
+    assert [row[singular].forms[0].form for row in grid.cells][:3] == ["evleri", "evlerini", "evlerine"]  # type: ignore[union-attr]
+    assert "cells have no form" not in render_text([a], 80)
 
 
 def test_turkish_verb_conjugation(tur: morphfst.Language) -> None:

@@ -93,6 +93,8 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("ev", "N;SG;PSS1P;NOM", "evimiz"),
         ("ev", "N;SG;PSS2P;NOM", "eviniz"),
         ("ev", "N;SG;PSS3P;NOM", "evleri"),
+        ("ev", "N;PL;PSS3P;NOM", "evleri"),  # no second plural before -lArI (G&K 14.1)
+        ("kitap", "N;PL;PSS3P;DAT", "kitaplarına"),
         ("ev", "N;SG;PSS3S;ACC", "evini"),
         ("ev", "N;SG;PSS3S;DAT", "evine"),
         ("ev", "N;SG;PSS3S;LOC", "evinde"),
