@@ -235,6 +235,22 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("ölmek", "V;CAUS;PST;3;SG", "öldürdü"),
         ("bilmek", "V;PASS;HAB;3;SG", "bilinir"),
     ],
+    # 17b: descriptive verbs, converb + auxiliary written as one word, with the auxiliary's own
+    # aorist (G&K ch. 13 on compound verbs; from memory)
+    "descriptive verbs (-Iver, -Adur, -Agel, -Akal, -Ayaz)": [
+        ("yapmak", "V;RAPID;PST;3;SG", "yapıverdi"),
+        ("gitmek", "V;RAPID;PROG;3;SG", "gidiveriyor"),
+        ("söylemek", "V;RAPID;IMP;2;SG", "söyleyiver"),
+        ("yapmak", "V;RAPID;HAB;3;SG", "yapıverir"),
+        ("yapmak", "V;RAPID;NEG;PST;3;SG", "yapıvermedi"),
+        ("açmak", "V;PASS;RAPID;PST;3;SG", "açılıverdi"),
+        ("beklemek", "V;DUR;HAB;3;SG", "bekleyedurur"),
+        ("söylemek", "V;PASS;CONT;V.PTCP;ADJ;SG;NOM", "söylenegelen"),
+        ("bakmak", "V;REMAIN;HAB;3;SG", "bakakalır"),
+        ("düşmek", "V;AVERT;PST;3;SG", "düşeyazdı"),
+        ("düşmek", "V;AVERT;HAB;3;SG", "düşeyazar"),
+        ("ölmek", "V;AVERT;PST;1;SG", "öleyazdım"),
+    ],
     # 18: participles with possessive and case; verbal nouns and converbs (G&K ch. 24-26; from memory)
     "participles, verbal nouns and converbs (gelmek)": [
         ("gelmek", "V;V.PTCP;PST;ADJ;SG;PSS1S;NOM", "geldiğim"),
