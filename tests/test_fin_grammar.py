@@ -961,3 +961,27 @@ def test_singular_first_where_the_plural_is_spelt_alike(fin: morphfst.Language) 
     # practice, from memory
     assert fin.analyze("maanantaina")[0].text == "maanantai N;SG;ESS"
     assert fin.analyze("valmiina")[0].text == "valmis ADJ;SG;ESS"
+
+
+def test_compounds_not_in_the_lexicon_are_generated_by_their_last_part(fin: morphfst.Language) -> None:
+    # a compound inflects its last part only (Karlsson, Finnish: An Essential Grammar, on compounds;
+    # common practice): kirjastoauto 'library bus' -> kirjastoautoissa, kaupunginkirjasto -> ...kirjastoja
+    assert not fin.entries("kirjastoauto") and not fin.entries("kaupunginkirjasto")
+    assert fin.compound_split("kirjastoauto") == ("kirjasto", "auto")
+    assert [f.form for f in fin.generate("kirjastoauto", "N;PL;IN+ESS")] == ["kirjastoautoissa"]
+    assert [f.form for f in fin.generate("kirjastoauto", "N;SG;GEN")] == ["kirjastoauton"]
+    assert [f.form for f in fin.generate("kaupunginkirjasto", "N;PL;PRT")][0] == "kaupunginkirjastoja"
+    # the harmony and gradation of the last part: naisjoukkue -> naisjoukkueeseen
+    assert [f.form for f in fin.generate("naisjoukkue", "N;SG;IN+ALL")] == ["naisjoukkueeseen"]
+    # not a compound's citation form, or not a compound at all: nothing
+    assert fin.compound_split("kirjastoautossa") is None and fin.compound_split("talo") is None
+    assert fin.generate("kirjastoauto", "V;IND;PST;3;SG") == []
+
+
+def test_a_compound_not_in_the_lexicon_has_a_table(fin: morphfst.Language) -> None:
+    from morphfst.tables.paradigm import paradigms
+
+    (table,) = paradigms(fin, "kirjastoauto", pos="N")
+    forms = {c.features: [v.form for v in c.forms] for c in table.cells}
+    assert table.lemma == "kirjastoauto" and forms["N;PL;IN+ALL"] == ["kirjastoautoihin"]
+    assert any("compound" in note for note in table.notes)

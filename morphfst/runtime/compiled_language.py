@@ -193,7 +193,37 @@ class Language:
         if forms and self.normalize(lemma) != lemma:
             # surface stems are in folded case: write the lemma's letters as the lemma does (Ankara'da)
             forms = [Form(restore_case(lemma, f.form, self.normalize), f.weight, f.analysis) for f in forms]
+        if not forms:
+            forms = self._generate_compound(lemma, labels)
         return forms
+
+    def compound_split(self, lemma: str) -> tuple[str, str] | None:
+        """``(first parts, last part)`` of a compound the grammar analyzes but the lexicon does not list
+        (Finnish *kirjastoauto*: ``("kirjasto", "auto")``, *kaupunginkirjasto*: ``("kaupungin",
+        "kirjasto")``): ``lemma`` must be that compound's citation form (an analysis of it has it as its
+        lemma) and the last part a lexicon lemma. None for a lexicon lemma or any other word."""
+        if self.entries(lemma):
+            return None
+        for reading in self.analyze(lemma):
+            stems = [i for i, m in enumerate(reading.morphs) if m.kind == "stem"]
+            if reading.lemma != lemma or len(stems) < 2:
+                continue
+            head = "".join(m.form for m in reading.morphs[: stems[-1]])
+            tail = lemma[len(head) :] if head and lemma.startswith(head) else ""
+            if tail and self.entries(tail):
+                return head, tail
+        return None
+
+    def _generate_compound(self, lemma: str, labels: list[str]) -> list[Form]:
+        """The forms of a compound the lexicon does not list (:meth:`compound_split`): a compound
+        inflects its last part only, so the last part's forms are generated and the first parts
+        written before them as the lemma writes them (*kirjasto* + *autoissa*)."""
+        split = self.compound_split(lemma)
+        if split is None:
+            return []
+        head, tail = split
+        analysis = f"{lemma} {';'.join(labels)}"
+        return [Form(head + f.form, f.weight, analysis) for f in self.generate(tail, labels)]
 
     def _generate_from(self, query: pynini.Fst, analysis: str) -> list[Form]:
         return _forms(paths(pynini.compose(query, self.fsts["generator"]), MAX_PATHS), analysis)

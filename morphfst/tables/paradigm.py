@@ -450,6 +450,29 @@ def not_found(lang: Language, lemma: str) -> UserError:
     return UserError(f"{lemma!r} is not in the {lang.name} lexicon", hint=hint)
 
 
+def compound_paradigms(
+    lang: Language,
+    lemma: str,
+    split: tuple[str, str],
+    bound: Bound,
+    pos: str | None,
+    filler: CellFiller | None,
+) -> list[Paradigm]:
+    """The tables of a compound the lexicon does not list (``split`` from
+    :meth:`Language.compound_split`): its last part's tables with the first parts written before every
+    form, since a compound inflects its last part only (*kirjasto* + *autoissa*)."""
+    head, tail = split
+    out = paradigms(lang, tail, bound, pos, filler)
+    for par in out:
+        par.lemma = lemma
+        par.stems = []
+        for cell in par.cells:
+            cell.lemma = lemma
+            cell.forms = [Variant(head + v.form, v.weight, v.rank, v.preferred) for v in cell.forms]
+        par.notes.append(f"not in the lexicon: a compound of {head!r} and the lexicon word {tail!r}, inflected by its last part")
+    return out
+
+
 def paradigms(
     lang: Language,
     lemma: str,
@@ -472,7 +495,10 @@ def paradigms(
         if pos and find_entries(lang, lemma):
             have = sorted({e["pos"] for e in find_entries(lang, lemma)})
             raise UserError(f"{lemma!r} has no {pos} entry", hint="its parts of speech: " + ", ".join(have))
-        raise not_found(lang, lemma)
+        split = lang.compound_split(lemma)
+        if split is None:
+            raise not_found(lang, lemma)
+        return compound_paradigms(lang, lemma, split, bound, pos, filler)
     filler = filler or CellFiller(lang)
     groups: dict[tuple[str, str], list[dict[str, Any]]] = {}
     for e in entries:
