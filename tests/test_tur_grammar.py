@@ -834,6 +834,15 @@ def test_passive_vowel_loss_of_cagirmak(tur: morphfst.Language) -> None:
     assert tur.analyze("çağrıldı")[0].text == "çağırmak V;PASS;PST;3;SG"
 
 
+def test_lexicalized_verbs_before_the_passive_they_are_spelt_like(tur: morphfst.Language) -> None:
+    # yanılmak 'be mistaken', sıkılmak 'be bored', yapışmak 'stick' are verbs of their own, far more
+    # frequent than the passive of yanmak 'burn' or sıkmak 'squeeze' and the reciprocal of yapmak
+    # (counts from memory in the lexicon, like oluşmak's); the other reading stays second
+    assert [a.text for a in tur.analyze("yanıldım")][:2] == ["yanılmak V;PST;1;SG", "yanmak V;PASS;PST;1;SG"]
+    assert tur.analyze("sıkıldım")[0].text == "sıkılmak V;PST;1;SG"
+    assert tur.analyze("yapıştı")[0].text == "yapışmak V;PST;3;SG"
+
+
 def test_words_written_without_the_turkish_letters(tur: morphfst.Language) -> None:
     # informal writing on keyboards without ç ğ ı ö ş ü (common practice in web text): the word is
     # read as the Turkish word, at a cost, and never generated so
