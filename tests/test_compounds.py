@@ -234,8 +234,12 @@ def test_fewer_seams_rank_first(lang: morphfst.Language) -> None:
 
 
 def test_analysis_only(tmp_path: Path, lang: morphfst.Language) -> None:
-    assert lang.generate("talokala", "N;SG;NOM") == []
+    # the generator has no compounds; generate() makes an unlisted compound's forms from its last
+    # part (Language.compound_split), with the first part as the lemma writes it
     assert [f.form for f in lang.generate("kala", "N;SG;LOC")] == ["kalassa"]
+    assert lang.compound_split("talokala") == ("talo", "kala")
+    assert [f.form for f in lang.generate("talokala", "N;SG;LOC")] == ["talokalassa"]
+    assert lang.generate("talokalassa", "N;SG;LOC") == []  # not a citation form
     plain = toy(tmp_path / "plain", "")
     assert plain.analyze("talokala") == []
     assert plain.stats()["generator"] == lang.stats()["generator"]
