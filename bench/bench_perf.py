@@ -802,12 +802,8 @@ def read_repeats(report: Path, raw_types: int | None, out: Path) -> Repeats:
 
 def corpus_command(bench: Bench, name: str, corpus: Path, out: Path, report: Path, mode: str) -> list[str]:
     argv = [*bench.runner, "corpus", str(corpus), "-o", str(out), "-l", name, "-q", "--report", str(report), "--top", "0"]
-    if mode == "daskrun":
-        argv += ["--dask", bench.dask_address]
-        if bench.args.partition_mb:
-            argv += ["--partition-mb", str(bench.args.partition_mb)]
-    elif mode == "dask":
-        argv += ["--dask", "-j", "2"]
+    if mode in ("dask", "daskrun"):
+        argv += ["--dask", bench.dask_address] if mode == "daskrun" else ["--dask", "-j", "2"]
         if bench.args.partition_mb:
             argv += ["--partition-mb", str(bench.args.partition_mb)]
     else:
@@ -928,9 +924,7 @@ def twin_ceiling(bench: Bench, name: str, corpus: Path) -> float:
     ones, twos = [], []
     for _ in range(bench.args.runs):
         outs = [bench.tmp / f"{name}-twin{i}.out" for i in (0, 1)]
-        argvs = [
-            [*bench.runner, "corpus", str(corpus), "-o", str(out), "-l", name, "-q", "--top", "0", "-j", "1"] for out in outs
-        ]
+        argvs = [corpus_command(bench, name, corpus, out, out.with_suffix(".json"), "j1") for out in outs]
         ones.append(run_timed(argvs[0], env, "twin ceiling, one run"))
         t0 = time.perf_counter()
         procs = [subprocess.Popen(a, env=env, cwd=ROOT, stdout=subprocess.DEVNULL, stderr=subprocess.DEVNULL) for a in argvs]
@@ -938,6 +932,7 @@ def twin_ceiling(bench: Bench, name: str, corpus: Path) -> float:
         twos.append(time.perf_counter() - t0 if not any(codes) else math.nan)
         for out in outs:
             out.unlink(missing_ok=True)
+            out.with_suffix(".json").unlink(missing_ok=True)
     one, two = median(ones), median(twos)
     return 2 * one / two if one == one and two == two else math.nan
 

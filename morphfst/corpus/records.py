@@ -345,7 +345,7 @@ class ChunkProcessor:
     def types_of(self, chunk: Chunk) -> list[str]:
         """Every word type of a chunk that the cache can hold, in first-seen order, cached or not (what
         a Dask partition will look up; see :mod:`morphfst.corpus.cluster`)."""
-        return [t for t in self.tokenizer.distinct_tokens(decode(chunk.data)[0]) if len(t) <= MAX_CACHED_TOKEN]
+        return _cacheable(self.tokenizer.distinct_tokens(decode(chunk.data)[0]))
 
     def prepare(self, chunk: Chunk) -> tuple[Prepared, list[str]]:
         """The decoded text of a chunk (with its tokens, in terms mode) and its word types that are not
