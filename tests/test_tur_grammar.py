@@ -875,3 +875,32 @@ def test_x_is_voiceless(tur: morphfst.Language) -> None:
     # rules on suffixes after foreign names follow pronunciation — from memory)
     assert [f.form for f in tur.generate("Netflix", "PROPN;SG;LOC")] == ["Netflix'te"]
     assert tur.analyze("Marx'ta")[0].text == "Marx PROPN;SG;LOC"
+
+
+@pytest.mark.parametrize(
+    "lemma, features, surface",
+    [
+        # A foreign name takes its suffixes as it is said, not as it is spelt: the Turkish spelling
+        # rules on suffixes after foreign proper names (common practice; the forms from memory).
+        ("John", "PROPN;SG;GEN", "John'un"),  # said Con: back rounded vowel, consonant at the end
+        ("John", "PROPN;SG;DAT", "John'a"),
+        ("George", "PROPN;SG;DAT", "George'a"),  # said Corc: written e, said with a consonant
+        ("George", "PROPN;SG;GEN", "George'un"),
+        ("Google", "PROPN;SG;ACC", "Google'ı"),  # said Gugıl
+        ("Google", "PROPN;SG;LOC", "Google'da"),
+        ("Facebook", "PROPN;SG;LOC", "Facebook'ta"),  # said Feysbuk: voiceless k
+        ("Facebook", "PROPN;SG;ACC", "Facebook'u"),
+        ("Mary", "PROPN;SG;GEN", "Mary'nin"),  # said Meri: a vowel at the end
+        ("Joe", "PROPN;SG;DAT", "Joe'ya"),  # said Co
+        ("Charles", "PROPN;SG;GEN", "Charles'ın"),  # said Çarlz
+    ],
+)
+def test_foreign_names_take_their_suffixes_as_said(tur: morphfst.Language, lemma: str, features: str, surface: str) -> None:
+    assert [f.form for f in tur.generate(lemma, features)] == [surface]
+    assert f"{lemma} {features}" in [a.text for a in tur.analyze(surface)]
+
+
+def test_a_foreign_name_without_its_apostrophe_is_read_as_said(tur: morphfst.Language) -> None:
+    # informal writing leaves the apostrophe out (johnun, googleda): read, never generated
+    assert tur.analyze("johnun")[0].text == "John PROPN;SG;GEN"
+    assert tur.analyze("googleda")[0].text == "Google PROPN;SG;LOC"
