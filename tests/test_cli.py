@@ -146,13 +146,13 @@ def test_console_script_runs_as_a_process(tur: morphfst.Language) -> None:
     assert proc.returncode == 2 and "Traceback" not in proc.stderr and "no such file" in proc.stderr
 
 
-def test_output_files_get_ordinary_permissions(tmp_path: Path, tur: morphfst.Language) -> None:
+def test_output_files_get_ordinary_permissions(tmp_path: Path, tur_small: morphfst.Language) -> None:
     import os
     import stat
 
     from morphfst.atomic import default_file_mode
 
-    out = morphfst.compile_grammar(Path(tur.meta["grammar_path"]), tmp_path / "tur.mfc")
+    out = morphfst.compile_grammar(Path(tur_small.meta["grammar_path"]), tmp_path / "tur.mfc")
     assert stat.S_IMODE(os.stat(out).st_mode) == default_file_mode()
 
 

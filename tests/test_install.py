@@ -19,7 +19,9 @@ from morphfst.cli import command_modules, main
 ROOT = Path(__file__).resolve().parent.parent
 
 
-def test_an_installed_layout_ships_and_finds_every_language(tmp_path: Path) -> None:
+def test_an_installed_layout_ships_and_finds_every_language(
+    tmp_path: Path, request: pytest.FixtureRequest, cache_dir: Path
+) -> None:
     """setup.py's build_py lays out exactly what the wheel holds; run it from elsewhere, without the
     checkout's import hook (python -S), as an installed package would be."""
     site = tmp_path / "site"
@@ -38,8 +40,10 @@ def test_an_installed_layout_ships_and_finds_every_language(tmp_path: Path) -> N
         assert (site / "morphfst" / "lexicons" / lexicon.relative_to(ROOT / "lexicons")).is_file()
     elsewhere = tmp_path / "elsewhere"
     elsewhere.mkdir()
-    # every shipped name is found inside the package; the smallest language is also compiled and used
-    # (CI's .ci/wheel_smoke runs every language from the real wheel)
+    # every shipped name is found inside the package; the smallest language is also loaded and used,
+    # from a cache seeded with the session's compiled files: the cache key is the sources' names and
+    # bytes, so the installed copy finds them (CI's .ci/wheel_smoke compiles every language from the
+    # real wheel into an empty cache)
     smallest = min(shipped, key=lambda n: sum(p.stat().st_size for p in (ROOT / "lexicons" / n).rglob("*.tsv")))
     code = (
         "import sys, morphfst; from morphfst.build import find_grammar, shipped_names; "
@@ -49,6 +53,8 @@ def test_an_installed_layout_ships_and_finds_every_language(tmp_path: Path) -> N
         f"lang = morphfst.load({smallest!r}); assert lang.meta['lexicon'] and lang.analyze(lang.meta['lexicon'][0]['lemma']) is not None; "
         "print('loaded', lang.meta['grammar_path'])"
     )
+    request.getfixturevalue(smallest)  # the session's compile of that language, into cache_dir
+    shutil.copytree(cache_dir, tmp_path / "cache")
     env = {
         "PYTHONPATH": f"{site}:{sysconfig.get_paths()['purelib']}",
         "MORPHFST_CACHE": str(tmp_path / "cache"),

@@ -5,6 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 import time
+from pathlib import Path
 
 from ..build import compile_grammar, find_grammar
 from ..compile.archive import load_archive
@@ -36,6 +37,8 @@ def run(args: argparse.Namespace) -> int:
     path = find_grammar(args.grammar)
     if path.suffix != ".mfg":
         raise UserError(f"{path} is not a grammar file", hint="give a .mfg grammar file or a shipped grammar name")
+    if args.output and Path(args.output).is_dir():  # said before a compile of a minute, not after it
+        raise UserError(f"{args.output} is a directory", hint="give a file name for the output")
     t0 = time.perf_counter()
     out = compile_grammar(path, args.output)
     seconds = time.perf_counter() - t0
