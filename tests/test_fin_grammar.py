@@ -985,3 +985,18 @@ def test_a_compound_not_in_the_lexicon_has_a_table(fin: morphfst.Language) -> No
     forms = {c.features: [v.form for v in c.forms] for c in table.cells}
     assert table.lemma == "kirjastoauto" and forms["N;PL;IN+ALL"] == ["kirjastoautoihin"]
     assert any("compound" in note for note in table.notes)
+
+
+def test_possessive_suffixes_only_on_the_postpositions_and_adverbs_that_take_them(fin: morphfst.Language) -> None:
+    # Postpositions take the possessive suffixes (kanssani 'with me', luokseen 'to him'), as do a few
+    # adverbs (mukanaan 'with him', kotonaan 'at home'); other uninflected words take none: joni is
+    # the name Joni, not jo 'already' + -ni; ilmaan is ilma's illative (Karlsson, Finnish: An
+    # Essential Grammar, on possessive suffixes; common practice)
+    assert fin.analyze("kanssani")[0].text == "kanssa ADP;PSS1S"
+    assert fin.analyze("luokseen")[0].text == "luokse ADP;PSS3S"
+    assert fin.analyze("mukanaan")[0].text == "mukana ADV;PSS3S"
+    assert fin.analyze("kotonaan")[0].text == "kotona ADV;PSS3S"
+    assert not any(a.lemma == "jo" for a in fin.analyze("joni"))
+    assert fin.analyze("ilmaan")[0].text == "ilma N;SG;IN+ALL"
+    assert fin.analyze("varteen")[0].text == "varsi N;SG;IN+ALL"
+    assert fin.generate("jo", "ADV;PSS1S") == [] and fin.generate("ilman", "ADP;PSS3S") == []
