@@ -272,3 +272,30 @@ def test_diagnose_cli_table_and_jsonl(grammars: dict[str, DebugSession], capsys:
     assert main(["diagnose", "-l", path, "evlarda", "--expect", "ev N;SG;LOC"]) == 0
     assert "sound change" in capsys.readouterr().out
     assert main(["diagnose", "-l", path, "evlarda", "--expect", "ev"]) == 2
+
+
+@pytest.mark.parametrize("word", ["kitabı", "kitapı", "evlerde", "evimlerde", "gözlerimizden", "okudum"])
+def test_meeting_in_the_middle_finds_what_the_whole_cascade_finds(tur_small: morphfst.Language, word: str) -> None:
+    # match() runs the first rules forward on the machine and meets the rest, inverted from the word,
+    # in the middle; the analyses and best weights must be those of the machine run through the whole
+    # cascade (forward, then the final step) and kept where it gives the word
+    import pynini
+
+    from morphfst.compile.fstutil import acc, paths
+
+    session = DebugSession.open(tur_small)
+    machine = session.stem_group_fst(list(session.grammar.lexicon))
+    k, _ = session.back_lattice(word)
+    assert 0 < k < len(session.grammar.rules)  # both sides do some of the work on this grammar
+    whole = machine
+    for rule in session.rules_for(frozenset()):
+        whole = pynini.compose(whole, session.compiler.rule_fst(rule)).connect()
+    whole = pynini.compose(pynini.compose(whole, session.realize), acc(word)).connect()
+
+    def best(fst: pynini.Fst) -> dict[str, float]:
+        out: dict[str, float] = {}
+        for analysis, _, weight in paths(pynini.shortestpath(fst, nshortest=200), 200):
+            out[analysis] = min(out.get(analysis, weight), round(weight, 4))
+        return out
+
+    assert best(session.match(machine, word)) == best(whole)

@@ -12,9 +12,11 @@ Each layer is tested by relaxing it and asking whether the relaxed grammar accep
 - lexicon: stems are guessed (any string of letters, restricted by the class's ``guess`` pattern,
   optionally with each lexical flag) and go through the real slot graph, constraints and rules.
 
-Every relaxed machine is composed with the word's *lattice* (the underlying strings whose rule output
-is the word, built right to left from the word), so nothing as large as the whole analyzer is
-rebuilt per word.
+Every relaxed machine meets the word in the middle of the rule cascade (:meth:`DebugSession.match`):
+the last rules are inverted right to left from the word into a *lattice* of the strings that can
+become it, the first rules run forward on the machine, and the two are composed where they meet, so
+nothing as large as the whole analyzer is rebuilt per word, and the marker bookkeeping of the first
+rules, which inverted would let markers in everywhere, stays on the side where the stems place them.
 """
 
 from __future__ import annotations
@@ -428,8 +430,7 @@ def _relaxed_paths(
     out: list[tuple[m.LexEntry | None, str, float]] = []
     whole = len(entries) == len(session.grammar.lexicon)
     for blocked, group in session.groups(entries).items():
-        lattice = session.lattice(surface, blocked)
-        if is_empty(lattice):
+        if is_empty(session.back_lattice(surface, blocked)[1]):
             continue
         if name and whole:
 
@@ -439,7 +440,7 @@ def _relaxed_paths(
             machine = session.memo(("relaxed", name, blocked), build)
         else:
             machine = session.stem_group_fst(group, graph)
-        found = pynini.compose(machine, lattice).connect()
+        found = session.match(machine, surface, blocked)
         if is_empty(found):
             continue
         for internal, _, weight in paths(pynini.shortestpath(found, nshortest=limit), limit):
@@ -717,8 +718,7 @@ def guesses(session: DebugSession, surface: str, limit: int = 4) -> list[tuple[s
     variants: list[m.Flag | None] = [None] + list(g.flags.values())
     for flag in variants:
         blocked = frozenset(flag.blocks) if flag else frozenset()
-        lattice = session.lattice(surface, blocked)
-        if is_empty(lattice):
+        if is_empty(session.back_lattice(surface, blocked)[1]):
             continue
         for klass in g.classes.values():
 
@@ -731,7 +731,7 @@ def guesses(session: DebugSession, surface: str, limit: int = 4) -> list[tuple[s
             machine = session.memo(("guess", klass.name, flag.name if flag else ""), build)
             if machine is None:
                 continue
-            result = pynini.compose(machine, lattice).connect()
+            result = session.match(machine, surface, blocked)
             if is_empty(result):
                 continue
             for internal, _, weight in paths(pynini.shortestpath(result, nshortest=limit), limit):
@@ -780,7 +780,7 @@ def verify_entry(session: DebugSession, surface: str, entry: m.LexEntry) -> bool
     filt = session.analysis_filter
     if filt is not None and set(entry.lemma) <= set(session.letters) | {ch for e in session.grammar.lexicon for ch in e.lemma}:
         machine = pynini.compose(filt, machine)
-    return not is_empty(pynini.compose(machine, session.lattice(surface, session.blocked_rules(entry.flags))).connect())
+    return not is_empty(session.match(machine, surface, session.blocked_rules(entry.flags)))
 
 
 def lexicon_finding(session: DebugSession, surface: str) -> LexiconFinding | None:

@@ -11,7 +11,8 @@ from __future__ import annotations
 
 from collections import defaultdict
 from collections.abc import Callable
-from functools import cached_property
+from collections.abc import Set as AbstractSet
+from functools import cached_property, partial
 from pathlib import Path
 from typing import Any
 
@@ -19,7 +20,7 @@ import pynini
 
 from ..build import load
 from ..compile.compiler import Compiler, build_space
-from ..compile.fstutil import acc, cross, union
+from ..compile.fstutil import Arc, Weight, acc, cross, union
 from ..compile.loader import load_model
 from ..compile.metadata import file_hash
 from ..errors import Position, UserError
@@ -36,7 +37,7 @@ class DebugSession:
         self.lang = lang
         self.meta = lang.meta
         self.space = lang.space
-        self._lattices: dict[tuple[str, frozenset[str]], pynini.Fst] = {}
+        self._back_lattices: dict[tuple[str, frozenset[str]], tuple[int, pynini.Fst]] = {}
         self._surface_acceptor: pynini.Fst | None = None
         self._memo: dict[Any, Any] = {}
 
@@ -156,27 +157,86 @@ class DebugSession:
     def rules_for(self, blocked: frozenset[str]) -> list[m.Rule]:
         return [r for r in self.grammar.rules if r.name not in blocked]
 
-    def lattice(self, surface: str, blocked: frozenset[str] = frozenset(), rules: list[m.Rule] | None = None) -> pynini.Fst:
-        """Underlying forms (input side) whose rule output is ``surface``, built right to left.
+    def back_lattice(self, surface: str, blocked: frozenset[str] = frozenset()) -> tuple[int, pynini.Fst]:
+        """(k, the strings before rule k whose rule output is ``surface``), built right to left from the
+        word and stopped at the first stage past :data:`SPLIT_STATES` states.
 
-        Composing from the word backwards keeps every intermediate machine small: only strings that
-        can still reach the word survive each step.
-        """
+        Composing from the word backwards keeps every step small: only strings that can still reach
+        the word survive, and each step is made a trimmed, determinized, minimized acceptor of its input
+        side (:func:`_shrink`); the stem-region filters keep out markers no underlying form has there.
+        The first rules of a cascade mostly move and drop the markers of flags and classes; inverted,
+        each lets a marker in after any letter, and the lattice doubles with every one of them (a
+        Finnish word: 25,000 states and minutes). :meth:`match` runs those rules forward on the
+        machine instead, where each marker stands only where the stems put it."""
         key = (surface, blocked)
-        if rules is None and key in self._lattices:
-            return self._lattices[key]
-        # Only the input side is ever used (the output is the word itself), so each step keeps an
-        # acceptor of the forms before the rule, made small again: the inverse of the final step and
-        # of every deleting rule lets markers and deleted symbols in almost anywhere, and without
-        # this the machine grows with every rule (minutes for one Turkish word).
-        fst = _shrink(pynini.compose(self.realize, acc(surface)))
-        for rule in reversed(rules if rules is not None else self.rules_for(blocked)):
-            if fst.num_states() == 0:
-                break
-            fst = _shrink(pynini.compose(self.compiler.rule_fst(rule), fst))
-        if rules is None:
-            self._lattices[key] = fst
-        return fst
+        if key in self._back_lattices:
+            return self._back_lattices[key]
+        cascade = self.rules_for(blocked)
+        filters = self._stem_region_filters(cascade)
+        fst = _shrink(pynini.compose(filters[len(cascade)], pynini.compose(self.realize, acc(surface))))
+        k = len(cascade)
+        while k > 0 and fst.num_states() and fst.num_states() <= SPLIT_STATES:
+            k -= 1
+            fst = _shrink(pynini.compose(filters[k], pynini.compose(self.compiler.rule_fst(cascade[k]), fst)))
+        self._back_lattices[key] = (k, fst)
+        return k, fst
+
+    def match(self, machine: pynini.Fst, surface: str, blocked: frozenset[str] = frozenset()) -> pynini.Fst:
+        """The paths of ``machine`` (analysis to underlying form) whose rule output (the cascade without
+        the rules ``blocked``) is ``surface``, as a machine from analysis to an intermediate form: the
+        analyses and weights that running the machine through the whole cascade and keeping what gives
+        the word would find, built from both ends (the first rules forward on the machine, the rest
+        backward from the word: :meth:`back_lattice`)."""
+        k, back = self.back_lattice(surface, blocked)
+        if back.num_states() == 0:
+            return back
+        fwd = machine.copy().optimize()
+        for i, rule in enumerate(self.rules_for(blocked)[:k], start=1):
+            fwd = pynini.compose(fwd, self.compiler.rule_fst(rule)).connect()
+            if fwd.num_states() == 0:
+                return fwd
+            if i % OPTIMIZE_EVERY == 0:  # made small again now and then (a Finnish machine: 17,000 -> 1,800 states)
+                fwd = fwd.optimize()
+        return pynini.compose(fwd, back).connect()
+
+    @cached_property
+    def stem_region_symbols(self) -> frozenset[str]:
+        """Markers and archiphonemes that no affix form holds: in an underlying form they come only from
+        the stem (the lexicon's stems, stem rules, flag markers), so before the first morph boundary."""
+        s = self.space
+        in_affixes = {sym for a in self.grammar.affixes for sym in a.form}
+        names = [*self.grammar.markers, *self.grammar.archiphonemes]
+        return frozenset(s.code(n) for n in names if n not in in_affixes and n in s.to_char)
+
+    def _writes(self, rule: m.Rule) -> frozenset[str]:
+        """The symbols ``rule`` writes (output labels of its arcs that change a symbol)."""
+
+        def build() -> frozenset[str]:
+            fst = self.compiler.rule_fst(rule)
+            return frozenset(
+                chr(arc.olabel) for state in fst.states() for arc in fst.arcs(state) if arc.olabel and arc.olabel != arc.ilabel
+            )
+
+        return self.memo(("writes", rule.name), build)
+
+    def _stem_region_filters(self, cascade: list[m.Rule]) -> list[pynini.Fst]:
+        """For each stage i of the cascade (the strings before rule i; stage len(cascade) is the output),
+        an acceptor of the strings in which no stem-region symbol stands after a morph boundary, leaving
+        out the symbols that a rule before stage i writes (they may stand anywhere by then).
+
+        Every string a stage holds obeys its filter (a rule only deletes or keeps a symbol it does not
+        write), so the lattice loses nothing by it; without it the inverse of a rule that deletes a flag
+        marker lets the marker in after every morph, and the lattice doubles with each such rule."""
+        plus = self.compiler.plus
+        sigma = sorted(set(self.space.to_char.values()))
+        out: list[pynini.Fst] = []
+        written: set[str] = set()
+        for i in range(len(cascade) + 1):
+            if i:
+                written |= self._writes(cascade[i - 1])
+            kept = set() if plus in written else self.stem_region_symbols - written
+            out.append(self.memo(("stem-region", frozenset(kept)), partial(_boundary_filter, sigma, plus, kept)))
+        return out
 
     @property
     def surface_acceptor(self) -> pynini.Fst:
@@ -263,7 +323,25 @@ class DebugSession:
         }
 
 
-SHRINK_STATES = 1_000_000  # a determinized lattice step larger than this is kept as it was
+def _boundary_filter(sigma: list[str], plus: str, stem_only: AbstractSet[str]) -> pynini.Fst:
+    """Strings over ``sigma`` with no symbol of ``stem_only`` after the first ``plus``."""
+    fst = pynini.Fst()
+    one = Weight.one(fst.weight_type())
+    before, after = fst.add_state(), fst.add_state()
+    fst.set_start(before)
+    fst.set_final(before)
+    fst.set_final(after)
+    for code in sigma:
+        label = ord(code)
+        fst.add_arc(before, Arc(label, label, one, after if code == plus else before))
+        if code not in stem_only:
+            fst.add_arc(after, Arc(label, label, one, after))
+    return fst.arcsort("olabel")
+
+
+SHRINK_STATES = 1_000_000
+SPLIT_STATES = 400  # a right-to-left lattice past this size leaves the earlier rules to the forward side
+OPTIMIZE_EVERY = 10  # rules run forward between two optimizations of the machine  # a determinized lattice step larger than this is kept as it was
 
 
 def _shrink(fst: pynini.Fst) -> pynini.Fst:
