@@ -1000,3 +1000,15 @@ def test_possessive_suffixes_only_on_the_postpositions_and_adverbs_that_take_the
     assert fin.analyze("ilmaan")[0].text == "ilma N;SG;IN+ALL"
     assert fin.analyze("varteen")[0].text == "varsi N;SG;IN+ALL"
     assert fin.generate("jo", "ADV;PSS1S") == [] and fin.generate("ilman", "ADP;PSS3S") == []
+
+
+def test_foreign_names_take_the_harmony_of_their_vowels_as_said(fin: morphfst.Language) -> None:
+    # ü is said as y, so a name whose last vowels are ü and e or i takes front endings (München:
+    # Münchenissä, Müller: Mülleriä); a name spelt with e and i but said with a back vowel takes back
+    # endings by the flag back_harmony (Biden: Bidenia, Mike: Mikea) — the usual written forms in
+    # Finnish news, common practice (from memory)
+    assert [f.form for f in fin.generate("München", "PROPN;SG;IN+ESS")] == ["Münchenissä"]
+    assert [f.form for f in fin.generate("Müller", "PROPN;SG;PRT")] == ["Mülleriä"]
+    assert [f.form for f in fin.generate("Biden", "PROPN;SG;PRT")] == ["Bidenia"]
+    assert [f.form for f in fin.generate("Mike", "PROPN;SG;IN+ESS")] == ["Mikessa"]
+    assert [f.form for f in fin.generate("Düsseldorf", "PROPN;SG;IN+ESS")] == ["Düsseldorfissa"]
