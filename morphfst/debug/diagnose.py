@@ -720,6 +720,11 @@ def guesses(session: DebugSession, surface: str, limit: int = 4) -> list[tuple[s
         blocked = frozenset(flag.blocks) if flag else frozenset()
         if is_empty(session.back_lattice(surface, blocked)[1]):
             continue
+        # one whole lattice for the many guess machines (a class and flag each): cheaper than running
+        # each of them forward through the first rules (Turkish: 527 machines)
+        lattice = session.lattice(surface, blocked)
+        if is_empty(lattice):
+            continue
         for klass in g.classes.values():
 
             def build(klass: m.StemClass = klass, flag: m.Flag | None = flag) -> pynini.Fst | None:
@@ -731,7 +736,7 @@ def guesses(session: DebugSession, surface: str, limit: int = 4) -> list[tuple[s
             machine = session.memo(("guess", klass.name, flag.name if flag else ""), build)
             if machine is None:
                 continue
-            result = session.match(machine, surface, blocked)
+            result = pynini.compose(machine, lattice).connect()
             if is_empty(result):
                 continue
             for internal, _, weight in paths(pynini.shortestpath(result, nshortest=limit), limit):

@@ -38,6 +38,7 @@ class DebugSession:
         self.meta = lang.meta
         self.space = lang.space
         self._back_lattices: dict[tuple[str, frozenset[str]], tuple[int, pynini.Fst]] = {}
+        self._lattices: dict[tuple[str, frozenset[str]], pynini.Fst] = {}
         self._surface_acceptor: pynini.Fst | None = None
         self._memo: dict[Any, Any] = {}
 
@@ -156,6 +157,22 @@ class DebugSession:
 
     def rules_for(self, blocked: frozenset[str]) -> list[m.Rule]:
         return [r for r in self.grammar.rules if r.name not in blocked]
+
+    def lattice(self, surface: str, blocked: frozenset[str] = frozenset()) -> pynini.Fst:
+        """Every string before the first rule whose rule output is ``surface``: :meth:`back_lattice` run
+        to the cascade's start. Dearer than :meth:`match` (the marker bookkeeping inverted), but built
+        once per word and blocked set and then composed cheaply with many machines: the guessed stems
+        of every class and flag."""
+        key = (surface, blocked)
+        if key not in self._lattices:
+            k, fst = self.back_lattice(surface, blocked)
+            cascade = self.rules_for(blocked)
+            filters = self._stem_region_filters(cascade)
+            while k > 0 and fst.num_states():
+                k -= 1
+                fst = _shrink(pynini.compose(filters[k], pynini.compose(self.compiler.rule_fst(cascade[k]), fst)))
+            self._lattices[key] = fst
+        return self._lattices[key]
 
     def back_lattice(self, surface: str, blocked: frozenset[str] = frozenset()) -> tuple[int, pynini.Fst]:
         """(k, the strings before rule k whose rule output is ``surface``), built right to left from the
