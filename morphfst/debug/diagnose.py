@@ -718,8 +718,6 @@ def guesses(session: DebugSession, surface: str, limit: int = 4) -> list[tuple[s
     variants: list[m.Flag | None] = [None] + list(g.flags.values())
     for flag in variants:
         blocked = frozenset(flag.blocks) if flag else frozenset()
-        if is_empty(session.back_lattice(surface, blocked)[1]):
-            continue
         # one whole lattice for the many guess machines (a class and flag each): cheaper than running
         # each of them forward through the first rules (Turkish: 527 machines)
         lattice = session.lattice(surface, blocked)

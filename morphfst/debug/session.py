@@ -166,12 +166,7 @@ class DebugSession:
         key = (surface, blocked)
         if key not in self._lattices:
             k, fst = self.back_lattice(surface, blocked)
-            cascade = self.rules_for(blocked)
-            filters = self._stem_region_filters(cascade)
-            while k > 0 and fst.num_states():
-                k -= 1
-                fst = _shrink(pynini.compose(filters[k], pynini.compose(self.compiler.rule_fst(cascade[k]), fst)))
-            self._lattices[key] = fst
+            self._lattices[key] = self._invert(fst, k, blocked, limit=None)[1]
         return self._lattices[key]
 
     def back_lattice(self, surface: str, blocked: frozenset[str] = frozenset()) -> tuple[int, pynini.Fst]:
@@ -186,16 +181,21 @@ class DebugSession:
         Finnish word: 25,000 states and minutes). :meth:`match` runs those rules forward on the
         machine instead, where each marker stands only where the stems put it."""
         key = (surface, blocked)
-        if key in self._back_lattices:
-            return self._back_lattices[key]
+        if key not in self._back_lattices:
+            n = len(self.rules_for(blocked))
+            word = _shrink(pynini.compose(self._stem_region_filters(blocked)[n], pynini.compose(self.realize, acc(surface))))
+            self._back_lattices[key] = self._invert(word, n, blocked, limit=SPLIT_STATES)
+        return self._back_lattices[key]
+
+    def _invert(self, fst: pynini.Fst, k: int, blocked: frozenset[str], limit: int | None) -> tuple[int, pynini.Fst]:
+        """The lattice ``fst`` of the strings before rule ``k`` carried back over the rules before it, one
+        at a time, until the cascade's start, an empty lattice or (with a ``limit``) one past ``limit``
+        states; returns the stage reached and its lattice."""
         cascade = self.rules_for(blocked)
-        filters = self._stem_region_filters(cascade)
-        fst = _shrink(pynini.compose(filters[len(cascade)], pynini.compose(self.realize, acc(surface))))
-        k = len(cascade)
-        while k > 0 and fst.num_states() and fst.num_states() <= SPLIT_STATES:
+        filters = self._stem_region_filters(blocked)
+        while k > 0 and fst.num_states() and (limit is None or fst.num_states() <= limit):
             k -= 1
             fst = _shrink(pynini.compose(filters[k], pynini.compose(self.compiler.rule_fst(cascade[k]), fst)))
-        self._back_lattices[key] = (k, fst)
         return k, fst
 
     def match(self, machine: pynini.Fst, surface: str, blocked: frozenset[str] = frozenset()) -> pynini.Fst:
@@ -236,24 +236,30 @@ class DebugSession:
 
         return self.memo(("writes", rule.name), build)
 
-    def _stem_region_filters(self, cascade: list[m.Rule]) -> list[pynini.Fst]:
-        """For each stage i of the cascade (the strings before rule i; stage len(cascade) is the output),
+    def _stem_region_filters(self, blocked: frozenset[str]) -> list[pynini.Fst]:
+        """For each stage i of the cascade without the rules ``blocked`` (the strings before rule i;
+        stage len(cascade) is the output),
         an acceptor of the strings in which no stem-region symbol stands after a morph boundary, leaving
         out the symbols that a rule before stage i writes (they may stand anywhere by then).
 
         Every string a stage holds obeys its filter (a rule only deletes or keeps a symbol it does not
         write), so the lattice loses nothing by it; without it the inverse of a rule that deletes a flag
         marker lets the marker in after every morph, and the lattice doubles with each such rule."""
-        plus = self.compiler.plus
-        sigma = sorted(set(self.space.to_char.values()))
-        out: list[pynini.Fst] = []
-        written: set[str] = set()
-        for i in range(len(cascade) + 1):
-            if i:
-                written |= self._writes(cascade[i - 1])
-            kept = set() if plus in written else self.stem_region_symbols - written
-            out.append(self.memo(("stem-region", frozenset(kept)), partial(_boundary_filter, sigma, plus, kept)))
-        return out
+
+        def build() -> list[pynini.Fst]:
+            cascade = self.rules_for(blocked)
+            plus = self.compiler.plus
+            sigma = sorted(set(self.space.to_char.values()))
+            out: list[pynini.Fst] = []
+            written: set[str] = set()
+            for i in range(len(cascade) + 1):
+                if i:
+                    written |= self._writes(cascade[i - 1])
+                kept = set() if plus in written else self.stem_region_symbols - written
+                out.append(self.memo(("stem-region", frozenset(kept)), partial(_boundary_filter, sigma, plus, kept)))
+            return out
+
+        return self.memo(("stem-region-filters", blocked), build)
 
     @property
     def surface_acceptor(self) -> pynini.Fst:
@@ -356,9 +362,9 @@ def _boundary_filter(sigma: list[str], plus: str, stem_only: AbstractSet[str]) -
     return fst.arcsort("olabel")
 
 
-SHRINK_STATES = 1_000_000
+SHRINK_STATES = 1_000_000  # a determinized lattice step larger than this is kept as it was
 SPLIT_STATES = 400  # a right-to-left lattice past this size leaves the earlier rules to the forward side
-OPTIMIZE_EVERY = 10  # rules run forward between two optimizations of the machine  # a determinized lattice step larger than this is kept as it was
+OPTIMIZE_EVERY = 10  # rules run forward between two optimizations of the machine
 
 
 def _shrink(fst: pynini.Fst) -> pynini.Fst:
