@@ -2,7 +2,9 @@
 
 from __future__ import annotations
 
+import io
 import json
+import sys
 import unicodedata
 from pathlib import Path
 
@@ -84,7 +86,11 @@ def test_every_line_and_token_is_kept(
     assert list(tmp_path.iterdir()) == [out]  # no temporary file left
 
 
-def test_one_and_two_processes_give_the_same_bytes(tur: morphfst.Language, corpus: Path, tmp_path: Path) -> None:
+@pytest.mark.parametrize("start", ["fork", "spawn"])
+def test_one_and_two_processes_give_the_same_bytes(
+    tur: morphfst.Language, corpus: Path, tmp_path: Path, start: str, monkeypatch: pytest.MonkeyPatch
+) -> None:
+    monkeypatch.setenv("MORPHFST_WORKER_START", start)  # forked workers share the loaded language; spawned ones load it
     options = Options(mode="jsonl", chunk_bytes=1024)
     one = run_corpus(tur, [str(corpus)], str(tmp_path / "one.jsonl"), options, jobs=1)
     two = run_corpus(tur, [str(corpus)], str(tmp_path / "two.jsonl"), options, jobs=2)
@@ -249,8 +255,6 @@ def test_dask_local_cluster_keeps_every_token(
 
 
 def test_progress_bar_shows_bytes_tokens_and_rate_only_on_a_terminal() -> None:
-    import io
-
     from morphfst.corpus.progress import Progress
 
     class Terminal(io.StringIO):
@@ -270,6 +274,35 @@ def test_progress_bar_shows_bytes_tokens_and_rate_only_on_a_terminal() -> None:
     quiet_bar.close()
     assert piped.getvalue() == ""
     assert Progress(100, quiet=True, stream=Terminal()).bar is None
+
+
+def test_workers_are_forked_only_while_no_other_thread_runs(monkeypatch: pytest.MonkeyPatch) -> None:
+    import threading
+
+    from morphfst.corpus.local import start_method
+    from morphfst.corpus.progress import Progress
+
+    class Terminal(io.StringIO):
+        def isatty(self) -> bool:
+            return True
+
+    monkeypatch.delenv("MORPHFST_WORKER_START", raising=False)
+    before = threading.active_count()
+    bar = Progress(1000, stream=Terminal())  # a shown bar starts no thread (no tqdm monitor)
+    assert threading.active_count() == before
+    bar.close()
+    stop = threading.Event()
+    other = threading.Thread(target=stop.wait)
+    other.start()
+    try:
+        assert start_method() == "spawn"  # a fork would copy a lock the other thread may hold
+    finally:
+        stop.set()
+        other.join()
+    if sys.platform.startswith("linux") and threading.active_count() == 1:
+        assert start_method() == "fork"
+    monkeypatch.setenv("MORPHFST_WORKER_START", "spawn")
+    assert start_method() == "spawn"
 
 
 def test_a_tiny_cache_gives_the_same_output_and_figures(tur: morphfst.Language, corpus: Path, tmp_path: Path) -> None:

@@ -147,18 +147,22 @@ def _alive(pid: int) -> bool:
 
 
 @pytest.mark.skipif(not Path("/proc/self/stat").exists(), reason="needs /proc")
-def test_sigkill_of_corpus_j2_ends_its_workers_and_a_later_run_cleans_up(toy: Path, tmp_path: Path) -> None:
+@pytest.mark.parametrize("start", ["fork", "spawn"])
+def test_sigkill_of_corpus_j2_ends_its_workers_and_a_later_run_cleans_up(toy: Path, tmp_path: Path, start: str) -> None:
     morphfst.load(toy)
     out = tmp_path / "terms.txt"
     cmd = [sys.executable, "-m", "morphfst", "corpus", "-l", str(toy), "-j", "2", "-o", str(out), "-q", "-"]
-    proc = subprocess.Popen(cmd, stdin=subprocess.PIPE, stdout=subprocess.DEVNULL, stderr=subprocess.DEVNULL)
+    env = {**os.environ, "MORPHFST_WORKER_START": start}
+    proc = subprocess.Popen(cmd, stdin=subprocess.PIPE, stdout=subprocess.DEVNULL, stderr=subprocess.DEVNULL, env=env)
     assert proc.stdin is not None
     proc.stdin.write(b"ka te kalar\n" * 1000)
     proc.stdin.flush()  # standard input stays open: the run waits for more
     deadline = time.monotonic() + 60
     workers: list[int] = []
     while time.monotonic() < deadline:
-        workers = [c for c in _children(proc.pid) if b"spawn_main" in Path(f"/proc/{c}/cmdline").read_bytes()]
+        # a spawned worker runs multiprocessing's spawn_main; a forked one has its parent's command line
+        mark = b"spawn_main" if start == "spawn" else b"\0corpus\0"
+        workers = [c for c in _children(proc.pid) if mark in Path(f"/proc/{c}/cmdline").read_bytes()]
         if len(workers) == 2 and list(tmp_path.glob(".terms.txt.*.part")):
             break
         time.sleep(0.1)

@@ -25,7 +25,12 @@ class Progress:
         if self.enabled:
             from tqdm import tqdm
 
-            self.bar = tqdm(
+            class Bar(tqdm):  # type: ignore[type-arg,misc]
+                # no monitor thread: worker processes are forked only while the main process runs no
+                # other thread (see morphfst.corpus.local.start_method); every update refreshes the bar
+                monitor_interval = 0
+
+            self.bar = Bar(
                 total=total_bytes or None,
                 unit="B",
                 unit_scale=True,
