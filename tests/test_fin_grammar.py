@@ -1012,3 +1012,52 @@ def test_foreign_names_take_the_harmony_of_their_vowels_as_said(fin: morphfst.La
     assert [f.form for f in fin.generate("Biden", "PROPN;SG;PRT")] == ["Bidenia"]
     assert [f.form for f in fin.generate("Mike", "PROPN;SG;IN+ESS")] == ["Mikessa"]
     assert [f.form for f in fin.generate("Düsseldorf", "PROPN;SG;IN+ESS")] == ["Düsseldorfissa"]
+
+
+def test_moderative_hko_on_adjectives(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, derivation: the moderative -hkO 'rather X' on the
+    # adjective's vowel stem, with the weak grade before its closed syllable (isohko, pienehkö,
+    # helpohko) — from memory
+    assert [f.form for f in fin.generate("iso", "ADJ;MODR;ADJ;SG;NOM")] == ["isohko"]
+    assert [f.form for f in fin.generate("pieni", "ADJ;MODR;ADJ;SG;NOM")] == ["pienehkö"]
+    assert [f.form for f in fin.generate("iso", "ADJ;MODR;ADJ;PL;PRT")] == ["isohkoja"]
+    for word, reading in [
+        ("helpohko", "helppo ADJ;MODR;ADJ;SG;NOM"),
+        ("vanhahkon", "vanha ADJ;MODR;ADJ;SG;GEN"),
+        ("hitaahko", "hidas ADJ;MODR;ADJ;SG;NOM"),
+        ("lyhyehkö", "lyhyt ADJ;MODR;ADJ;SG;NOM"),
+    ]:
+        assert reading in [a.text for a in fin.analyze(word)], word
+    assert not fin.analyze("talohko")  # nouns take no -hkO
+
+
+def test_similative_mainen_on_nouns(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, derivation: -mAinen 'X-like' on a noun's nominative
+    # (poikamainen, koulumainen, kivimäinen, lapsimainen), declined like nainen, with its -sti adverb
+    # (ammattimaisesti) — from memory
+    for word, reading in [
+        ("koulumainen", "koulu N;SIM;ADJ;SG;NOM"),
+        ("tyttömäisiä", "tyttö N;SIM;ADJ;PL;PRT"),
+        ("kivimäinen", "kivi N;SIM;ADJ;SG;NOM"),
+        ("lapsimaisen", "lapsi N;SIM;ADJ;SG;GEN"),
+        ("käsimäinen", "käsi N;SIM;ADJ;SG;NOM"),
+        ("ammattimaisesti", "ammatti N;SIM;ADJ;STI;ADV"),
+        ("sarjamaisten", "sarja N;SIM;ADJ;PL;GEN"),
+    ]:
+        assert reading in [a.text for a in fin.analyze(word)], word
+    assert not fin.analyze("koulumäinen")  # the suffix follows the noun's harmony
+    assert not fin.analyze("kivemäinen")  # on the nominative, not the vowel stem
+    # a lexicon word spelt alike ranks first (poikamainen is listed)
+    assert fin.analyze("poikamainen")[0].text == "poikamainen ADJ;SG;NOM"
+
+
+def test_compounds_with_an_adjective_or_numeral_part(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, compounds: a noun + adjective compound inflects its last
+    # part (asiakaskeskeinen, verovapaa), a numeral in the nominative may be the first part (kaksi-)
+    # — from memory
+    assert fin.analyze("asiakaskeskeisiä")[0].text == "asiakaskeskeinen ADJ;PL;PRT"
+    assert fin.analyze("verovapaita")[0].text == "verovapaa ADJ;PL;PRT"
+    assert fin.analyze("viisivuotiaana")[0].text == "viisivuotias ADJ;SG;ESS"
+    assert fin.analyze("seitsemänvuotiaat")[0].text == "seitsemänvuotias ADJ;PL;NOM"
+    # the compound forms kolmi-, neli-, kymmen- of the numerals are bound first parts (kolmivuotias)
+    assert fin.analyze("kolmivuotiaalle")[0].text == "kolmivuotias ADJ;SG;AT+ALL"
