@@ -1061,3 +1061,12 @@ def test_compounds_with_an_adjective_or_numeral_part(fin: morphfst.Language) -> 
     assert fin.analyze("seitsemänvuotiaat")[0].text == "seitsemänvuotias ADJ;PL;NOM"
     # the compound forms kolmi-, neli-, kymmen- of the numerals are bound first parts (kolmivuotias)
     assert fin.analyze("kolmivuotiaalle")[0].text == "kolmivuotias ADJ;SG;AT+ALL"
+
+
+def test_loans_with_y_after_a_back_vowel_take_either_harmony(fin: morphfst.Language) -> None:
+    # Finnish orthography: a loan like analyysi is written analyysiä or analyysia (common practice,
+    # from memory); the front form is generated first, both are read, never a mixed one
+    assert [f.form for f in fin.generate("analyysi", "N;SG;PRT")] == ["analyysiä", "analyysia"]
+    assert fin.analyze("analyysissakaan")[0].text == "analyysi N;SG;IN+ESS;KAAN"
+    assert not fin.analyze("analyysissakään")
+    assert [f.form for f in fin.generate("talo", "N;SG;IN+ESS")] == ["talossa"]
