@@ -1070,3 +1070,16 @@ def test_loans_with_y_after_a_back_vowel_take_either_harmony(fin: morphfst.Langu
     assert fin.analyze("analyysissakaan")[0].text == "analyysi N;SG;IN+ESS;KAAN"
     assert not fin.analyze("analyysissakään")
     assert [f.form for f in fin.generate("talo", "N;SG;IN+ESS")] == ["talossa"]
+
+
+def test_adjectives_of_origin_in_lainen_from_place_names(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, derivation: -lAinen on a place name's vowel stem
+    # (espoolainen, lahtelainen, ylöjärveläinen, with the name's harmony) — from memory. The lexicon
+    # lists the adjectives of the larger places, which rank first; the derivation is there for the rest.
+    for word, reading in [
+        ("kuusamolaiset", "Kuusamo PROPN;ORIG;ADJ;PL;NOM"),
+        ("pieksämäkeläinen", "Pieksämäki PROPN;ORIG;ADJ;SG;NOM"),
+        ("kajaanilaisten", "Kajaani PROPN;ORIG;ADJ;PL;GEN"),
+    ]:
+        assert reading in [a.text for a in fin.analyze(word)], word
+    assert not fin.analyze("talolainen")  # only names
