@@ -904,3 +904,13 @@ def test_a_foreign_name_without_its_apostrophe_is_read_as_said(tur: morphfst.Lan
     # informal writing leaves the apostrophe out (johnun, googleda): read, never generated
     assert tur.analyze("johnun")[0].text == "John PROPN;SG;GEN"
     assert tur.analyze("googleda")[0].text == "Google PROPN;SG;LOC"
+
+
+def test_a_names_derivation_ranks_against_a_noun_spelt_alike(tur: morphfst.Language) -> None:
+    # common practice (from memory): bayramlı 'festive' and ordulu 'with an army' are read first as
+    # the nouns' -lI, while Koreli and Mısırlı 'Korean, Egyptian' are read first as the places'
+    assert tur.analyze("bayramlı")[0].text == "bayram N;PROPR;ADJ;SG;NOM"
+    assert tur.analyze("ordulu")[0].text == "ordu N;PROPR;ADJ;SG;NOM"
+    assert tur.analyze("koreli")[0].text == "Kore PROPN;PROPR;ADJ;SG;NOM"
+    assert tur.analyze("mısırlı")[0].text == "Mısır PROPN;PROPR;ADJ;SG;NOM"
+    assert tur.analyze("ankaralı")[0].text == "Ankara PROPN;PROPR;ADJ;SG;NOM"
