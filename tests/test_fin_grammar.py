@@ -1083,3 +1083,14 @@ def test_adjectives_of_origin_in_lainen_from_place_names(fin: morphfst.Language)
     ]:
         assert reading in [a.text for a in fin.analyze(word)], word
     assert not fin.analyze("talolainen")  # only names
+
+
+def test_names_whose_both_parts_inflect(fin: morphfst.Language) -> None:
+    # Finnish orthography: in Uusimaa, Uusikaupunki, Isokyrö and Uusi-Seelanti the adjective part
+    # agrees with the noun (Uudellamaalla, Uudenkaupungin, Isonkyrön, Uudessa-Seelannissa) — common
+    # practice (from memory)
+    assert [f.form for f in fin.generate("Uusimaa", "PROPN;SG;AT+ESS")] == ["Uudellamaalla"]
+    assert fin.analyze("Uudenkaupungin")[0].text == "Uusikaupunki PROPN;SG;GEN"
+    assert fin.analyze("Isonkyrön")[0].text == "Isokyrö PROPN;SG;GEN"
+    assert fin.analyze("Uudessa-Seelannissa")[0].text == "Uusi-Seelanti PROPN;SG;IN+ESS"
+    assert not fin.analyze("Uusimaalla")
