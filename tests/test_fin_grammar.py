@@ -1094,3 +1094,12 @@ def test_names_whose_both_parts_inflect(fin: morphfst.Language) -> None:
     assert fin.analyze("Isonkyrön")[0].text == "Isokyrö PROPN;SG;GEN"
     assert fin.analyze("Uudessa-Seelannissa")[0].text == "Uusi-Seelanti PROPN;SG;IN+ESS"
     assert not fin.analyze("Uusimaalla")
+
+
+def test_names_used_in_the_plural(fin: morphfst.Language) -> None:
+    # Finnish news, common practice (from memory): the clubs Jokerit, Kärpät, Ässät and the town Virrat
+    # inflect in the plural, with the gradation of their nouns (Kärpissä, Virroilla)
+    assert [f.form for f in fin.generate("Kärpät", "PROPN;PL;IN+ESS")] == ["Kärpissä"]
+    assert [f.form for f in fin.generate("Virrat", "PROPN;PL;AT+ESS")] == ["Virroilla"]
+    assert "Jokereita" in [f.form for f in fin.generate("Jokerit", "PROPN;PL;PRT")]
+    assert "Ässät PROPN;PL;GEN" in [a.text for a in fin.analyze("Ässien")]
