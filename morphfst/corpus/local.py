@@ -255,7 +255,7 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
     results.close()
 
 
-FORK_ENV = "MORPHFST_WORKER_START"  # "spawn" or "fork": overrides the choice below (tests, debugging)
+START_ENV = "MORPHFST_WORKER_START"  # "spawn" or "fork": overrides the choice below (tests, debugging)
 
 
 def start_method() -> str:
@@ -266,7 +266,7 @@ def start_method() -> str:
     child. ``MORPHFST_WORKER_START`` overrides the choice."""
     import threading
 
-    forced = os.environ.get(FORK_ENV, "").strip().lower()
+    forced = os.environ.get(START_ENV, "").strip().lower()
     if forced in ("fork", "spawn"):
         return forced if forced in mp.get_all_start_methods() else "spawn"
     if sys.platform.startswith("linux") and threading.active_count() == 1 and "fork" in mp.get_all_start_methods():

@@ -7,6 +7,7 @@ from __future__ import annotations
 
 import sys
 import time
+from functools import cache
 from typing import Any, TextIO
 
 
@@ -23,14 +24,7 @@ class Progress:
         self.start = time.perf_counter()
         self.bar: Any = None
         if self.enabled:
-            from tqdm import tqdm
-
-            class Bar(tqdm):  # type: ignore[type-arg,misc]
-                # no monitor thread: worker processes are forked only while the main process runs no
-                # other thread (see morphfst.corpus.local.start_method); every update refreshes the bar
-                monitor_interval = 0
-
-            self.bar = Bar(
+            self.bar = _bar_class()(
                 total=total_bytes or None,
                 unit="B",
                 unit_scale=True,
@@ -57,6 +51,19 @@ class Progress:
     @property
     def elapsed(self) -> float:
         return time.perf_counter() - self.start
+
+
+@cache
+def _bar_class() -> Any:
+    """tqdm without its monitor thread: worker processes are forked only while the main process runs
+    no other thread (see :func:`morphfst.corpus.local.start_method`); every update refreshes the bar.
+    Made once, on the first bar shown, so that tqdm is imported only then."""
+    from tqdm import tqdm
+
+    class Bar(tqdm):  # type: ignore[type-arg,misc]
+        monitor_interval = 0
+
+    return Bar
 
 
 def _is_terminal(stream: TextIO) -> bool:
