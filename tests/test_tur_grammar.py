@@ -914,3 +914,16 @@ def test_a_names_derivation_ranks_against_a_noun_spelt_alike(tur: morphfst.Langu
     assert tur.analyze("koreli")[0].text == "Kore PROPN;PROPR;ADJ;SG;NOM"
     assert tur.analyze("mısırlı")[0].text == "Mısır PROPN;PROPR;ADJ;SG;NOM"
     assert tur.analyze("ankaralı")[0].text == "Ankara PROPN;PROPR;ADJ;SG;NOM"
+
+
+def test_the_aorist_participle_takes_the_quality_noun_lik(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake, Turkish: A Comprehensive Grammar, the aorist participle and -lIk (from
+    # memory): okunabilirlik 'readability', kullanılabilirlik 'usability' are made from any verb
+    # with -(y)AbIl-Ir-lIk; the bare positive aorist stays a finite verb (gelir, okur)
+    assert "okumak V;PASS;POT;V.PTCP;HAB;ADJ;ABSTR;N;SG;NOM" in [a.text for a in tur.analyze("okunabilirlik")]
+    readings = [a.text for a in tur.analyze("uygulanabilirliğinin")]
+    assert "uygulamak V;PASS;POT;V.PTCP;HAB;ADJ;ABSTR;N;SG;PSS3S;GEN" in readings
+    assert not any("V.PTCP;HAB;ADJ;SG" in a.text for a in tur.analyze("okur"))
+    # a listed word, or the -lIk of a listed word, comes first (yazarlık, güvenilirlik)
+    assert tur.analyze("yazarlık")[0].text == "yazarlık N;SG;NOM"
+    assert tur.analyze("güvenilirliğini")[0].text == "güvenilir ADJ;ABSTR;N;SG;PSS3S;ACC"
