@@ -1103,3 +1103,23 @@ def test_names_used_in_the_plural(fin: morphfst.Language) -> None:
     assert [f.form for f in fin.generate("Virrat", "PROPN;PL;AT+ESS")] == ["Virroilla"]
     assert "Jokereita" in [f.form for f in fin.generate("Jokerit", "PROPN;PL;PRT")]
     assert "Ässät PROPN;PL;GEN" in [a.text for a in fin.analyze("Ässien")]
+
+
+def test_past_and_passive_participles_are_compared(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, participles (from memory): every participle is
+    # compared like an adjective (kehittyneempi, rakastettavin, tunnetuin) and makes -sti adverbs
+    # (hyväksyttävästi, tunnetusti); the passive present one a quality noun in -vUUs (luettavuus)
+    assert "kehittyä V;V.PTCP;ACT;PST;ADJ;CMPR;SG;NOM" in [a.text for a in fin.analyze("kehittyneempi")]
+    assert [f.form for f in fin.generate("rakastaa", "V;V.PTCP;PASS;PRS;ADJ;SPRL;SG;NOM")] == ["rakastettavin"]
+    assert [f.form for f in fin.generate("tuntea", "V;V.PTCP;PASS;PST;ADJ;SPRL;PL;PRT")] == ["tunnetuimpia"]
+    assert "hyväksyä V;V.PTCP;PASS;PRS;ADJ;STI;ADV" in [a.text for a in fin.analyze("hyväksyttävästi")]
+    assert "lukea V;V.PTCP;PASS;PRS;ADJ;ABSTR;N;SG;NOM" in [a.text for a in fin.analyze("luettavuus")]
+    assert not fin.analyze("kehittyneyys")  # no -UUs on the past participle
+
+
+def test_a_plural_genitive_first_part(fin: morphfst.Language) -> None:
+    # Finnish compounds, common practice (from memory): the first part may be a plural genitive
+    # (lasten+tarha, naisten+lehti, kansojen+välinen); a singular first part ranks first
+    assert fin.analyze("lastentarha")[0].text == "lastentarha N;SG;NOM"
+    assert "naistenlehti N;SG;IN+ESS" in [a.text for a in fin.analyze("naistenlehdessä")]
+    assert fin.analyze("kaupunginjohtaja")[0].text == "kaupunginjohtaja N;SG;NOM"
