@@ -927,3 +927,11 @@ def test_the_aorist_participle_takes_the_quality_noun_lik(tur: morphfst.Language
     # a listed word, or the -lIk of a listed word, comes first (yazarlık, güvenilirlik)
     assert tur.analyze("yazarlık")[0].text == "yazarlık N;SG;NOM"
     assert tur.analyze("güvenilirliğini")[0].text == "güvenilir ADJ;ABSTR;N;SG;PSS3S;ACC"
+
+
+def test_as_if_casina_on_the_aorist_and_perfect_participles(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake, Turkish: A Comprehensive Grammar, -CAsInA 'as if' (from memory): on the
+    # aorist participle, positive and negative (kaçarcasına, bilmezcesine), and on -mIş (görmüşçesine)
+    assert tur.analyze("kaçarcasına")[0].text == "kaçmak V;V.PTCP;HAB;ADJ;ASIF;ADV"
+    assert tur.analyze("bilmezcesine")[0].text == "bilmek V;NEG;V.PTCP;HAB;ADJ;ASIF;ADV"
+    assert tur.analyze("görmüşçesine")[0].text == "görmek V;V.PTCP;PRF;ADJ;ASIF;ADV"
