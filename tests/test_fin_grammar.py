@@ -1123,3 +1123,31 @@ def test_a_plural_genitive_first_part(fin: morphfst.Language) -> None:
     assert fin.analyze("lastentarha")[0].text == "lastentarha N;SG;NOM"
     assert "naistenlehti N;SG;IN+ESS" in [a.text for a in fin.analyze("naistenlehdessä")]
     assert fin.analyze("kaupunginjohtaja")[0].text == "kaupunginjohtaja N;SG;NOM"
+
+
+def test_illatives_of_stems_ending_in_an_archiphoneme(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, the illative (from memory): a short-vowel stem
+    # lengthens its vowel in the singular (annettu-un, isohko-on, pienehkö-ön) and takes -hin in the
+    # plural (annettu-i-hin, isohko-i-hin), also where the vowel comes from a suffix
+    cells = [
+        ("antaa", "V;V.PTCP;PASS;PST;ADJ;SG;IN+ALL", "annettuun"),
+        ("antaa", "V;V.PTCP;PASS;PST;ADJ;PL;IN+ALL", "annettuihin"),
+        ("tehdä", "V;V.PTCP;PASS;PST;ADJ;SG;IN+ALL", "tehtyyn"),
+        ("iso", "ADJ;MODR;ADJ;SG;IN+ALL", "isohkoon"),
+        ("iso", "ADJ;MODR;ADJ;PL;IN+ALL", "isohkoihin"),
+        ("pieni", "ADJ;MODR;ADJ;SG;IN+ALL", "pienehköön"),
+    ]
+    for lemma, features, form in cells:
+        assert [f.form for f in fin.generate(lemma, features)] == [form], (lemma, features)
+    assert not fin.analyze("annettujin")
+
+
+def test_verbs_of_adjectives_in_inen(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, verb derivation (from memory): -stUA 'become' and
+    # -stAA 'make' on the stem of an -inen word (aikuis-tua, eurooppalais-tua, yhteiskunnallis-taa),
+    # conjugated as types 52 and 53; a listed verb spelt alike comes first
+    assert fin.analyze("aikuistui")[0].text == "aikuinen N;BECOME;V;IND;PST;3;SG"
+    assert "eurooppalainen ADJ;BECOME;V;V.MSDR;N;SG;NOM" in [a.text for a in fin.analyze("eurooppalaistuminen")]
+    assert [f.form for f in fin.generate("yhteiskunnallinen", "ADJ;FACT;V;IND;PRS;3;SG")] == ["yhteiskunnallistaa"]
+    assert fin.analyze("kaupallistuu")[0].text == "kaupallistua V;IND;PRS;3;SG"
+    assert not fin.analyze("virtasistua")  # not on names
