@@ -1151,3 +1151,11 @@ def test_verbs_of_adjectives_in_inen(fin: morphfst.Language) -> None:
     assert [f.form for f in fin.generate("yhteiskunnallinen", "ADJ;FACT;V;IND;PRS;3;SG")] == ["yhteiskunnallistaa"]
     assert fin.analyze("kaupallistuu")[0].text == "kaupallistua V;IND;PRS;3;SG"
     assert not fin.analyze("virtasistua")  # not on names
+
+
+def test_a_derived_minen_noun_declines_as_the_listed_ones(fin: morphfst.Language) -> None:
+    # the -minen noun of any verb is declined as type 38, as the listed -minen nouns are (common
+    # practice, from memory): the plural genitive -sten first (ajamisten, then ajamisien)
+    derived = [f.form for f in fin.generate("ajaa", "V;V.MSDR;N;PL;GEN")]
+    listed = [f.form for f in fin.generate("ajaminen", "N;PL;GEN")]
+    assert derived == listed == ["ajamisten", "ajamisien"]
