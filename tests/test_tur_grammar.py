@@ -935,3 +935,11 @@ def test_as_if_casina_on_the_aorist_and_perfect_participles(tur: morphfst.Langua
     assert tur.analyze("kaçarcasına")[0].text == "kaçmak V;V.PTCP;HAB;ADJ;ASIF;ADV"
     assert tur.analyze("bilmezcesine")[0].text == "bilmek V;NEG;V.PTCP;HAB;ADJ;ASIF;ADV"
     assert tur.analyze("görmüşçesine")[0].text == "görmek V;V.PTCP;PRF;ADJ;ASIF;ADV"
+
+
+def test_the_converb_of_excess_asiya(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake, Turkish: A Comprehensive Grammar, converbs (from memory): -(y)AsIyA 'to the
+    # point of' on any verb (gülesiye, bayılasıya); a listed adverb spelt alike comes first (doyasıya)
+    assert tur.analyze("gülesiye")[0].text == "gülmek V;V.CVB;EXCESS"
+    assert tur.analyze("bayılasıya")[0].text == "bayılmak V;V.CVB;EXCESS"
+    assert tur.analyze("doyasıya")[0].text == "doyasıya ADV"
