@@ -1159,3 +1159,10 @@ def test_a_derived_minen_noun_declines_as_the_listed_ones(fin: morphfst.Language
     derived = [f.form for f in fin.generate("ajaa", "V;V.MSDR;N;PL;GEN")]
     listed = [f.form for f in fin.generate("ajaminen", "N;PL;GEN")]
     assert derived == listed == ["ajamisten", "ajamisien"]
+
+
+def test_type_13_rounds_a_front_final_vowel(fin: morphfst.Language) -> None:
+    # the Finnish standard word list's type 13 (katiska: katiskoita, katiskoja), front vowels alike
+    # (säämiskä: säämisköitä, säämisköjä) — from memory
+    assert [f.form for f in fin.generate("säämiskä", "N;PL;PRT")] == ["säämisköitä", "säämisköjä"]
+    assert [f.form for f in fin.generate("katiska", "N;PL;PRT")] == ["katiskoita", "katiskoja"]
