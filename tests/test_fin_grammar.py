@@ -1166,3 +1166,11 @@ def test_type_13_rounds_a_front_final_vowel(fin: morphfst.Language) -> None:
     # (säämiskä: säämisköitä, säämisköjä) — from memory
     assert [f.form for f in fin.generate("säämiskä", "N;PL;PRT")] == ["säämisköitä", "säämisköjä"]
     assert [f.form for f in fin.generate("katiska", "N;PL;PRT")] == ["katiskoita", "katiskoja"]
+
+
+def test_a_stem_ending_in_front_vowels_keeps_front_endings_in_the_plural(fin: morphfst.Language) -> None:
+    # Finnish vowel harmony follows the last part of a compound (common practice, from memory): the
+    # plural drops the stem's ä, the endings stay front (kirkonkyliä, juhlapyhissä; no back variant)
+    assert [f.form for f in fin.generate("kirkonkylä", "N;PL;PRT")] == ["kirkonkyliä"]
+    assert [f.form for f in fin.generate("juhlapyhä", "N;PL;IN+ESS")] == ["juhlapyhissä"]
+    assert [f.form for f in fin.generate("talo", "N;PL;PRT")] == ["taloja"]
