@@ -33,25 +33,18 @@ sys.path.insert(0, str(ROOT))
 
 import morphfst  # noqa: E402
 from morphfst.build import find_grammar  # noqa: E402
-from morphfst.language.lexicon import lexicon_files  # noqa: E402
-from morphfst.language.syntax import parse_grammar_file  # noqa: E402
 from morphfst.tables.paradigm import Bound, CellFiller  # noqa: E402
 
 FIRST_PART_ENDINGS = (";SG;NOM", ";SG;GEN", ";CPD")  # readings of a word that may begin a compound
 MIN_LAST = 3  # letters of a last part at least (shorter tails split words at random)
 
 
-def entries(grammar: Path) -> Iterator[tuple[str, str, str, str]]:
+def entries(lang: morphfst.Language) -> Iterator[tuple[str, str, str, str]]:
     """(file name, lemma, class, part of speech) of every lower-case noun and adjective without a hyphen."""
-    g = parse_grammar_file(grammar)
-    for path in lexicon_files(g):
-        for line in path.read_text(encoding="utf-8").splitlines():
-            cols = line.split("\t")
-            if line.startswith("#") or len(cols) < 3 or cols[0] == "lemma":
-                continue
-            lemma, klass, pos = cols[0], cols[1], cols[2]
-            if pos in ("N", "ADJ") and lemma.islower() and "-" not in lemma:
-                yield path.name, lemma, klass, pos
+    for e in lang.lexicon:
+        lemma, pos = e["lemma"], e["pos"]
+        if pos in ("N", "ADJ") and lemma.islower() and "-" not in lemma:
+            yield Path(e["file"]).name, lemma, e["class"], pos
 
 
 def case_cells(lang: morphfst.Language, pos: str, sample: str, klass: str) -> list[str]:
@@ -76,10 +69,10 @@ def compound_split(lang: morphfst.Language, lemma: str) -> tuple[str, str] | Non
     return None
 
 
-def compare_compounds(lang: morphfst.Language, grammar: Path, cells: dict[str, list[str]]) -> tuple[int, list[str]]:
+def compare_compounds(lang: morphfst.Language, cells: dict[str, list[str]]) -> tuple[int, list[str]]:
     """Listed compounds against their first part + the last part's forms (see the module documentation)."""
     seen, lines = 0, []
-    for fname, lemma, klass, pos in entries(grammar):
+    for fname, lemma, klass, pos in entries(lang):
         split = compound_split(lang, lemma)
         if split is None:
             continue
@@ -94,10 +87,10 @@ def compare_compounds(lang: morphfst.Language, grammar: Path, cells: dict[str, l
     return seen, lines
 
 
-def compare_derivations(lang: morphfst.Language, grammar: Path, cells: dict[str, list[str]]) -> tuple[int, list[str]]:
+def compare_derivations(lang: morphfst.Language, cells: dict[str, list[str]]) -> tuple[int, list[str]]:
     """Listed nouns and adjectives against a derivation of another lemma spelt alike."""
     seen, lines = 0, []
-    for fname, lemma, klass, pos in entries(grammar):
+    for fname, lemma, klass, pos in entries(lang):
         tail = f";{pos};SG;NOM"
         derived = [
             (r.lemma, r.text.split(" ", 1)[1][: -len("SG;NOM")])
@@ -124,8 +117,7 @@ def main(argv: list[str] | None = None) -> int:
     ap.add_argument("--lang", default="fin", help="a shipped language (default fin)")
     ap.add_argument("--only", choices=["compounds", "derivations"], help="run one section")
     args = ap.parse_args(argv)
-    grammar = Path(find_grammar(args.lang))
-    lang = morphfst.load(grammar)
+    lang = morphfst.load(find_grammar(args.lang))
     samples = {"fin": {"N": ("talo", "1"), "ADJ": ("iso", "1")}, "tur": {"N": ("ev", "noun"), "ADJ": ("büyük", "adj")}}
     sample = samples.get(args.lang, samples["fin"])
     cells = {pos: case_cells(lang, pos, word, klass) for pos, (word, klass) in sample.items()}
@@ -136,7 +128,7 @@ def main(argv: list[str] | None = None) -> int:
     if args.only in (None, "derivations"):
         sections.append(("derivations", compare_derivations))
     for name, compare in sections:
-        seen, lines = compare(lang, grammar, cells)
+        seen, lines = compare(lang, cells)
         print(f"# {name}: {seen} listed words compared, {len(lines)} differ")
         print(header)
         print("\n".join(lines))
