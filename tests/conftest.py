@@ -2,7 +2,9 @@
 
 from __future__ import annotations
 
+import atexit
 import os
+import shutil
 import tempfile
 from pathlib import Path
 
@@ -15,6 +17,16 @@ GRAMMARS = ROOT / "grammars"
 # one compiled, and nothing is written to the user's cache.
 _CACHE = tempfile.mkdtemp(prefix="morphfst-test-cache-")
 os.environ["MORPHFST_CACHE"] = _CACHE
+_OWNER = os.getpid()
+
+
+def _remove_cache() -> None:
+    """Remove the session's cache when the test session ends (not in a forked child that exits)."""
+    if os.getpid() == _OWNER:
+        shutil.rmtree(_CACHE, ignore_errors=True)
+
+
+atexit.register(_remove_cache)
 os.environ["MORPHFST_GRAMMARS"] = str(GRAMMARS)
 
 import morphfst  # noqa: E402
