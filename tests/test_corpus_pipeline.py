@@ -10,11 +10,14 @@ from pathlib import Path
 
 import pytest
 from corpus_helpers import DyingProcessor, FailingProcessor
+from hypothesis import given, settings
+from hypothesis import strategies as st
 
 import morphfst
 from morphfst.cli import main
 from morphfst.corpus import Options, WorkerFailure, run_corpus
-from morphfst.corpus.reading import chunks, read_blocks
+from morphfst.corpus.reading import Chunk, chunks, read_blocks
+from morphfst.corpus.records import MAX_CACHED_TOKEN, ChunkProcessor
 from morphfst.runtime.tokenize import Tokenizer
 
 # Invented demo sentences (our own), mixing lexicon words, names with apostrophes, numbers with
@@ -257,6 +260,31 @@ def test_dask_local_cluster_keeps_every_token(
     assert [e["first_line"] for e in manifest["outputs"]][0] == 1
 
 
+def test_dask_analyzes_each_type_once_when_a_batch_outgrows_the_cache(tur: morphfst.Language, tmp_path: Path) -> None:
+    # A batch's word types far outnumber a cache generation, and the partitions are read in many
+    # chunks (so the cache turns over many times): the owners' answers must still serve every
+    # partition, each type analyzed once, the output that of one process.
+    pytest.importorskip("distributed")
+    import random
+
+    lemmas = sorted({e["lemma"] for e in tur.lexicon if e["lemma"].isalpha()})[:1500]
+    rng = random.Random(3)
+    lines = [" ".join(rng.choice(lemmas) for _ in range(12)) for _ in range(1200)]
+    src = tmp_path / "many.txt"
+    src.write_text("\n".join(lines) + "\n", encoding="utf-8")
+    one = run_corpus(tur, [str(src)], str(tmp_path / "one.txt"), Options(), jobs=1)
+    small = Options(cache_size=50, chunk_bytes=2048)
+    out = tmp_path / "dask"
+    run = run_corpus(tur, [str(src)], str(out), small, jobs=2, dask=True, partition_bytes=12_000)
+    distinct = len({w for line in lines for w in line.split()})
+    assert one.coverage.analyzed == distinct
+    assert run.coverage.analyzed == distinct
+    manifest = json.loads((out / "manifest.json").read_text(encoding="utf-8"))
+    assert len(manifest["outputs"]) > 4
+    joined = b"".join((out / e["output"]).read_bytes() for e in manifest["outputs"])
+    assert joined == (tmp_path / "one.txt").read_bytes()
+
+
 def test_progress_bar_shows_bytes_tokens_and_rate_only_on_a_terminal() -> None:
     from morphfst.corpus.progress import Progress
 
@@ -329,3 +357,39 @@ def test_hyphenated_word_keeps_its_first_part_in_the_gloss(tmp_path: Path) -> No
     # the letter), so segmentation and gloss have as many pieces
     assert fields["MorphSeg"].startswith("e-")
     assert fields["MorphSeg"].count("-") == fields["MorphGloss"].count("-")
+
+
+def _types_by_chunk(processor: ChunkProcessor, parts: list[Chunk]) -> set[str]:
+    """The word types a chunk-by-chunk reading looks up (what the partition's output will need)."""
+    seen: set[str] = set()
+    for chunk in parts:
+        (_, _, items), _ = processor.prepare(chunk)
+        seen.update(t for t in items or [] if t != "\n" and len(t) <= MAX_CACHED_TOKEN)
+    return seen
+
+
+@pytest.mark.parametrize("chunk_bytes,max_line_bytes", [(1 << 20, 1 << 20), (64, 256), (7, 16)])
+def test_survey_types_are_the_types_the_chunks_look_up(tur: morphfst.Language, chunk_bytes: int, max_line_bytes: int) -> None:
+    # A Dask partition's survey reads each distinct piece of bytes once for all its chunks; it must list
+    # exactly the types the partition's chunks then look up: invalid bytes, NUL, non-NFC text, long and
+    # cut lines and white space of every kind included.
+    data = bad_corpus() + "\ne\u0301v\u00a0evde\u2028kitap\u3000okul\x1cev".encode()
+    processor = ChunkProcessor(tur, Options(chunk_bytes=chunk_bytes, max_line_bytes=max_line_bytes))
+    parts = list(chunks([data], 1, chunk_bytes, max_line_bytes))
+    assert set(processor.types_of(parts)) == _types_by_chunk(processor, parts)
+
+
+@settings(max_examples=150, deadline=None)
+@given(
+    st.lists(
+        st.sampled_from(
+            [b"ev", b"\xc3\xa9", b"e\xcc\x81", b"\xff", b"\xc3", b" ", b"\n", b"'", b"-", b".", b"\xc2\xa0", b"\x00", b"a1"]
+        ),
+        max_size=40,
+    )
+)
+def test_survey_types_on_any_bytes(tur: morphfst.Language, pieces: list[bytes]) -> None:
+    data = b"".join(pieces)
+    processor = ChunkProcessor(tur, Options(chunk_bytes=5, max_line_bytes=8))
+    parts = list(chunks([data], 1, 5, 8))
+    assert set(processor.types_of(parts)) == _types_by_chunk(processor, parts)

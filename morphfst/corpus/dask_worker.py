@@ -5,7 +5,7 @@ worker's local directory and loaded there when the plugin is registered, and the
 :class:`~morphfst.corpus.records.ChunkProcessor` (so its per-type cache serves every partition the
 worker processes). The tasks: :func:`count_line_starts` (line numbers), :func:`survey_partition` (the
 word types of a partition), :func:`answer_types` (the owner of some word types analyzes them) and
-:func:`process_partition` (a partition's output, its types learned from the owners' answers first).
+:func:`process_partition` (a partition's output, its types found in the owners' answers).
 """
 
 from __future__ import annotations
@@ -24,6 +24,8 @@ from .reading import chunks, read_blocks
 from .records import ChunkProcessor, Options
 
 PLUGIN_NAME = "morphfst-grammar"
+KEPT_BATCHES = 2  # batches whose owners' answers a worker keeps
+Answers = dict[str, tuple[Any, tuple[str, int, int]]]  # word type -> (formatted output, type information)
 
 
 class GrammarPlugin(WorkerPlugin):
@@ -36,7 +38,7 @@ class GrammarPlugin(WorkerPlugin):
         self.filename = filename
         self.options = options
         self.processor: ChunkProcessor | None = None
-        self.learned: set[int] = set()  # batches whose answers this worker has put in its cache
+        self.answers: dict[int, Answers] = {}  # batch -> its owners' answers (the last two batches)
 
     def setup(self, worker: Any) -> None:
         from .sources import load_compiled
@@ -58,20 +60,15 @@ def _processor() -> ChunkProcessor:
     return _plugin().processor  # type: ignore[return-value]
 
 
-Answers = dict[str, tuple[Any, tuple[str, int, int]]]  # word type -> (formatted output, type information)
-
-
 def survey_partition(spec: dict[str, Any], owners: int) -> list[str]:
     """The distinct word types of one partition (every one, cached on this worker or not), shared
     out by owner (:func:`~morphfst.corpus.local.owner`): one string per owner, a type per line (Dask
     sends one string about ten times faster than a list of tens of thousands of strings)."""
     processor = _processor()
     options = processor.options
-    seen: dict[str, None] = {}
     with open(spec["path"], "rb") as handle:
         blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
-        for chunk in chunks(blocks, 1, options.chunk_bytes, options.max_line_bytes):
-            seen.update(dict.fromkeys(processor.types_of(chunk)))
+        seen = processor.types_of(chunks(blocks, 1, options.chunk_bytes, options.max_line_bytes))
     buckets: list[list[str]] = [[] for _ in range(max(owners, 1))]
     for token in seen:
         buckets[owner(token, len(buckets))].append(token)
@@ -119,17 +116,21 @@ def analyzed_count(answered: tuple[bytes, int]) -> int:
 
 def process_partition(spec: dict[str, Any], answers: list[tuple[bytes, int]] | None = None) -> dict[str, Any]:
     """Process the lines that start in one byte range of a file into one output file (atomic). The
-    owners' ``answers`` for the partition's batch are put in this worker's cache first (once per
-    batch), so its types are found there and not analyzed again."""
+    owners' ``answers`` for the partition's batch are what the processor consults before analyzing
+    a type it has not cached (unpickled once per batch and kept until the next one: not poured into
+    the cache, whose bounded generations would drop a large batch's types before they are used)."""
     plugin = _plugin()
     processor = _processor()
     batch = int(spec.get("batch", -1))
-    if answers and batch not in plugin.learned:
-        for data, _ in answers:
-            found: Answers = pickle.loads(data)
-            for token, (value, info) in found.items():
-                processor.learn(token, value, info)
-        plugin.learned.add(batch)
+    if answers:
+        if batch not in plugin.answers:
+            known: Answers = {}
+            for data, _ in answers:
+                known.update(pickle.loads(data))
+            plugin.answers[batch] = known
+            while len(plugin.answers) > KEPT_BATCHES:  # the next batch's partitions may start first
+                del plugin.answers[min(plugin.answers)]
+        processor.known = plugin.answers.get(batch, {})
     options = processor.options
     processor.doc = spec["doc"]
     coverage = Coverage(files=[spec["path"]])

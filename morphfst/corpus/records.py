@@ -33,6 +33,7 @@ import gc
 import json
 import unicodedata
 from collections import Counter
+from collections.abc import Iterable
 from dataclasses import dataclass, field
 from typing import Any
 
@@ -256,6 +257,8 @@ class ChunkProcessor:
         self.pending = Tally()  # figures of overlong tokens since the last flush
         self.long_in_chunk = False
         self.misses = 0
+        # answers found elsewhere (a Dask batch's owners): consulted before analyzing a type not cached
+        self.known: dict[str, tuple[Any, tuple[str, int, int]]] = {}
         self.guess_limit = MAX_GUESSES if options.mode == "jsonl" else 1  # only jsonl lists every guess
         self._seed()
 
@@ -311,6 +314,8 @@ class ChunkProcessor:
         value = self.old.get(token)
         if value is not None:
             info = self.info_old[token]
+        elif token in self.known:
+            value, info = self.known[token]
         else:
             self.misses += 1
             if not self.misses % FREEZE_EVERY:
@@ -342,10 +347,19 @@ class ChunkProcessor:
         self.long_in_chunk = True
 
     # ---- sharing word types between processes ---------------------------------------------------------
-    def types_of(self, chunk: Chunk) -> list[str]:
-        """Every word type of a chunk that the cache can hold, in first-seen order, cached or not (what
-        a Dask partition will look up; see :mod:`morphfst.corpus.cluster`)."""
-        return _cacheable(self.tokenizer.distinct_tokens(decode(chunk.data)[0]))
+    def types_of(self, parts: Iterable[Chunk]) -> list[str]:
+        """Every word type of some chunks that the cache can hold, cached or not (what a Dask partition
+        will look up; see :mod:`morphfst.corpus.cluster`).
+
+        Each distinct white-space-separated piece of bytes is decoded and read once for all the chunks
+        (a token never spans white space, see :meth:`Tokenizer.distinct_tokens`; ASCII white space
+        never falls inside a UTF-8 sequence, so an invalid byte is replaced in a piece as in the whole
+        text; and no character composes with white space, so NFC of the pieces is NFC of the text).
+        On running text, most pieces recur, and this is about twice as fast as reading each chunk."""
+        pieces: set[bytes] = set()
+        for chunk in parts:
+            pieces.update(chunk.data.split())
+        return _cacheable(self.tokenizer.distinct_tokens(decode(b" ".join(pieces))[0]))
 
     def prepare(self, chunk: Chunk) -> tuple[Prepared, list[str]]:
         """The decoded text of a chunk (with its tokens, in terms mode) and its word types that are not
