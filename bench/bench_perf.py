@@ -61,8 +61,8 @@ noisy, so only ratios measured in the same run are worth comparing.
    the report has none) and distinct the distinct tokens of the text as the corpus tokenizer cuts
    them (the unit the workers cache and count); the same share against the report's "word_types"
    (normalized types, numbers left out) is printed beside it.
-4. Growth with corpus size: -j 1 and -j 2 on the first lines of the same text (--growth sizes,
-   default a quarter of --tokens and --tokens).
+4. Growth with corpus size: -j 1, -j 2 and Dask on a running cluster on the first lines of the same
+   text (--growth sizes, default a quarter of --tokens and --tokens).
 
 Usage::
 
@@ -854,11 +854,15 @@ def distinct_tokens(lang: morphfst.Language, corpus: Path) -> int | None:
 
 # A local Dask cluster kept running between the timed commands (as a cluster is in real use: the
 # commands connect to it with --dask ADDRESS); it stops when its standard input closes.
+# It is set up as the command sets up the cluster it starts itself (no dashboard, no statistical
+# profiler: see morphfst.corpus.cluster.connect), which the README advises for any cluster.
 RUNNING_CLUSTER = """
 import logging, sys
+import dask
 from distributed import LocalCluster
-cluster = LocalCluster(n_workers=2, threads_per_worker=1, processes=True, dashboard_address=None,
-                       silence_logs=logging.ERROR)
+with dask.config.set({"distributed.worker.profile.enabled": False}):
+    cluster = LocalCluster(n_workers=2, threads_per_worker=1, processes=True, dashboard_address=":0",
+                           scheduler_kwargs={"dashboard": False}, silence_logs=logging.ERROR)
 print(cluster.scheduler_address, flush=True)
 sys.stdin.read()
 cluster.close()
@@ -1046,23 +1050,32 @@ def corpus_figures(bench: Bench) -> None:
 
 
 def section_growth(bench: Bench, name: str, corpus: Path, info: CorpusInfo, full: dict[str, tuple[float, Repeats]]) -> None:
+    """-j 1, -j 2 and (when a running cluster is up) Dask on the first lines of the text: how the
+    speed-up and Dask's fixed costs (importing dask.distributed, connecting, the survey step) weigh
+    as the corpus grows."""
     sizes = sorted(set(bench.args.growth or [max(bench.args.tokens // 4, 1), bench.args.tokens]))
+    modes = ["j1", "j2"] + (["daskrun"] if "daskrun" in full else [])
     say(f"\n4. growth with corpus size, {name} (the first lines of the same text; median of {bench.args.runs} runs)")
+    dask_head = f" {'Dask ADDR s':>11} {'/ -j 2':>6}" if "daskrun" in modes else ""
     say(
-        f"   {'tokens':>10} {'types':>8} {'type/token':>10} {'-j 1 s':>8} {'tokens/s':>10} {'-j 2 s':>8} {'tokens/s':>10} {'j2 speed-up':>11}"
+        f"   {'tokens':>10} {'types':>8} {'type/token':>10} {'-j 1 s':>8} {'tokens/s':>10} {'-j 2 s':>8} {'tokens/s':>10} "
+        f"{'j2 speed-up':>11}{dask_head}"
     )
     for size in sizes:
         if size >= info.tokens:
-            n, types, j1, j2 = info.tokens, info.types, full["j1"][0], full["j2"][0]
+            n, types = info.tokens, info.types
+            got = full
         else:
             part = bench.tmp / f"{name}-head-{size}.txt"
             n = head_of(corpus, size, part)
             types = len({w for line in part.open(encoding="utf-8") for w in line.split()})
-            got = time_corpus(bench, name, part, ["j1", "j2"])
-            j1, j2 = got["j1"][0], got["j2"][0]
+            got = time_corpus(bench, name, part, modes)
             part.unlink(missing_ok=True)
+        j1, j2 = got["j1"][0], got["j2"][0]
+        dask = f" {got['daskrun'][0]:>11.2f} {got['daskrun'][0] / j2:>6.2f}" if "daskrun" in modes else ""
         say(
-            f"   {n:>10,} {types:>8,} {types / n:>10.3f} {j1:>8.2f} {n / j1:>10,.0f} {j2:>8.2f} {n / j2:>10,.0f} {j1 / j2:>11.2f}"
+            f"   {n:>10,} {types:>8,} {types / n:>10.3f} {j1:>8.2f} {n / j1:>10,.0f} {j2:>8.2f} {n / j2:>10,.0f} "
+            f"{j1 / j2:>11.2f}{dask}"
         )
 
 

@@ -65,6 +65,7 @@ def partitions(sources: list[Source], partition_bytes: int) -> list[tuple[int, i
 
 def connect(address: str | None, workers: int) -> tuple[Any, Any]:
     """A client on the scheduler at ``address``, or on a local cluster of ``workers`` processes started here."""
+    import dask
     from distributed import Client, LocalCluster
 
     if address:
@@ -74,13 +75,18 @@ def connect(address: str | None, workers: int) -> tuple[Any, Any]:
             raise UserError(
                 f"cannot reach the Dask scheduler at {address}: {exc}", hint="check the address (e.g. tcp://host:8786)"
             ) from None
-    cluster = LocalCluster(
-        n_workers=max(workers, 1),
-        threads_per_worker=1,
-        processes=True,
-        dashboard_address=None,
-        silence_logs=logging.ERROR,
-    )
+    # No dashboard (nobody looks at it), so no statistical profiler either: it samples every task's
+    # stack 100 times a second and made the survey tasks twice as slow (bench/bench_perf.py). The
+    # scheduler's HTTP server listens on any free port: the default one may be another cluster's.
+    with dask.config.set({"distributed.worker.profile.enabled": False}):
+        cluster = LocalCluster(
+            n_workers=max(workers, 1),
+            threads_per_worker=1,
+            processes=True,
+            dashboard_address=":0",
+            scheduler_kwargs={"dashboard": False},
+            silence_logs=logging.ERROR,
+        )
     return Client(cluster), cluster
 
 
