@@ -176,6 +176,8 @@ def run_dask(
             result = future.result()
             cov: Coverage = result["coverage"]
             total.merge(cov)
+            for tally in result["tallies"]:
+                total.add_tally(tally)
             spec = specs[result["index"]]
             entries[result["index"]] = {
                 "input": spec["path"],

@@ -21,7 +21,7 @@ from .coverage import Coverage
 from .local import owner
 from .outputs import AtomicFile
 from .reading import chunks, read_blocks
-from .records import ChunkProcessor, Options
+from .records import ChunkProcessor, Options, Tally
 
 PLUGIN_NAME = "morphfst-grammar"
 KEPT_BATCHES = 2  # batches whose owners' answers a worker keeps
@@ -134,6 +134,7 @@ def process_partition(spec: dict[str, Any], answers: list[tuple[bytes, int]] | N
     options = processor.options
     processor.doc = spec["doc"]
     coverage = Coverage(files=[spec["path"]])
+    tallies: list[Tally] = []  # per-type figures, added up by the client (idle meanwhile), not here
     sink = AtomicFile(spec["output"])
     try:
         with open(spec["path"], "rb") as handle:
@@ -141,10 +142,19 @@ def process_partition(spec: dict[str, Any], answers: list[tuple[bytes, int]] | N
             for chunk in chunks(blocks, spec["first_line"], options.chunk_bytes, options.max_line_bytes):
                 result = processor.process(chunk)
                 sink.write(result.data)
+                if result.tally is not None:
+                    tallies.append(result.tally)
+                    result.tally = None
                 coverage.add(result)
-        coverage.add_tally(processor.flush())
+        tallies.append(processor.flush())
         sink.commit()
     except BaseException:
         sink.abort()
         raise
-    return {"index": spec["index"], "output": spec["output"], "coverage": coverage, "bytes": spec["stop"] - spec["start"]}
+    return {
+        "index": spec["index"],
+        "output": spec["output"],
+        "coverage": coverage,
+        "tallies": tallies,
+        "bytes": spec["stop"] - spec["start"],
+    }
