@@ -230,6 +230,9 @@ def test_glosses_found_in_the_text_are_the_parsed_glosses(tur: morphfst.Language
     keys = list(parsed)[::37]
     assert len(keys) > 60  # past FINDS: the rest are answered from the whole parse
     assert [found.get(k) for k in keys] == [parsed[k] for k in keys]
+    assert found.get(("no such lemma", "N"), "?") == "?" and found.get(("no such lemma", "N")) is None  # parsed whole
+    with pytest.raises(KeyError):
+        found[("no such lemma", "N")]
     fresh = archive.Glosses(text)
     assert fresh.get(("no such lemma", "N"), "?") == "?" and ("ev", "N") in fresh and fresh[("ev", "N")] == parsed[("ev", "N")]
     assert dict(fresh) == parsed and len(fresh) == len(parsed)

@@ -196,6 +196,15 @@ class Glosses(Mapping[tuple[str, str], str]):
         gloss = self._found[key] = self._text[start : self._text.index("\n", start)]
         return gloss
 
+    def get(self, key: tuple[str, str], default: Any = None) -> Any:  # type: ignore[override]
+        """:meth:`__getitem__` without raising (decoding asks for every guessed lemma, which has none)."""
+        if self._parsed:
+            return self._found.get(key, default)
+        try:
+            return self[key]
+        except KeyError:
+            return default
+
     def _parse(self) -> None:
         self._found = read_glosses(self._text[1:])
         self._parsed = True

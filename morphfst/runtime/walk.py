@@ -61,6 +61,7 @@ _Piece = TypeVar("_Piece", Step, End)
 Key = tuple[str, str]  # an analysis's text and segmentation: what makes two decoded paths the same
 Tail = tuple[str, tuple[str, ...], tuple[tuple[int, tuple[str, ...]], ...], int, str]  # see FastAnalyzer._parse_tail
 Parts = tuple[str, str, tuple[str, ...], str, tuple[Morph, ...], Key]  # see FastAnalyzer._parts
+Shared = tuple[str, tuple[str, ...], tuple[Morph, ...], str, str]  # see FastAnalyzer._parse_shared
 _UNSEEN: Any = object()
 
 
@@ -521,6 +522,7 @@ class FastAnalyzer:
     def __init__(self, lang: Language) -> None:
         self.lang = lang
         self.seam = lang.space.to_char.get(COMPOUND_SEAM, "")  # between compound parts, on both tapes
+        self.plus = lang.plus
         self.bounded = ArcWalker(lang.arcs("bounded"), skip=[lang.plus, self.seam] if self.seam else [lang.plus])
         self._guesser: ArcWalker | None | bool = False  # False: not looked up yet (read on first guess)
         self.mark = lang.space.to_char.get(GUESS_SYMBOL, "")
@@ -535,7 +537,7 @@ class FastAnalyzer:
         pos_codes = "".join(code for code, kind in self.kinds.items() if kind == "pos")
         self.pos_re = re.compile(f"[{re.escape(pos_codes)}]" if pos_codes else "(?!)")
         self._tails: dict[str, Tail] = {}
-        self._affix_morphs: dict[tuple[str, str], tuple[tuple[Morph, ...], str]] = {}  # with their segmentation
+        self._shared: dict[tuple[str, str], Shared] = {}  # see _parts
         # one Morph per (form, affix, labels), shared by every analysis that has it: fewer objects for
         # the cycle collector to walk (a word's own objects are what a new word costs it)
         self._affix_pool: dict[tuple[str, int, tuple[str, ...]], Morph] = {}
@@ -597,17 +599,17 @@ class FastAnalyzer:
         ranks them and only the first ``limit`` are built."""
         low: dict[Key, tuple[float, Parts]] = {}
         bound: float | None = None
+        parts_of = self._parts
         for bounded, internal, weight in walked:
-            rounded = round(weight, 5)
-            if bound is not None and rounded > bound:
+            if bound is not None and round(weight, 5) > bound:
                 break
-            parts = self._parts(internal, bounded, True)
+            parts = parts_of(internal, bounded, True)
             if parts is None:  # not a plain guess: decode everything
                 return self.decode_all(surface, walked, True)[:limit]
             if parts[5] not in low:
                 low[parts[5]] = (weight, parts)
                 if bound is None and len(low) >= limit:
-                    bound = rounded
+                    bound = round(weight, 5)
         ranked = sorted(low.items(), key=lambda item: (round(item[1][0], 5), item[0]))[:limit]
         return [self._build(surface, parts, weight, True) for _, (weight, parts) in ranked]
 
@@ -639,43 +641,55 @@ class FastAnalyzer:
         """Lemma, part of speech, features, stem form, affix morphs and (text, segmentation) of a path
         (``None`` for a compound), without building the analysis.
 
-        The analysis after the lemma (part of speech, affix ids, features) and the affix morphs are
-        shared by many words: both are parsed once and kept in dicts, with their parts of the
-        analysis text and of the segmentation.
+        What follows the lemma (part of speech, affix ids, features; with a guess, the guess mark)
+        and the surface forms after the stem are shared by many words: each such pair is parsed once
+        and kept, with its affix morphs and its parts of the analysis text and of the segmentation,
+        so that a path costs one lookup besides cutting its two strings.
         """
-        if guessed:
-            internal = internal.replace(self.mark, "")
-        elif self.seam and self.seam in internal:
+        if not guessed and self.seam and self.seam in internal:
             return None
         found = self.pos_re.search(internal)
         i = found.start() if found else len(internal)
         lemma = internal[:i]
-        tail = internal[i:]
+        cut = bounded.find(self.plus)
+        if cut < 0:
+            stem_form, rest = bounded, ""
+        else:
+            stem_form, rest = bounded[:cut], bounded[cut:]
+        key = (internal[i:], rest)
+        shared = self._shared.get(key)
+        if shared is None:
+            shared = self._parse_shared(key, guessed)
+        pos, features, affixes, affix_seg, tags = shared
+        # Analysis.text and .segmentation, from the shared parts
+        segmentation = f"{stem_form}-{affix_seg}" if stem_form and affix_seg else stem_form or affix_seg
+        return lemma, pos, features, stem_form, affixes, (f"{lemma} {tags}", segmentation)
+
+    def _parse_shared(self, key: tuple[str, str], guessed: bool) -> Shared:
+        """The shared parts of :meth:`_parts` for (analysis after the lemma, surface after the stem)."""
+        tail, rest = key
+        if guessed:
+            tail = tail.replace(self.mark, "")
         parsed = self._tails.get(tail)
         if parsed is None:
             parsed = self._parse_tail(tail)
         pos, features, groups, nforms, tags = parsed
-        plus = self.lang.plus
-        cut = bounded.find(plus)
-        stem_form = bounded if cut < 0 else bounded[:cut]
-        rest = "" if cut < 0 else bounded[cut:]
-        key = (tail, rest)
-        built = self._affix_morphs.get(key)
-        if built is None:
-            affixes = self._build_affixes(groups, nforms, rest.split(plus)[1:] if rest else [])
-            built = (affixes, "-".join(m.form for m in affixes if m.form))
-            if len(self._affix_morphs) > 100_000:
-                self._affix_morphs.clear()
-                self._affix_pool.clear()
-            self._affix_morphs[key] = built
-        affixes, affix_seg = built
-        # Analysis.text and .segmentation, from the cached parts
-        segmentation = f"{stem_form}-{affix_seg}" if stem_form and affix_seg else stem_form or affix_seg
-        return lemma, pos, features, stem_form, affixes, (f"{lemma} {tags}", segmentation)
+        affixes = self._build_affixes(groups, nforms, rest.split(self.plus)[1:] if rest else [])
+        if len(self._shared) > 100_000:
+            self._shared.clear()
+            self._affix_pool.clear()
+        shared = self._shared[key] = (pos, features, affixes, "-".join(m.form for m in affixes if m.form), tags)
+        return shared
 
     def _build(self, surface: str, parts: Parts, weight: float, guessed: bool) -> Analysis:
         """The :class:`Analysis` of :meth:`_parts` (the stem morph shared by every analysis that has it)."""
         lemma, pos, features, stem_form, affixes, _ = parts
+        if guessed:
+            # a guessed stem is new to the lexicon and seldom met again: not kept (the kept stems are
+            # objects that every full collection of the cycle collector walks)
+            gloss = self.lang.glosses.get((lemma, pos), lemma)
+            stem = _new_morph(stem_form, gloss, (pos,), "stem", lemma, None, None, None)
+            return _new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, self.lang.ud, True)  # type: ignore[no-any-return]
         stem_key = (stem_form, lemma, pos)
         stem = self._stems.get(stem_key)
         if stem is None:
