@@ -15,6 +15,7 @@ EXAMPLES = """examples:
   morphfst generate kitap N SG PSS3S ACC          labels may also be separate arguments
   morphfst generate -l fin katu "N;SG;IN+ESS"     Finnish
   morphfst generate -i requests.txt -f tsv        lines 'lemma FEATURES' (space or tab between)
+  morphfst generate --guess zırzop "N;PL;DAT"     a lemma the lexicon lacks, inflected as its shape is guessed
 """
 
 
@@ -32,6 +33,12 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
     add_language(p)
     add_input(p, "requests (lemma and features per line)")
     add_format(p)
+    p.add_argument(
+        "--guess",
+        action="store_true",
+        help="inflect a lemma the lexicon does not know as the guesser reads its shape (the classes whose guess "
+        "pattern allows it; forms marked guessed, weighing 100 more)",
+    )
     p.set_defaults(func=run)
 
 
@@ -53,24 +60,28 @@ def run(args: argparse.Namespace) -> int:
     stats = ReadStats()
     out = sys.stdout
     table = Aligned(["analysis", "form", "weight"], out) if args.format == "table" else None
+    guessing = bool(args.guess)
     if args.format == "tsv":
-        out.write("lemma\tfeatures\trank\tform\tweight\n")
+        out.write("lemma\tfeatures\trank\tform\tweight" + ("\tguessed\n" if guessing else "\n"))
     for lemma, feats in requests(args, stats):
-        forms = lang.generate(lemma, feats) if feats else []
+        forms = lang.generate(lemma, feats, guess=guessing) if feats else []
         analysis = f"{lemma} {feats}"
         if args.format == "jsonl":
             write_json({"lemma": lemma, "features": feats, "forms": [f.to_dict() for f in forms]}, out)
         elif args.format == "tsv":
+            end = "\t\n" if guessing else "\n"
             if not forms:
-                out.write(f"{tsv_field(lemma)}\t{tsv_field(feats)}\t0\t\t\n")
+                out.write(f"{tsv_field(lemma)}\t{tsv_field(feats)}\t0\t\t{end}")
             for rank, f in enumerate(forms, start=1):
-                out.write(f"{tsv_field(lemma)}\t{tsv_field(feats)}\t{rank}\t{f.form}\t{f.weight:.4f}\n")
+                mark = ("\t1\n" if f.guessed else "\t0\n") if guessing else "\n"
+                out.write(f"{tsv_field(lemma)}\t{tsv_field(feats)}\t{rank}\t{f.form}\t{f.weight:.4f}{mark}")
         else:
             assert table is not None
             if not forms:
                 table.add([analysis, "(no form)", ""])
             for rank, f in enumerate(forms):
-                table.add([analysis if rank == 0 else "", f.form, f"{f.weight:.2f}"])
+                shown = f"{analysis} (guessed)" if f.guessed else analysis
+                table.add([shown if rank == 0 else "", f.form, f"{f.weight:.2f}"])
     if table:
         table.flush()
     report_stats(stats)

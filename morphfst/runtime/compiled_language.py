@@ -20,7 +20,7 @@ from ..compile.arctable import Arcs, FstArcs
 from ..compile.fstutil import Arc, Weight, acc, is_empty, paths
 from ..errors import UserError
 from ..language.normalize import Normalization, make_normalizer, restore_case
-from ..language.symbols import PRIVATE_START, SymbolSpace
+from ..language.symbols import GUESS_SYMBOL, PRIVATE_START, SymbolSpace
 from .hyphenated import HYPHEN, hyphenated
 from .results import Analysis, Form, Segmentation
 from .walk import FastAnalyzer
@@ -54,6 +54,7 @@ class Language:
         self.analyze_cached = lru_cache(maxsize=65536)(self._analyze_tuple)
         self._fast: FastAnalyzer | None = None
         self._orders: dict[str, str] = {}  # label codes in an order that generated nothing -> one that did
+        self._guessing: pynini.Fst | bool | None = None  # see _guess_generator (False: no guesser)
 
     # ---- analysis ---------------------------------------------------------------------------------
     def analyze(self, word: str, guess: bool = False) -> list[Analysis]:
@@ -167,25 +168,75 @@ class Language:
             hint=(f"did you mean {near[0]!r}? " if near else "") + "labels: " + " ".join(known),
         )
 
-    def generate(self, lemma: str, features: str | Sequence[str]) -> list[Form]:
+    def generate(self, lemma: str, features: str | Sequence[str], guess: bool = False) -> list[Form]:
         """Surface forms of ``lemma`` with ``features`` (``"N;PL;LOC"`` or a list), best first.
 
         The labels may be given in any order: when the given order has no form, every order is tried (an
         acceptor over the permutations of the labels), and the order found is remembered, so that the next
         call with the labels in the same order (any lemma) tries that order first, as fast as labels in
         the grammar's order.
+
+        With ``guess``, a lemma that gives no form (one the lexicon lacks) is inflected as the guesser
+        would read it: as a stem of each class whose ``guess`` pattern allows its shape, through the
+        same slots and rules (see :meth:`generate_guessed`).
         """
         labels = [f for f in (features.split(";") if isinstance(features, str) else features) if f.strip()]
         labels = [f.strip() for f in labels]
         codes = [self._label_code(f) for f in labels]
+        forms = self._generate_with(self.fsts["generator"], lemma, labels, codes)
+        if not forms:
+            forms = self._generate_compound(lemma, labels)
+        if not forms and guess:
+            forms = self.generate_guessed(lemma, labels)
+        return forms
+
+    def generate_guessed(self, lemma: str, features: str | Sequence[str]) -> list[Form]:
+        """Forms of ``lemma`` as a guessed stem (marked ``guessed``, weighing what a guessed analysis
+        weighs), whether or not the lexicon has it: the guesser's transducer run from the analysis side,
+        so a form generated here is one that :meth:`guess` reads back as ``lemma`` with ``features``.
+        Empty when no class has a ``guess`` pattern that allows the lemma's shape."""
+        labels = [f for f in (features.split(";") if isinstance(features, str) else features) if f.strip()]
+        labels = [f.strip() for f in labels]
+        codes = [self._label_code(f) for f in labels]
+        generator = self._guess_generator()
+        if generator is None:
+            return []
+        # a guessed stem is written in the folded case of the guess patterns: Zırzop as zırzop, then
+        # the forms in the lemma's own case (Zırzop'a)
+        folded = self.normalize(lemma)
+        analysis = f"{lemma} {';'.join(labels)}"
+        return [
+            Form(restore_case(lemma, f.form, self.normalize) if folded != lemma else f.form, f.weight, analysis, True)
+            for f in self._generate_with(generator, folded, labels, codes)
+        ]
+
+    def _guess_generator(self) -> pynini.Fst | None:
+        """The guesser inverted (analysis -> surface) with the guess marker and affix ids read as nothing
+        and the morph boundaries written as nothing: what the generator is to the bounded analyzer
+        (built on first use; the guesser is small)."""
+        if self._guessing is None:
+            if "guesser" not in self.fsts:
+                self._guessing = False
+            else:
+                silent = [(ord(c), 0) for c, kind in self.space.kinds.items() if kind == "affix"]
+                mark = self.space.to_char.get(GUESS_SYMBOL)
+                if mark:
+                    silent.append((ord(mark), 0))
+                fst = self.fsts["guesser"].copy().invert()
+                fst.relabel_pairs(ipairs=silent, opairs=[(ord(self.plus), 0)])
+                self._guessing = fst.arcsort("ilabel")
+        return self._guessing if isinstance(self._guessing, pynini.Fst) else None
+
+    def _generate_with(self, generator: pynini.Fst, lemma: str, labels: list[str], codes: list[str]) -> list[Form]:
+        """:meth:`generate` through ``generator`` (labels in the order given, else in any order)."""
         analysis = f"{lemma} {';'.join(labels)}"
         given = "".join(codes)
         known = self._orders.get(given)  # an order that served these labels when the given one did not
-        forms = self._generate_from(acc(lemma + known), analysis) if known else []
+        forms = self._generate_from(generator, acc(lemma + known), analysis) if known else []
         if not forms:
-            forms = self._generate_from(acc(lemma + given), analysis)
+            forms = self._generate_from(generator, acc(lemma + given), analysis)
         if not forms and 1 < len(codes) <= 8:
-            lattice = pynini.compose(acc(lemma) + _permutations(codes), self.fsts["generator"])
+            lattice = pynini.compose(acc(lemma) + _permutations(codes), generator)
             found = paths(lattice, MAX_PATHS)
             forms = _forms(found, analysis)
             if found and len(self._orders) < 10_000:
@@ -193,8 +244,6 @@ class Language:
         if forms and self.normalize(lemma) != lemma:
             # surface stems are in folded case: write the lemma's letters as the lemma does (Ankara'da)
             forms = [Form(restore_case(lemma, f.form, self.normalize), f.weight, f.analysis) for f in forms]
-        if not forms:
-            forms = self._generate_compound(lemma, labels)
         return forms
 
     def compound_split(self, lemma: str) -> tuple[str, str] | None:
@@ -225,8 +274,8 @@ class Language:
         analysis = f"{lemma} {';'.join(labels)}"
         return [Form(head + f.form, f.weight, analysis) for f in self.generate(tail, labels)]
 
-    def _generate_from(self, query: pynini.Fst, analysis: str) -> list[Form]:
-        return _forms(paths(pynini.compose(query, self.fsts["generator"]), MAX_PATHS), analysis)
+    def _generate_from(self, generator: pynini.Fst, query: pynini.Fst, analysis: str) -> list[Form]:
+        return _forms(paths(pynini.compose(query, generator), MAX_PATHS), analysis)
 
     def generate_text(self, analysis: str) -> list[Form]:
         """Generate from an analysis text ``lemma POS;FEAT;...``."""

@@ -111,9 +111,11 @@ class Form:
     form: str
     weight: float
     analysis: str
+    guessed: bool = False  # True when generated from a guessed stem (see Language.generate_guessed)
 
     def to_dict(self) -> dict[str, Any]:
-        return {"form": self.form, "weight": round(self.weight, 6), "analysis": self.analysis}
+        found = {"form": self.form, "weight": round(self.weight, 6), "analysis": self.analysis}
+        return found | {"guessed": True} if self.guessed else found
 
 
 @dataclass(frozen=True)
