@@ -683,7 +683,29 @@ def _aligned_lines(pairs: list[tuple[str, str]], first: int) -> tuple[str, str, 
 
 
 def _guess_stems(session: DebugSession, klass: m.StemClass, flag: m.Flag | None) -> pynini.Fst | None:
-    """Guessed stems of a class (optionally with a flag's marker): lemma = stem, letters only."""
+    """Guessed stems of a class (optionally with a flag's marker): lemma = stem, letters only.
+
+    What does not depend on the flag (the stem letters the class's guess pattern allows, its slot
+    graph) is built once per class and session; a flag adds only its marker and cost."""
+    parts = session.memo(("guess-parts", klass.name), lambda: _class_guess_parts(session, klass))
+    if parts is None:
+        return None
+    stem, tags, slots = parts
+    s = session.space
+    after = ""
+    if flag is not None and flag.marks:
+        after += s.code(flag.marks)
+    if klass.apostrophe and "'" in s.to_char:
+        after += s.code("'")
+    tail = union(cross(s.code(f"pos:{t}"), after) for t in tags)
+    out = cross("", s.code(m.WORD_START)) + stem + tail
+    if flag is not None:
+        out = out + pynini.accep("", weight=GUESS_FLAG_COST)
+    return out + slots
+
+
+def _class_guess_parts(session: DebugSession, klass: m.StemClass) -> tuple[pynini.Fst, list[str], pynini.Fst] | None:
+    """The flag-independent parts of :func:`_guess_stems`: stem letters, parts of speech, slot graph."""
     s = session.space
     comp = session.compiler
     structural = {s.code("'")} if "'" in s.to_char and any(c.apostrophe for c in session.grammar.classes.values()) else set()
@@ -697,17 +719,8 @@ def _guess_stems(session: DebugSession, klass: m.StemClass, flag: m.Flag | None)
     stem = stem.optimize()
     if is_empty(stem):
         return None
-    tags = klass.pos_allowed or session.grammar.pos_tags
-    after = ""
-    if flag is not None and flag.marks:
-        after += s.code(flag.marks)
-    if klass.apostrophe and "'" in s.to_char:
-        after += s.code("'")
-    tail = union(cross(s.code(f"pos:{t}"), after) for t in tags)
-    out = cross("", s.code(m.WORD_START)) + stem + tail
-    if flag is not None:
-        out = out + pynini.accep("", weight=GUESS_FLAG_COST)
-    return out + comp.slot_graph(list(klass.next))
+    tags = list(klass.pos_allowed or session.grammar.pos_tags)
+    return stem, tags, comp.slot_graph(list(klass.next))
 
 
 def guesses(session: DebugSession, surface: str, limit: int = 4) -> list[tuple[str, list[str], str, float]]:
@@ -729,6 +742,8 @@ def guesses(session: DebugSession, surface: str, limit: int = 4) -> list[tuple[s
                 machine = _guess_stems(session, klass, flag)
                 if machine is not None and filt is not None:
                     machine = pynini.compose(filt, machine)
+                if machine is not None:
+                    machine.arcsort("olabel")  # composed with a new lattice for every word: sorted once
                 return machine
 
             machine = session.memo(("guess", klass.name, flag.name if flag else ""), build)

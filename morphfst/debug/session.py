@@ -166,7 +166,8 @@ class DebugSession:
         key = (surface, blocked)
         if key not in self._lattices:
             k, fst = self.back_lattice(surface, blocked)
-            self._lattices[key] = self._invert(fst, k, blocked, limit=None)[1]
+            # sorted once here, or every composition with a guess machine sorts its own copy first
+            self._lattices[key] = self._invert(fst, k, blocked, limit=None)[1].arcsort("ilabel")
         return self._lattices[key]
 
     def back_lattice(self, surface: str, blocked: frozenset[str] = frozenset()) -> tuple[int, pynini.Fst]:
