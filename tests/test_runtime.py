@@ -44,21 +44,21 @@ def test_generated_forms_keep_the_case_of_the_lemma(tur: morphfst.Language) -> N
 
 
 def test_generate_guesses_the_forms_of_a_lemma_the_lexicon_lacks(tur: morphfst.Language) -> None:
-    # zırzop: a made-up stem of Turkish shape; back harmony (-lAr -> -lar, -A -> -a) and the voicing of a
+    # tırzop: a made-up stem of Turkish shape; back harmony (-lAr -> -lar, -A -> -a) and the voicing of a
     # final p before a vowel in a word of two syllables are common practice
-    assert tur.generate("zırzop", "N;PL;DAT") == []
-    guessed = tur.generate("zırzop", "N;PL;DAT", guess=True)
-    assert [(f.form, f.guessed) for f in guessed] == [("zırzoplara", True)] and guessed[0].weight >= 100
-    assert [f.form for f in tur.generate("zırzop", ["DAT", "N", "PL"], guess=True)] == ["zırzoplara"]  # any order
-    assert [f.form for f in tur.generate("zırzop", "N;SG;ACC", guess=True)] == ["zırzobu"]
-    assert [f.form for f in tur.generate("Zırzop", "PROPN;SG;DAT", guess=True)] == ["Zırzop'a"]
+    assert tur.generate("tırzop", "N;PL;DAT") == []
+    guessed = tur.generate("tırzop", "N;PL;DAT", guess=True)
+    assert [(f.form, f.guessed) for f in guessed] == [("tırzoplara", True)] and guessed[0].weight >= 100
+    assert [f.form for f in tur.generate("tırzop", ["DAT", "N", "PL"], guess=True)] == ["tırzoplara"]  # any order
+    assert [f.form for f in tur.generate("tırzop", "N;SG;ACC", guess=True)] == ["tırzobu"]
+    assert [f.form for f in tur.generate("Tırzop", "PROPN;SG;DAT", guess=True)] == ["Tırzop'a"]
     assert guessed[0].to_dict()["guessed"] is True and "guessed" not in tur.generate("ev", "N;PL;DAT")[0].to_dict()
     # a lemma the lexicon has is generated from the lexicon, guess or not
     assert tur.generate("kitap", "N;SG;ACC", guess=True) == tur.generate("kitap", "N;SG;ACC")
     assert not tur.generate("kitap", "N;SG;ACC", guess=True)[0].guessed
 
 
-@pytest.mark.parametrize("lemma", ["zırzop", "bılgıt", "fenerlik", "kömpür", "tarıka"])
+@pytest.mark.parametrize("lemma", ["tırzop", "bılgıt", "fenerlik", "kömpür", "tarıka"])
 @pytest.mark.parametrize("features", ["N;PL;DAT", "N;SG;ACC", "N;SG;PSS1S;ABL", "N;PL;PSS3P;GEN"])
 def test_a_guessed_form_is_read_back_by_the_guesser(tur: morphfst.Language, lemma: str, features: str) -> None:
     forms = tur.generate_guessed(lemma, features)

@@ -15,7 +15,7 @@ EXAMPLES = """examples:
   morphfst generate kitap N SG PSS3S ACC          labels may also be separate arguments
   morphfst generate -l fin katu "N;SG;IN+ESS"     Finnish
   morphfst generate -i requests.txt -f tsv        lines 'lemma FEATURES' (space or tab between)
-  morphfst generate --guess zırzop "N;PL;DAT"     a lemma the lexicon lacks, inflected as its shape is guessed
+  morphfst generate --guess tırzop "N;PL;DAT"     a lemma the lexicon lacks, inflected as its shape is guessed
 """
 
 

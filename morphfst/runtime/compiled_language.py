@@ -201,8 +201,8 @@ class Language:
         generator = self._guess_generator()
         if generator is None:
             return []
-        # a guessed stem is written in the folded case of the guess patterns: Zırzop as zırzop, then
-        # the forms in the lemma's own case (Zırzop'a)
+        # a guessed stem is written in the folded case of the guess patterns: Tırzop as tırzop, then
+        # the forms in the lemma's own case (Tırzop'a)
         folded = self.normalize(lemma)
         analysis = f"{lemma} {';'.join(labels)}"
         return [
