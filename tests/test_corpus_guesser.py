@@ -131,6 +131,14 @@ def test_the_first_guess_finds_the_suffixes_of_an_unknown_word(
         ("trabcasteissa", "trabcaste-i-ssa", "trabcast N;PL;IN+ESS"),
         ("glorppauksen", "glorppaukse-n", "glorppaus N;SG;GEN"),
         ("plonkkaamassa", "plonkkaa-massa", "plonkkata V;NFIN;INF3;IN+ESS"),
+        # more of those types (from memory): -in nouns type 33 (puhelin: puhelimen), -uus/-yys/-eus/-eys
+        # type 40 (korkeus: korkeuden), -e nouns type 48 (kirje: kirjeen), -io type 3 (organisaatio:
+        # organisaation), -ia type 12 (biologia: biologiaa), -as/-äs type 41 (vieras: vieraan)
+        ("kraapimen", "kraapime-n", "kraapin N;SG;GEN"),
+        ("rötkeyden", "rötkeyde-n", "rötkeys N;SG;GEN"),
+        ("vörjeen", "vörjee-n", "vörje N;SG;GEN"),
+        ("valisaation", "valisaatio-n", "valisaatio N;SG;GEN"),
+        ("kalsologiaa", "kalsologia-a", "kalsologia N;SG;PRT"),
     ],
 )
 def test_the_first_finnish_guess_finds_the_inflection_type(
@@ -139,3 +147,21 @@ def test_the_first_finnish_guess_finds_the_inflection_type(
     assert not fin.analyze(word)
     first = fin.guess(word)[0]
     assert (first.segmentation, first.text) == (segmentation, text)
+
+
+@pytest.mark.parametrize(
+    ("lemma", "features", "form"),
+    [
+        # generated as guessed, by the same types (from memory; invented stems as above)
+        ("kraapin", "N;PL;PRT", "kraapimia"),
+        ("rötkeys", "N;SG;GEN", "rötkeyden"),
+        ("tölväs", "ADJ;SG;GEN", "tölvään"),
+        ("valisaatio", "N;PL;PRT", "valisaatioita"),
+        ("glorppaus", "N;SG;GEN", "glorppauksen"),
+    ],
+)
+def test_finnish_lemmas_the_lexicon_lacks_are_generated_by_their_guessed_type(
+    fin: morphfst.Language, lemma: str, features: str, form: str
+) -> None:
+    assert not fin.generate(lemma, features)
+    assert [f.form for f in fin.generate(lemma, features, guess=True)][:1] == [form]
