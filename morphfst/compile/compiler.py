@@ -469,18 +469,28 @@ class Compiler:
         Analysis side: the stem's letters, a part of speech of the class and the guess marker; underlying
         side: word start, the stem and the class's apostrophe. Every guessed analysis weighs at least
         :data:`GUESS_OFFSET` (so it always ranks below an analysis with a lexicon stem) plus
-        :data:`GUESS_STEM_WEIGHT` per stem letter (shorter stems, i.e. longer affix chains, rank first).
+        :data:`GUESS_STEM_WEIGHT` per stem letter (shorter stems, i.e. longer affix chains, rank first), half
+        of it counted on the lemma and half on the stem the class's stem rules make of it.
         """
         if klass.guess is None:
             return None
         s = self.space
         mark = s.add(GUESS_SYMBOL, "guess", single_char_ok=False)
-        letters = union(acc(c, weight=GUESS_STEM_WEIGHT) for c in self.letter_codes).closure()
-        stem = self.pattern_stems(klass, klass.guess, "guess", letters)
+        # half the weight on the lemma's letters, half on the stem's: where the class's stem rules take an
+        # ending off the lemma (a verb's infinitive), the ending costs half as much as a stem letter,
+        # so a verb reading is not dearer than a bare noun of the same letters by its whole ending
+        half = GUESS_STEM_WEIGHT / 2
+        letters = union(acc(c, weight=half) for c in self.letter_codes).closure()
+        lemmas = self.pattern_stems(klass, klass.guess, "guess", letters)
+        weigh = union(
+            [acc(c, weight=half) for c in self.letter_codes]
+            + [acc(c) for c in self.underlying_codes if c not in set(self.letter_codes)]
+        ).closure()
+        stems = pynini.compose(lemma_to_stem(self, klass, lemmas), weigh.optimize())
         tags = klass.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == klass.name}) or self.g.pos_tags
         tail = union(acc(s.code(f"pos:{t}")) for t in tags) + acc(mark)
         after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""
-        return lemma_to_stem(self, klass, stem) + cross(tail, after) + pynini.accep("", weight=GUESS_OFFSET)
+        return stems + cross(tail, after) + pynini.accep("", weight=GUESS_OFFSET)
 
     def guesser(self) -> pynini.Fst | None:
         """Bounded surface → internal analysis of guessed words (``None`` when no class has a guess pattern).

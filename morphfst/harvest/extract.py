@@ -166,7 +166,12 @@ class Harvester:
         bound = Bound(depth=depth)
         for v in self.variants:
             if (v.klass, v.pos) not in self.cells:
-                templates = cell_templates(lang.meta, v.klass, v.pos, bound)
+                try:
+                    templates = cell_templates(lang.meta, v.klass, v.pos, bound)
+                except UserError:
+                    # too many cells within the depth (a Turkish verb's chains of voice, mood, tense and
+                    # person): the cells of its inflection table's layout stand for its paradigm
+                    templates = cell_templates(lang.meta, v.klass, v.pos, Bound(depth=depth, layout_only=True))
                 self.cells[(v.klass, v.pos)] = [";".join(t.tags) for t in templates if not t.blocked_by]
 
     # ---- the whole run -----------------------------------------------------------------------------
