@@ -482,9 +482,9 @@ class Compiler:
         half = GUESS_STEM_WEIGHT / 2
         letters = union(acc(c, weight=half) for c in self.letter_codes).closure()
         lemmas = self.pattern_stems(klass, klass.guess, "guess", letters)
+        plain = set(self.underlying_codes) - set(self.letter_codes)
         weigh = union(
-            [acc(c, weight=half) for c in self.letter_codes]
-            + [acc(c) for c in self.underlying_codes if c not in set(self.letter_codes)]
+            [acc(c, weight=half) for c in self.letter_codes] + [acc(c) for c in self.underlying_codes if c in plain]
         ).closure()
         stems = pynini.compose(lemma_to_stem(self, klass, lemmas), weigh.optimize())
         tags = klass.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == klass.name}) or self.g.pos_tags

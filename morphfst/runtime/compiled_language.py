@@ -180,24 +180,27 @@ class Language:
         would read it: as a stem of each class whose ``guess`` pattern allows its shape, through the
         same slots and rules (see :meth:`generate_guessed`).
         """
-        labels = [f for f in (features.split(";") if isinstance(features, str) else features) if f.strip()]
-        labels = [f.strip() for f in labels]
-        codes = [self._label_code(f) for f in labels]
+        labels, codes = self._labels(features)
         forms = self._generate_with(self.fsts["generator"], lemma, labels, codes)
         if not forms:
             forms = self._generate_compound(lemma, labels)
         if not forms and guess:
-            forms = self.generate_guessed(lemma, labels)
+            forms = self._generate_guessed(lemma, labels, codes)
         return forms
+
+    def _labels(self, features: str | Sequence[str]) -> tuple[list[str], list[str]]:
+        """The labels of a feature bundle (``"N;PL;LOC"`` or a list) and their codes."""
+        labels = [f.strip() for f in (features.split(";") if isinstance(features, str) else features) if f.strip()]
+        return labels, [self._label_code(f) for f in labels]
 
     def generate_guessed(self, lemma: str, features: str | Sequence[str]) -> list[Form]:
         """Forms of ``lemma`` as a guessed stem (marked ``guessed``, weighing what a guessed analysis
         weighs), whether or not the lexicon has it: the guesser's transducer run from the analysis side,
         so a form generated here is one that :meth:`guess` reads back as ``lemma`` with ``features``.
         Empty when no class has a ``guess`` pattern that allows the lemma's shape."""
-        labels = [f for f in (features.split(";") if isinstance(features, str) else features) if f.strip()]
-        labels = [f.strip() for f in labels]
-        codes = [self._label_code(f) for f in labels]
+        return self._generate_guessed(lemma, *self._labels(features))
+
+    def _generate_guessed(self, lemma: str, labels: list[str], codes: list[str]) -> list[Form]:
         generator = self._guess_generator()
         if generator is None:
             return []

@@ -684,19 +684,16 @@ class FastAnalyzer:
     def _build(self, surface: str, parts: Parts, weight: float, guessed: bool) -> Analysis:
         """The :class:`Analysis` of :meth:`_parts` (the stem morph shared by every analysis that has it)."""
         lemma, pos, features, stem_form, affixes, _ = parts
-        if guessed:
-            # a guessed stem is new to the lexicon and seldom met again: not kept (the kept stems are
-            # objects that every full collection of the cycle collector walks)
-            gloss = self.lang.glosses.get((lemma, pos), lemma)
-            stem = _new_morph(stem_form, gloss, (pos,), "stem", lemma, None, None, None)
-            return _new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, self.lang.ud, True)  # type: ignore[no-any-return]
+        # a guessed stem is new to the lexicon and seldom met again: not kept (the kept stems are
+        # objects that every full collection of the cycle collector walks)
         stem_key = (stem_form, lemma, pos)
-        stem = self._stems.get(stem_key)
+        stem = None if guessed else self._stems.get(stem_key)
         if stem is None:
-            if len(self._stems) > 100_000:
-                self._stems.clear()
-            gloss = self.lang.glosses.get((lemma, pos), lemma)
-            stem = self._stems[stem_key] = _new_morph(stem_form, gloss, (pos,), "stem", lemma, None, None, None)
+            stem = _new_morph(stem_form, self.lang.glosses.get((lemma, pos), lemma), (pos,), "stem", lemma, None, None, None)
+            if not guessed:
+                if len(self._stems) > 100_000:
+                    self._stems.clear()
+                self._stems[stem_key] = stem
         return _new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, self.lang.ud, guessed)  # type: ignore[no-any-return]
 
     def _decode_compound(self, surface: str, internal: str, bounded: str, weight: float) -> Analysis:
