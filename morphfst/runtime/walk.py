@@ -585,9 +585,9 @@ class FastAnalyzer:
         if guesser is None or len(surface) > MAX_GUESS_LENGTH or limit < 1:
             return []
         walked = guesser.walk(surface, MAX_PATHS, best=limit == 1)
-        if len(walked) > limit:
-            return self._best_guesses(surface, walked, limit)
-        return self.decode_all(surface, walked, True)[:limit]
+        if not walked:
+            return []
+        return self._best_guesses(surface, walked, limit)
 
     def _best_guesses(self, surface: str, walked: list[tuple[str, str, float]], limit: int) -> list[Analysis]:
         """``decode_all(surface, walked, True)[:limit]``, building only the analyses kept.
@@ -596,22 +596,56 @@ class FastAnalyzer:
         ``limit`` distinct keys are found, and on through the paths that tie with the last of them
         (weights rounded as :meth:`decode_all` rounds them): no later path can be among the best, and
         every key met has its lowest weight first. Then the keys are ranked as :meth:`decode_all`
-        ranks them and only the first ``limit`` are built."""
+        ranks them and only the first ``limit`` are built, the analyses of one stem sharing its morph.
+
+        A guessed path's analysis side is the stem's letters, a part of speech and the guess mark
+        (then affix ids and features), so the lemma ends one code before the mark: found with one
+        ``str.find`` instead of the part-of-speech pattern."""
         low: dict[Key, tuple[float, Parts]] = {}
         bound: float | None = None
-        parts_of = self._parts
+        mark, plus = self.mark, self.plus
+        shared_get = self._shared.get
         for bounded, internal, weight in walked:
             if bound is not None and round(weight, 5) > bound:
                 break
-            parts = parts_of(internal, bounded, True)
-            if parts is None:  # not a plain guess: decode everything
+            i = internal.find(mark) - 1
+            if i < 0:  # not a plain guess: decode everything
                 return self.decode_all(surface, walked, True)[:limit]
-            if parts[5] not in low:
-                low[parts[5]] = (weight, parts)
+            lemma = internal[:i]
+            cut = bounded.find(plus)
+            if cut < 0:
+                stem_form, rest = bounded, ""
+            else:
+                stem_form, rest = bounded[:cut], bounded[cut:]
+            key = (internal[i:], rest)
+            shared = shared_get(key)
+            if shared is None:
+                shared = self._parse_shared(key, True)
+            affix_seg = shared[3]
+            segmentation = f"{stem_form}-{affix_seg}" if stem_form and affix_seg else stem_form or affix_seg
+            text_key = (f"{lemma} {shared[4]}", segmentation)
+            if text_key not in low:
+                low[text_key] = (weight, (lemma, shared[0], shared[1], stem_form, shared[2], text_key))
                 if bound is None and len(low) >= limit:
                     bound = round(weight, 5)
-        ranked = sorted(low.items(), key=lambda item: (round(item[1][0], 5), item[0]))[:limit]
-        return [self._build(surface, parts, weight, True) for _, (weight, parts) in ranked]
+        if len(low) > 1:
+            ranked = sorted(low.items(), key=lambda item: (round(item[1][0], 5), item[0]))[:limit]
+        else:
+            ranked = list(low.items())
+        stems: dict[tuple[str, str, str], Morph] = {}
+        glosses = self.lang.glosses
+        ud = self.lang.ud
+        out = []
+        for _, (weight, (lemma, pos, features, stem_form, affixes, _)) in ranked:
+            stem_key = (stem_form, lemma, pos)
+            stem = stems.get(stem_key)
+            if stem is None:
+                # a guessed stem is new to the lexicon and seldom met again: not kept beyond this word
+                # (the kept stems are objects that every full collection of the cycle collector walks)
+                gloss = glosses.get((lemma, pos), lemma)
+                stem = stems[stem_key] = _new_morph(stem_form, gloss, (pos,), "stem", lemma, None, None, None)
+            out.append(_new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, ud, True))
+        return out
 
     def decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool = False) -> Analysis:
         """One :class:`Analysis` from a walked or composed path, through precomputed tables."""
