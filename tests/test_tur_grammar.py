@@ -446,6 +446,23 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("sekmek", "V;HAB;3;SG", "seker"),
         ("ulumak", "V;FUT;3;SG", "uluyacak"),
     ],
+    # the generalizing -DIr with the plural after it, -(y)ken after the third person plural, the
+    # associative plural of kin nouns after a possessive, and abbreviations that keep their
+    # apostrophe before -lI, -CI and -lIk (G&K ch. 8 and 21; spelling: common practice; from memory)
+    "copula, associative plural, abbreviations": [
+        ("gelmek", "V;PROG;ASSR;3;PL", "geliyordurlar"),
+        ("olmak", "V;OBLIG;3;SG;ASSR", "olmalıdır"),
+        ("gelmek", "V;NFH;3;PL;ASSR", "gelmişlerdir"),
+        ("yapmak", "V;HAB;3;PL;V.CVB;WHILE", "yaparlarken"),
+        ("gelmek", "V;PROG;3;PL;V.CVB;WHILE", "geliyorlarken"),
+        ("anne", "N;SG;PSS1S;ASSOC;NOM", "annemler"),
+        ("teyze", "N;SG;PSS1S;ASSOC;DAT", "teyzemlere"),
+        ("dede", "N;SG;PSS1S;ASSOC;GEN", "dedemlerin"),
+        ("amca", "N;SG;PSS2P;ASSOC;LOC", "amcanızlarda"),
+        ("CHP", "PROPN;PROPR;ADJ;SG;NOM", "CHP'li"),
+        ("ABD", "PROPN;PROPR;ADJ;PL;NOM", "ABD'liler"),
+        ("TL", "PROPN;ABSTR;N;SG;NOM", "TL'lik"),
+    ],
 }
 
 CASES_FLAT = [(name, *row) for name, rows in PARADIGMS.items() for row in rows]
@@ -478,7 +495,7 @@ REJECTED = [
     "ağızı",  # vowel loss not applied
     "burunu",
     "hakı",  # the geminate not written
-    "evimlerde",  # possessive before number: wrong order
+    "evimlerde",  # possessive before number: wrong order (the associative plural is for kin nouns: annemler)
     "evdelerim",  # person marked twice after a case
     "evdeim",  # the copula's buffer y left out
     "gelar",  # wrong aorist vowel for a listed -Ir verb
@@ -496,6 +513,12 @@ REJECTED = [
     "şuyla",  # şununla
     "yeraldı",  # a compound ending in a one-syllable noun keeps its stop (yeraltı: alt-ı)
     "gözaldında",
+    "gelmektedirlerler",  # the plural twice
+    "gelecekmişlerdi",  # a second copula after the copula's evidential and the plural
+    "gelmişmişlermiş",
+    "güzelmişlermiş",
+    "geleme",  # no imperative after the negative abilitative (gelemez, gelemedi)
+    "yapamayın",
 ]
 
 
