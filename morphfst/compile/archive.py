@@ -209,7 +209,7 @@ class Glosses(Mapping[tuple[str, str], str]):
         self._found = read_glosses(self._text[1:])
         self._parsed = True
         # from now on a lookup is the dict's own: decoding asks for the gloss of every analysis
-        self.get = self._found.get  # type: ignore[method-assign]
+        self.get = self._found.get  # type: ignore[method-assign,assignment]
 
     def __iter__(self) -> Iterator[tuple[str, str]]:
         if not self._parsed:
