@@ -134,6 +134,7 @@ def error_of(tmp_path: Path, block: str) -> UserError:
         ("compound {\n  first N\n  forms SG\n  last N\n  min 0\n}\n", "min 0 is not a whole number of at least 1", 5, 7),
         ("compound {\n  first N\n  forms SG\n  last N\n  weight -1\n}\n", "weight -1 is negative", 5, 10),
         ("compound {\n  first N\n  forms SG\n  last N\n  min 2\n  min 3\n}\n", "'min' given twice", 6, 3),
+        ("compound {\n  first N\n  forms SG\n  last N\n  agree\n  agree\n}\n", "'agree' given twice", 6, 3),
         ("compound {\n  first N\n  last N\n}\n", "no 'forms' line", 1, 1),
     ],
 )
@@ -262,3 +263,19 @@ def test_walk_agrees_with_composition(lang: morphfst.Language) -> None:
         assert [(a.text, a.segmentation, a.gloss) for a in walked] == [(a.text, a.segmentation, a.gloss) for a in composed]
         assert all(abs(a.weight - b.weight) < 1e-3 for a, b in zip(walked, composed))
         assert lang.accepts(word) == bool(walked)
+
+
+def test_agree_puts_every_part_in_the_same_form(tmp_path: Path) -> None:
+    """With ``agree`` the last part is in the very bundle its first parts are in (and in no other
+    features): the parts share the case of the whole, as Finnish compound numerals do."""
+    block = BLOCK.replace("  weight 0.5\n", "  weight 0.5\n  agree\n")
+    lang = toy(tmp_path, block)
+    assert lang.meta["compounds"][0]["agree"] is True
+    # the lemma is the parts' own lemmas (a compound numeral's lemma is its nominative)
+    assert [(a.text, a.segmentation) for a in lang.analyze("peltontien")] == [("peltotie N;SG;GEN", "pelton-tie-n")]
+    assert lang.analyze("peltotien") == []  # a nominative part before a genitive last part
+    assert lang.analyze("peltontiessa") == []  # the locative is not a bundle of forms
+    assert [a.segmentation for a in lang.analyze("peltotietalo")] == ["pelto-tie-talo"]
+    # without agree, the last part takes any form
+    plain = toy(tmp_path / "plain")
+    assert [a.text for a in plain.analyze("peltotien")] == ["peltotie N;SG;GEN"]

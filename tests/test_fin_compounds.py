@@ -106,6 +106,21 @@ def test_walk_agrees_with_composition(fin: morphfst.Language) -> None:
         assert all(abs(a.weight - b.weight) < 1e-3 for a, b in zip(walked, composed)), word
 
 
+def test_compound_numerals_agree_in_case(fin: morphfst.Language) -> None:
+    # a compound numeral is one word whose parts all take the case of the whole, and its lemma is the
+    # nominative (common practice; kaksikymmentä, sata and the units are lexicon numerals)
+    assert readings(fin, "kaksikymmentäkolme")[0] == ("kaksikymmentäkolme NUM;SG;NOM", "kaksikymmentä-kolme")
+    assert readings(fin, "kahdessakymmenessäkolmessa")[0] == ("kaksikymmentäkolme NUM;SG;IN+ESS", "kahdessakymmenessä-kolme-ssa")
+    assert readings(fin, "sadassakahdessakymmenessä")[0][0] == "satakaksikymmentä NUM;SG;IN+ESS"
+    assert readings(fin, "kolmesataaviisikymmentäkaksi")[0][0] == "kolmesataaviisikymmentäkaksi NUM;SG;NOM"
+    # parts in different cases are no numeral (common practice)
+    assert fin.analyze("kahdenkymmentäkolme") == []
+    assert fin.analyze("kahdessakymmenessäkolme") == []
+    for word in ["kaksikymmentäkolme", "kahdessakymmenessäkolmessa"]:
+        walked, composed = fin.analyze(word), fin.analyze_composed(word)
+        assert [(a.text, a.segmentation) for a in walked] == [(a.text, a.segmentation) for a in composed], word
+
+
 def test_info_lists_the_compound_block(fin: morphfst.Language, capsys: pytest.CaptureFixture[str]) -> None:
     from morphfst.cli import main
 

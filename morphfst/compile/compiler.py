@@ -387,7 +387,8 @@ class Compiler:
         speech and the seam symbol (affix ids and features deleted), its surface loses its morph
         boundaries and gets the seam symbol appended, and parts of fewer than ``min`` letters are
         dropped. A compound is one to ``parts - 1`` parts followed by a path of ``bounded`` of a
-        ``last`` part of speech (or class). Every seam weighs the block's weight, plus the weight of the
+        ``last`` part of speech (or class); with ``agree``, every part, the last one too, is in the same
+        bundle of ``forms`` (one compound machine per bundle). Every seam weighs the block's weight, plus the weight of the
         heaviest entry of ``entries``, plus :data:`SEAM_BASE_WEIGHT`, so a lexicon word always ranks above
         a compound reading of itself with the same endings (when no lexicon weight is negative, as with
         counts; see README.md).
@@ -407,16 +408,23 @@ class Compiler:
         found = []
         for c in self.g.compounds:
             head = self._compound_heads(c.first, entries, lemma_codes)
-            tails = union(_bundle_tail([s.code(f"feature:{f}") for f in b], affix_codes) for b in c.forms)
-            to_internal = head + pynini.cross(acc(seam), tails.optimize())  # new analysis → analysis of bounded
+            last_head = self._compound_heads(c.last, entries, lemma_codes)
             surface = (drop_plus.closure() + letter).closure(c.min_letters, c.min_letters) + keep.closure()
-            surface = surface + cross("", seam) + pynini.accep("", weight=base + c.weight)
-            part = pynini.compose(pynini.compose(to_internal.optimize(), bounded), surface.optimize()).optimize()
-            if part.start() == NO_STATE_ID or part.num_states() == 0:
-                continue
-            last_filter = self._compound_heads(c.last, entries, lemma_codes) + chars(tail_codes).closure()
-            last = pynini.compose(last_filter.optimize(), bounded).connect()
-            found.append(part.closure(1, c.parts - 1) + last)
+            surface = (surface + cross("", seam) + pynini.accep("", weight=base + c.weight)).optimize()
+            bundles = [[_bundle_tail([s.code(f"feature:{f}") for f in b], affix_codes) for b in c.forms]]
+            if c.agree:  # one machine per bundle, shared by every part
+                bundles = [[bundle] for bundle in bundles[0]]
+            for group in bundles:
+                tails = union(group).optimize()
+                to_internal = head + pynini.cross(acc(seam), tails)  # new analysis → analysis of bounded
+                part = pynini.compose(pynini.compose(to_internal.optimize(), bounded), surface).optimize()
+                if part.start() == NO_STATE_ID or part.num_states() == 0:
+                    continue
+                last_tail = tails if c.agree else chars(tail_codes).closure()
+                last = pynini.compose((last_head + last_tail).optimize(), bounded).connect()
+                if last.start() == NO_STATE_ID or last.num_states() == 0:
+                    continue
+                found.append(part.closure(1, c.parts - 1) + last)
         if not found:
             return None
         return union(found)  # optimized together with the lexicon words in derive

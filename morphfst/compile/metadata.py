@@ -78,6 +78,7 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
                 "parts": c.parts,
                 "min": c.min_letters,
                 "weight": c.weight,
+                "agree": c.agree,
                 "file": c.pos.file,
                 "line": c.pos.line,
             }

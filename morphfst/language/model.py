@@ -186,7 +186,9 @@ class Compound:
     ``first``, in one of the feature bundles of ``forms``, joined at a seam to further parts; the last
     part is a word whose part of speech or class is in ``last``, inflected. At most ``parts`` parts,
     each non-last part of at least ``min_letters`` letters; each seam adds ``weight`` (and the weight
-    of the heaviest lexicon entry, see the compiler)."""
+    of the heaviest lexicon entry, see the compiler). With ``agree``, every part is in the same bundle
+    of ``forms``, the last one too (and in no other features): Finnish compound numerals, whose parts
+    share the case of the whole (kahdessakymmenessäkolmessa)."""
 
     first: list[str]
     forms: list[list[str]]
@@ -196,6 +198,7 @@ class Compound:
     weight: float
     pos: Position
     lines: dict[str, Position] = field(default_factory=dict)  # statement keyword -> where it stands
+    agree: bool = False
 
 
 @dataclass

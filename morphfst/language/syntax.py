@@ -414,6 +414,8 @@ class _Builder:
                 values[key] = [str(t) for t in names]
                 for t in names:
                     lines[f"{key} {t}"] = self.pos_of(t)
+            elif key == "agree":
+                values[key] = True
             elif key == "forms":
                 bundles = []
                 for bundle in line.children:
@@ -430,7 +432,7 @@ class _Builder:
                 raise UserError(
                     f"compound: no '{key}' line",
                     block,
-                    hint="a compound block needs 'first', 'forms' and 'last' lines (parts, min and weight are optional)",
+                    hint="a compound block needs 'first', 'forms' and 'last' lines (parts, min, weight and agree are optional)",
                     source_line=self._raw_line(block),
                 )
         self.grammar.compounds.append(
@@ -443,6 +445,7 @@ class _Builder:
                 values.get("weight", 0.0),
                 block,
                 lines,
+                values.get("agree", False),
             )
         )
 

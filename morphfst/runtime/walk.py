@@ -42,6 +42,9 @@ class Language(Protocol):
     ud: dict[str, str]
 
     @property
+    def meta(self) -> Mapping[str, Any]: ...
+
+    @property
     def glosses(self) -> Mapping[tuple[str, str], str]: ...
 
     def arcs(self, name: str) -> Arcs: ...
@@ -542,6 +545,9 @@ class FastAnalyzer:
         # the cycle collector to walk (a word's own objects are what a new word costs it)
         self._affix_pool: dict[tuple[str, int, tuple[str, ...]], Morph] = {}
         self._stems: dict[tuple[str, str, str], Morph] = {}
+        # the first parts of 'agree' compounds stand in the compound's lemma by their own lemma (a
+        # compound numeral's lemma is its nominative: kahdessakymmenessäkolmessa -> kaksikymmentäkolme)
+        self.lemma_parts = {name for c in lang.meta.get("compounds") or () if c.get("agree") for name in c.get("first", ())}
 
     @property
     def guesser(self) -> ArcWalker | None:
@@ -739,15 +745,17 @@ class FastAnalyzer:
         forms = bounded.split(seam)
         last = self.decode(surface, parts[-1], forms[-1], weight)
         stems = []
+        heads = []
         for part, form in zip(parts[:-1], forms):
             lemma, pos = part[:-1], self.labels.get(part[-1:], "?")
+            heads.append(lemma if pos in self.lemma_parts else form)
             stem_key = (form, lemma, pos)
             stem = self._stems.get(stem_key)
             if stem is None:
                 gloss = self.lang.glosses.get((lemma, pos), lemma)
                 stem = self._stems[stem_key] = _new_morph(form, gloss, (pos,), "stem", lemma, None, None, None)
             stems.append(stem)
-        lemma = "".join(forms[:-1]) + last.lemma
+        lemma = "".join(heads) + last.lemma
         return _new_analysis(surface, lemma, last.pos, last.features, (*stems, *last.morphs), weight, self.lang.ud, False)
 
     def _parse_tail(self, tail: str) -> Tail:
