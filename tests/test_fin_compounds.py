@@ -121,6 +121,13 @@ def test_compound_numerals_agree_in_case(fin: morphfst.Language) -> None:
         assert [(a.text, a.segmentation) for a in walked] == [(a.text, a.segmentation) for a in composed], word
 
 
+def test_adjective_first_parts(fin: morphfst.Language) -> None:
+    # an adjective in the nominative before a noun (KARLSSON; autio 'deserted' and talo are listed,
+    # autiotalo is not), at a heavier seam than a noun's
+    assert readings(fin, "autiotalossa")[0] == ("autiotalo N;SG;IN+ESS", "autio-talo-ssa")
+    assert fin.analyze("autiotalossa")[0].weight > fin.analyze("kirjastoautossa")[0].weight
+
+
 def test_info_lists_the_compound_block(fin: morphfst.Language, capsys: pytest.CaptureFixture[str]) -> None:
     from morphfst.cli import main
 
