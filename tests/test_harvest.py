@@ -128,13 +128,15 @@ def test_a_language_without_guess_patterns_is_a_clear_error(tmp_path: Path, caps
 def test_recovery_of_removed_turkish_nouns(tmp_path: Path) -> None:
     """Every second noun of the Turkish lexicon's first 300 eligible nouns is removed (150 entries); a
     word list of their forms (and of kept nouns) is harvested. Measured: 56.7 % recall, 94.4 %
-    precision (lemma, class, part of speech and flags must all be right); the floors leave room for
-    the lexicon being rewritten."""
+    precision (lemma, class, part of speech and flags must all be right) when the test was written;
+    50.0 % and 93.8 % on the larger lexicon of later rounds, 49.3 % and 92.5 % since the flag kin
+    (the associative plural, annemler), which no form in the list shows, so abla comes back without
+    it. The floors leave room for the lexicon being rewritten."""
     grammar = ROOT / "grammars" / "tur.mfg"
     if not grammar.exists():
         pytest.skip("Turkish grammar not present")
     keep = ("nouns.tsv", "adjectives.tsv", "names.tsv", "core.tsv", "closed.tsv", "function.tsv")
     report = recovery_experiment(grammar, tmp_path / "copy", classes=("noun",), every=2, limit=150, keep_files=keep)
     assert len(report.removed) == 150
-    assert report.recall >= 0.5, report.summary()
+    assert report.recall >= 0.45, report.summary()
     assert report.precision >= 0.85, report.summary()
