@@ -1106,6 +1106,12 @@ def test_voida_has_no_forms_in_ma(fin: morphfst.Language) -> None:
     assert fin.analyze("voisi")[0].lemma == "voida"
 
 
+def test_oma_is_not_compared(fin: morphfst.Language) -> None:
+    # oma 'own' has no comparison (common practice): omin is its plural instructive (omin käsin)
+    assert fin.analyze("omin")[0].text == "oma ADJ;PL;INS"
+    assert fin.analyze("omimman") == []
+
+
 def test_names_used_in_the_plural(fin: morphfst.Language) -> None:
     # Finnish news, common practice (from memory): the clubs Jokerit, Kärpät, Ässät and the town Virrat
     # inflect in the plural, with the gradation of their nouns (Kärpissä, Virroilla)
