@@ -411,10 +411,9 @@ class Compiler:
             last_head = self._compound_heads(c.last, entries, lemma_codes)
             surface = (drop_plus.closure() + letter).closure(c.min_letters, c.min_letters) + keep.closure()
             surface = (surface + cross("", seam) + pynini.accep("", weight=base + c.weight)).optimize()
-            bundles = [[_bundle_tail([s.code(f"feature:{f}") for f in b], affix_codes) for b in c.forms]]
-            if c.agree:  # one machine per bundle, shared by every part
-                bundles = [[bundle] for bundle in bundles[0]]
-            for group in bundles:
+            bundles = [_bundle_tail([s.code(f"feature:{f}") for f in b], affix_codes) for b in c.forms]
+            # with agree, one machine per bundle, shared by every part; else one for them all
+            for group in [[b] for b in bundles] if c.agree else [bundles]:
                 tails = union(group).optimize()
                 to_internal = head + pynini.cross(acc(seam), tails)  # new analysis → analysis of bounded
                 part = pynini.compose(pynini.compose(to_internal.optimize(), bounded), surface).optimize()

@@ -609,49 +609,22 @@ class FastAnalyzer:
         ``str.find`` instead of the part-of-speech pattern."""
         low: dict[Key, tuple[float, Parts]] = {}
         bound: float | None = None
-        mark, plus = self.mark, self.plus
-        shared_get = self._shared.get
+        mark = self.mark
+        parts_at = self._parts_at
         for bounded, internal, weight in walked:
             if bound is not None and round(weight, 5) > bound:
                 break
             i = internal.find(mark) - 1
             if i < 0:  # not a plain guess: decode everything
                 return self.decode_all(surface, walked, True)[:limit]
-            lemma = internal[:i]
-            cut = bounded.find(plus)
-            if cut < 0:
-                stem_form, rest = bounded, ""
-            else:
-                stem_form, rest = bounded[:cut], bounded[cut:]
-            key = (internal[i:], rest)
-            shared = shared_get(key)
-            if shared is None:
-                shared = self._parse_shared(key, True)
-            affix_seg = shared[3]
-            segmentation = f"{stem_form}-{affix_seg}" if stem_form and affix_seg else stem_form or affix_seg
-            text_key = (f"{lemma} {shared[4]}", segmentation)
-            if text_key not in low:
-                low[text_key] = (weight, (lemma, shared[0], shared[1], stem_form, shared[2], text_key))
+            parts = parts_at(internal, i, bounded, True)
+            if parts[5] not in low:
+                low[parts[5]] = (weight, parts)
                 if bound is None and len(low) >= limit:
                     bound = round(weight, 5)
-        if len(low) > 1:
-            ranked = sorted(low.items(), key=lambda item: (round(item[1][0], 5), item[0]))[:limit]
-        else:
-            ranked = list(low.items())
-        stems: dict[tuple[str, str, str], Morph] = {}
-        glosses = self.lang.glosses
-        ud = self.lang.ud
-        out = []
-        for _, (weight, (lemma, pos, features, stem_form, affixes, _)) in ranked:
-            stem_key = (stem_form, lemma, pos)
-            stem = stems.get(stem_key)
-            if stem is None:
-                # a guessed stem is new to the lexicon and seldom met again: not kept beyond this word
-                # (the kept stems are objects that every full collection of the cycle collector walks)
-                gloss = glosses.get((lemma, pos), lemma)
-                stem = stems[stem_key] = _new_morph(stem_form, gloss, (pos,), "stem", lemma, None, None, None)
-            out.append(_new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, ud, True))
-        return out
+        ranked = sorted(low.items(), key=lambda item: (round(item[1][0], 5), item[0]))[:limit]
+        stems: dict[tuple[str, str, str], Morph] = {}  # this word's guessed stems, kept for it alone
+        return [self._build(surface, parts, weight, True, stems) for _, (weight, parts) in ranked]
 
     def decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool = False) -> Analysis:
         """One :class:`Analysis` from a walked or composed path, through precomputed tables."""
@@ -689,7 +662,10 @@ class FastAnalyzer:
         if not guessed and self.seam and self.seam in internal:
             return None
         found = self.pos_re.search(internal)
-        i = found.start() if found else len(internal)
+        return self._parts_at(internal, found.start() if found else len(internal), bounded, guessed)
+
+    def _parts_at(self, internal: str, i: int, bounded: str, guessed: bool) -> Parts:
+        """:meth:`_parts` of a path whose lemma ends at ``i`` (where its part of speech begins)."""
         lemma = internal[:i]
         cut = bounded.find(self.plus)
         if cut < 0:
@@ -721,19 +697,24 @@ class FastAnalyzer:
         shared = self._shared[key] = (pos, features, affixes, "-".join(m.form for m in affixes if m.form), tags)
         return shared
 
-    def _build(self, surface: str, parts: Parts, weight: float, guessed: bool) -> Analysis:
-        """The :class:`Analysis` of :meth:`_parts` (the stem morph shared by every analysis that has it)."""
+    def _build(
+        self, surface: str, parts: Parts, weight: float, guessed: bool, stems: dict[tuple[str, str, str], Morph] | None = None
+    ) -> Analysis:
+        """The :class:`Analysis` of :meth:`_parts` (the stem morph shared by every analysis that has it).
+
+        A guessed stem is new to the lexicon and seldom met again: it is kept only in ``stems``, the
+        caller's dict for one word (the stems kept for good are objects that every full collection of
+        the cycle collector walks)."""
         lemma, pos, features, stem_form, affixes, _ = parts
-        # a guessed stem is new to the lexicon and seldom met again: not kept (the kept stems are
-        # objects that every full collection of the cycle collector walks)
+        kept = stems if stems is not None else {} if guessed else self._stems
         stem_key = (stem_form, lemma, pos)
-        stem = None if guessed else self._stems.get(stem_key)
+        stem = kept.get(stem_key)
         if stem is None:
-            stem = _new_morph(stem_form, self.lang.glosses.get((lemma, pos), lemma), (pos,), "stem", lemma, None, None, None)
-            if not guessed:
-                if len(self._stems) > 100_000:
-                    self._stems.clear()
-                self._stems[stem_key] = stem
+            if len(kept) > 100_000:
+                kept.clear()
+            stem = kept[stem_key] = _new_morph(
+                stem_form, self.lang.glosses.get((lemma, pos), lemma), (pos,), "stem", lemma, None, None, None
+            )
         return _new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, self.lang.ud, guessed)  # type: ignore[no-any-return]
 
     def _decode_compound(self, surface: str, internal: str, bounded: str, weight: float) -> Analysis:
