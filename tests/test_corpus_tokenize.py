@@ -7,13 +7,14 @@ import unicodedata
 from hypothesis import given, settings
 from hypothesis import strategies as st
 
+from morphfst.language.normalize import INVISIBLE, Normalization, make_normalizer
 from morphfst.runtime.tokenize import EDGE_PUNCTUATION, ZERO_WIDTH_JOINERS, Tokenizer, split_line
 
 TOK = Tokenizer(("'", "’"))
 
 # Characters that exercise every branch: letters (with Turkish and Finnish ones), digits, joiners,
 # punctuation, white space of several kinds, control characters and a combining mark.
-ALPHABET = "aeıioöuükltrsşçğäAİIEK019'’-:.,!?… \t\u00a0\x00\x1f\u0307_()\"«»"
+ALPHABET = "aeıioöuükltrsşçğäAİIEK019'’-:.,!?… \t\u00a0\x00\x1f\u0307\u00ad_()\"«»"
 
 
 @settings(max_examples=300, deadline=None)
@@ -106,7 +107,11 @@ def test_the_combining_mark_class_has_every_mark_of_the_unicode_database() -> No
 # The fast path of tokens() and tokens_and_newlines() cuts at white space and strips edge punctuation
 # before it falls back to the regular expression: it must give exactly what the expression gives.
 FAST_PATH_ALPHABET = (
-    ALPHABET + EDGE_PUNCTUATION + ZERO_WIDTH_JOINERS + "\u02bc\u0301\u093f\u0915\n\r\x0b\x0c\x1c\x85\u2028\u200b\u3000²½٣"
+    ALPHABET
+    + EDGE_PUNCTUATION
+    + ZERO_WIDTH_JOINERS
+    + INVISIBLE
+    + "\u02bc\u0301\u093f\u0915\n\r\x0b\x0c\x1c\x85\u2028\u200b\u3000²½٣"
 )
 
 
@@ -123,7 +128,18 @@ def test_edge_punctuation_joins_nothing() -> None:
     which stripping it from a piece's edges leaves the tokens unchanged)."""
     for ch in EDGE_PUNCTUATION:
         assert not ch.isalnum() and not ch.isspace(), repr(ch)
-        assert unicodedata.category(ch)[0] != "M" and ch not in ZERO_WIDTH_JOINERS, repr(ch)
+        assert unicodedata.category(ch)[0] != "M" and ch not in ZERO_WIDTH_JOINERS + INVISIBLE, repr(ch)
+
+
+def test_invisible_format_characters_stay_inside_a_word_and_are_dropped_by_normalization() -> None:
+    # Soft hyphens (hyphenation hints left in web text), word joiners and zero-width no-break spaces
+    # do not break a word (Unicode UAX #29, rule WB4); a zero-width space does (common practice)
+    line = "lasten\u00adtarhassa kou\u2060lu\ufeffun ja\u200bsitten tar\u00ad"
+    assert TOK.tokens(line) == ["lasten\u00adtarhassa", "kou\u2060lu\ufeffun", "ja", "sitten", "tar\u00ad"]
+    normalize = make_normalizer(Normalization(maps=[("I", "ı")], apostrophes=["'", "’"]))
+    assert [normalize(t) for t in TOK.tokens(line)] == ["lastentarhassa", "kouluun", "ja", "sitten", "tar"]
+    assert normalize("Ev\u00adler\u00adde") == normalize("Evlerde") == "evlerde"
+    assert normalize("IRMAK’ta") == "ırmak'ta"
 
 
 @settings(max_examples=300, deadline=None)

@@ -1,4 +1,10 @@
-"""Input normalization per language: NFC, language-specific case folding, apostrophe variants.
+"""Input normalization per language: NFC, invisible format characters dropped, language-specific
+case folding, apostrophe variants.
+
+Soft hyphens (U+00AD, a hyphenation hint web text leaves inside words), word joiners (U+2060) and
+zero-width no-break spaces (U+FEFF) change nothing in how a word is spelled: they are dropped before
+analysis (the Unicode word-boundary rules ignore such format characters inside a word too, UAX #29
+rule WB4).
 
 Turkish folds dotted and dotless i differently from Python's default (``I`` → ``ı``, ``İ`` → ``i``);
 a grammar says so with ``map`` lines, applied before lower-casing (common practice).
@@ -10,10 +16,14 @@ import unicodedata
 from collections.abc import Callable
 from dataclasses import dataclass, field
 
+INVISIBLE = "\u00ad\u2060\ufeff"  # soft hyphen, word joiner, zero-width no-break space
+_DROP_INVISIBLE = dict.fromkeys(map(ord, INVISIBLE))
+
 
 @dataclass
 class Normalization:
-    """Input normalization: NFC, language-specific case folding, apostrophe variants."""
+    """Input normalization: NFC, invisible format characters dropped, language-specific case folding,
+    apostrophe variants."""
 
     maps: list[tuple[str, str]] = field(default_factory=list)
     lowercase: bool = True
@@ -30,6 +40,8 @@ def make_normalizer(norm: Normalization) -> Callable[[str], str]:
 
     def normalize(word: str) -> str:
         text = unicodedata.normalize("NFC", word)
+        if not text.isalnum():  # a word of letters only (most words) holds none of them
+            text = text.translate(_DROP_INVISIBLE)
         for source, target in maps:
             if source in text:
                 text = text.replace(source, target)

@@ -2,8 +2,9 @@
 
 A **token** is a run of letters and digits (Unicode general categories L and N) together with the
 combining marks that follow them (category M, taken from Python's Unicode database for every script:
-Tamil வீடுகளில், Devanagari, Kannada, Thai ... stay one token) and zero-width (non-)joiners inside a
-word, joined into one token across:
+Tamil வீடுகளில், Devanagari, Kannada, Thai ... stay one token), zero-width (non-)joiners and the
+invisible format characters that normalization drops (soft hyphen, word joiner, zero-width no-break
+space: ``lasten\u00adtarhassa`` is one token) inside a word, joined into one token across:
 
 - an apostrophe of the language followed by more letters: ``Ankara'da``, ``2023'te``, ``Ankara’da``;
 - a hyphen followed by more letters: ``sarı-kırmızı``, ``e-posta``;
@@ -28,6 +29,8 @@ from collections.abc import Iterable, Sequence
 from dataclasses import dataclass
 from functools import lru_cache
 from typing import Any
+
+from ..language.normalize import INVISIBLE
 
 DEFAULT_APOSTROPHES = ("'", "\u2019", "\u02bc")  # ASCII apostrophe, right single quotation mark, modifier letter apostrophe
 HYPHENS = "-\u2010\u2011"  # hyphen-minus, hyphen, non-breaking hyphen
@@ -81,7 +84,7 @@ class Tokenizer:
         self.apostrophes = tuple(dict.fromkeys(a for a in apostrophes if a)) or DEFAULT_APOSTROPHES
         apos = "".join(re.escape(a) for a in self.apostrophes)
         joiner = (
-            rf"[{combining_marks()}{ZERO_WIDTH_JOINERS}]+"  # combining marks (and zero-width joiners) after a letter
+            rf"[{combining_marks()}{ZERO_WIDTH_JOINERS}{INVISIBLE}]+"  # combining marks (zero-width joiners, soft hyphens) after a letter
             rf"|[{apos}{re.escape(HYPHENS)}](?=[^\W_])"  # apostrophe or hyphen before more letters
             rf"|(?<=[{_UPPER}\d]):(?=[^\W_])"  # colon after an abbreviation or a number
             r"|(?<=\d)[.,](?=\d)"  # decimal point or digit group separator
