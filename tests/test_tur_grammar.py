@@ -1007,3 +1007,30 @@ def test_listed_nouns_beat_rare_readings_of_frequent_words(tur: morphfst.Languag
     # locative of the numeral (common practice)
     assert tur.analyze("deneyim")[0].text == "deneyim N;SG;NOM"
     assert tur.analyze("yüzde")[0].text == "yüzde N;SG;NOM"
+
+
+def test_the_converb_a_doubled(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake, Turkish: A Comprehensive Grammar, converbs (from memory): -(y)A, mostly
+    # doubled (koşa koşa, gide gide, bile bile, güle güle, ağlaya ağlaya, yiye yiye), on any voice
+    # (kullanıla kullanıla); positive only, and not on the abilitative
+    for word, lemma in [
+        ("koşa", "koşmak V"),
+        ("gide", "gitmek V"),
+        ("bile", "bilmek V"),
+        ("güle", "gülmek V"),
+        ("ağlaya", "ağlamak V"),
+        ("yiye", "yemek V"),
+        ("kullanıla", "kullanmak V;PASS"),
+    ]:
+        assert f"{lemma};V.CVB;REDUP" in [a.text for a in tur.analyze(word)], word
+    assert [f.form for f in tur.generate("koşmak", "V;V.CVB;REDUP")] == ["koşa"]
+    assert [f.form for f in tur.generate("demek", "V;V.CVB;REDUP")] == ["diye"]
+    assert tur.generate("gelmek", "V;NEG;V.CVB;REDUP") == []
+    assert tur.generate("gelmek", "V;POT;V.CVB;REDUP") == []
+    assert tur.generate("gelmek", "V;RAPID;V.CVB;REDUP") == []
+    assert not any("REDUP" in a.text for a in tur.analyze("gelebile"))
+    assert not any("REDUP" in a.text for a in tur.analyze("gelmeye"))
+    # a lone word spelt like it stays the optative's third person or a lexicon word first
+    assert tur.analyze("koşa")[0].text == "koşmak V;OPT;3;SG"
+    assert tur.analyze("bile")[0].text == "bile ADV"
+    assert tur.analyze("göre")[0].text == "göre ADP"
