@@ -1034,3 +1034,23 @@ def test_the_converb_a_doubled(tur: morphfst.Language) -> None:
     assert tur.analyze("koşa")[0].text == "koşmak V;OPT;3;SG"
     assert tur.analyze("bile")[0].text == "bile ADV"
     assert tur.analyze("göre")[0].text == "göre ADP"
+
+
+def test_the_perfect_participle_takes_the_quality_noun_lik(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake, Turkish: A Comprehensive Grammar, -lIk on participles (from memory):
+    # yaşanmışlık 'having been lived through', görmüşlüğüm 'my having seen', bulunmuşluğu, olmuşluk,
+    # with the noun's number, possessive and case after it
+    for word, reading in [
+        ("yaşanmışlık", "yaşamak V;PASS;V.PTCP;PRF;ADJ;ABSTR;N;SG;NOM"),
+        ("görmüşlüğüm", "görmek V;V.PTCP;PRF;ADJ;ABSTR;N;SG;PSS1S;NOM"),
+        ("bulunmuşluğu", "bulunmak V;V.PTCP;PRF;ADJ;ABSTR;N;SG;PSS3S;NOM"),
+        ("olmuşluk", "olmak V;V.PTCP;PRF;ADJ;ABSTR;N;SG;NOM"),
+        ("yaşanmışlıklar", "yaşamak V;PASS;V.PTCP;PRF;ADJ;ABSTR;N;PL;NOM"),
+        ("bilmemişliğinden", "bilmek V;NEG;V.PTCP;PRF;ADJ;ABSTR;N;SG;PSS3S;ABL"),
+    ]:
+        assert reading in [a.text for a in tur.analyze(word)], word
+    assert [f.form for f in tur.generate("görmek", "V;V.PTCP;PRF;ADJ;ABSTR;N;SG;PSS1S;NOM")] == ["görmüşlüğüm"]
+    # the suffix harmonizes and the k voices before a vowel (not *görmüşlükum, *olmuşlukı)
+    assert tur.analyze("görmüşlükum") == [] and tur.analyze("olmuşlukı") == []
+    # not on the finite evidential with its person ending (*gelmişimlik)
+    assert tur.analyze("gelmişimlik") == []
