@@ -1054,3 +1054,37 @@ def test_the_perfect_participle_takes_the_quality_noun_lik(tur: morphfst.Languag
     assert tur.analyze("görmüşlükum") == [] and tur.analyze("olmuşlukı") == []
     # not on the finite evidential with its person ending (*gelmişimlik)
     assert tur.analyze("gelmişimlik") == []
+
+
+@pytest.mark.parametrize(
+    "lemma, features, surface",
+    [
+        # The colloquial family suffix -gil 'X and family, X's household' after a personal name or a
+        # kin noun with a possessive; it does not harmonize, so the endings follow its i (Lewis 2000,
+        # Göksel & Kerslake 2005 on -gil; from memory)
+        ("Ayşe", "PROPN;FAM;NOM", "Ayşegil"),
+        ("Ayşe", "PROPN;FAM;DAT", "Ayşegile"),
+        ("Ayşe", "PROPN;FAM;LOC", "Ayşegilde"),
+        ("Ayşe", "PROPN;FAM;GEN", "Ayşegilin"),
+        ("Osman", "PROPN;FAM;DAT", "Osmangile"),
+        ("Ahmet", "PROPN;FAM;ABL", "Ahmetgilden"),
+        ("Ayşe", "PROPN;FAM;ASSOC;NOM", "Ayşegiller"),
+        ("teyze", "N;SG;PSS1S;FAM;NOM", "teyzemgil"),
+        ("teyze", "N;SG;PSS1S;FAM;LOC", "teyzemgilde"),
+        ("amca", "N;SG;PSS1S;FAM;ABL", "amcamgilden"),
+        ("dayı", "N;SG;PSS1P;FAM;DAT", "dayımızgile"),
+    ],
+)
+def test_the_family_suffix_gil(tur: morphfst.Language, lemma: str, features: str, surface: str) -> None:
+    assert [f.form for f in tur.generate(lemma, features)] == [surface]
+    assert f"{lemma} {features}" in [a.text for a in tur.analyze(surface)]
+
+
+def test_the_family_suffix_gil_only_after_names_and_kin_possessives(tur: morphfst.Language) -> None:
+    # common practice: no harmony of -gil (*Osmangıl, *Osmangıla), no -gil after a common noun
+    # (*evimgil), after a kin noun without a possessive or with the plural (*teyzegil,
+    # *teyzelerimgil), or after an abbreviation (*ABDgil)
+    for word in ["Osmangıl", "Osmangıla", "evimgil", "teyzegil", "teyzelerimgil", "ABDgil"]:
+        assert not any("FAM" in a.text for a in tur.analyze(word)), word
+    # it is rare: a word spelt like it keeps its own reading (değil)
+    assert tur.analyze("değil")[0].text == "değil AUX"
