@@ -1088,3 +1088,13 @@ def test_the_family_suffix_gil_only_after_names_and_kin_possessives(tur: morphfs
         assert not any("FAM" in a.text for a in tur.analyze(word)), word
     # it is rare: a word spelt like it keeps its own reading (değil)
     assert tur.analyze("değil")[0].text == "değil AUX"
+
+
+def test_the_wish_participle_asi_ranks_below_lexicon_words(tur: morphfst.Language) -> None:
+    # common practice: olası 'possible' is a dictionary adjective, yakası 'its collar' yaka's
+    # possessive; -(y)AsI 'the wish to' (gidesim geldi) stays, below them (Göksel & Kerslake 2005 —
+    # from memory)
+    assert tur.analyze("olası")[0].text == "olası ADJ;SG;NOM"
+    assert tur.analyze("yakası")[0].text == "yaka N;SG;PSS3S;NOM"
+    assert tur.analyze("yakasında")[0].text == "yaka N;SG;PSS3S;LOC"
+    assert tur.analyze("gidesim")[0].text == "gitmek V;V.PTCP;OPT;N;PSS1S;NOM"
