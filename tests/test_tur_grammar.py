@@ -1098,3 +1098,25 @@ def test_the_wish_participle_asi_ranks_below_lexicon_words(tur: morphfst.Languag
     assert tur.analyze("yakası")[0].text == "yaka N;SG;PSS3S;NOM"
     assert tur.analyze("yakasında")[0].text == "yaka N;SG;PSS3S;LOC"
     assert tur.analyze("gidesim")[0].text == "gitmek V;V.PTCP;OPT;N;PSS1S;NOM"
+
+
+def test_lexicalized_conditionals_before_the_copula_conditional(tur: morphfst.Language) -> None:
+    # common practice: neyse 'anyway', oysa 'whereas', yoksa 'otherwise', nedense 'for some reason',
+    # öyleyse 'in that case', nasılsa 'somehow' are dictionary words, read before ne, o, yok, neden,
+    # öyle, nasıl with the copula's conditional; kimsem is kimse 'anyone' + 'my'. The conditional
+    # copula stays first where no such word is spelt alike (varsa, değilse, bense, evdeyse)
+    for word, best in [
+        ("neyse", "neyse ADV"),
+        ("oysa", "oysa CONJ"),
+        ("nedense", "nedense ADV"),
+        ("öyleyse", "öyleyse CONJ"),
+        ("nasılsa", "nasılsa ADV"),
+        ("kimsem", "kimse PRO;SG;PSS1S;NOM"),
+        ("varsa", "var ADJ;COND;3;SG"),
+        ("değilse", "değil AUX;COND;3;SG"),
+        ("bense", "ben PRO;SG;NOM;COND;3;SG"),
+        ("evdeyse", "ev N;SG;LOC;COND;3;SG"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    assert tur.analyze("yoksa")[0].text in {"yoksa ADV", "yoksa CONJ"}
+    assert "yok ADJ;COND;3;SG" in [a.text for a in tur.analyze("yoksa")]
