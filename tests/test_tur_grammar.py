@@ -1120,3 +1120,27 @@ def test_lexicalized_conditionals_before_the_copula_conditional(tur: morphfst.La
         assert tur.analyze(word)[0].text == best, word
     assert tur.analyze("yoksa")[0].text in {"yoksa ADV", "yoksa CONJ"}
     assert "yok ADJ;COND;3;SG" in [a.text for a in tur.analyze("yoksa")]
+
+
+def test_spatial_nouns_in_their_postpositional_forms_first(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake, Turkish: A Comprehensive Grammar, spatial nouns (from memory): alt, üst,
+    # ön, arka, iç ... with the third person possessive and a locational case head postpositional
+    # phrases (ağacın altında 'under the tree', güneş altında), far more often than altın 'gold' is
+    # in those cases; altın and altını stay 'gold'
+    for word, best in [
+        ("altında", "alt N;SG;PSS3S;LOC"),
+        ("altına", "alt N;SG;PSS3S;DAT"),
+        ("altından", "alt N;SG;PSS3S;ABL"),
+        ("altındaki", "alt N;SG;PSS3S;LOC;RELZ;NOM"),
+        ("önüne", "ön N;SG;PSS3S;DAT"),
+        ("tarafından", "taraf N;SG;PSS3S;ABL"),
+        ("altın", "altın N;SG;NOM"),
+        ("altını", "altın N;SG;ACC"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    assert "altın N;SG;LOC" in [a.text for a in tur.analyze("altında")]
+    # one form per cell: the cheap path and the plain one give the same word
+    assert [f.form for f in tur.generate("alt", "N;SG;PSS3S;LOC")] == ["altında"]
+    # only flagged nouns: no such cheap possessive for a common noun (evinde costs as before)
+    ev = tur.analyze("evinde")[0]
+    assert ev.text == "ev N;SG;PSS3S;LOC" and ev.weight > tur.analyze("ev")[0].weight + 2.9
