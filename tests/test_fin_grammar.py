@@ -1201,3 +1201,13 @@ def test_a_stem_ending_in_front_vowels_keeps_front_endings_in_the_plural(fin: mo
 )
 def test_wrong_forms_of_one_lemma_are_rejected(fin: morphfst.Language, word: str, lemma: str) -> None:
     assert [a.text for a in fin.analyze(word) if a.lemma == lemma] == []
+
+
+def test_consonant_final_loans_of_type_6_keep_their_bare_nominative(fin: morphfst.Language) -> None:
+    # Loans ending in a consonant add i before an ending but not in the bare nominative: laser,
+    # laserin, laseria, lasereita (the standard word list's type 6 — from memory); compounds
+    # take the bare form as their first part (laservalo)
+    assert [f.form for f in fin.generate("laser", "N;SG;NOM")] == ["laser"]
+    assert [f.form for f in fin.generate("laser", "N;SG;GEN")] == ["laserin"]
+    assert fin.analyze("laseria")[0].text == "laser N;SG;PRT"
+    assert fin.analyze("laservalo") and not fin.analyze("laserivalo")
