@@ -121,6 +121,24 @@ def test_compound_numerals_agree_in_case(fin: morphfst.Language) -> None:
         assert [(a.text, a.segmentation) for a in walked] == [(a.text, a.segmentation) for a in composed], word
 
 
+def test_compound_ordinals(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, the ordinals (from memory): 11th-19th inflect the first
+    # part only (yhdestoista, yhdennessätoista), the tens both parts in the same case
+    # (kahdeskymmenes, kahdennenkymmenennen); 21st adds ensimmäinen or yhdes, in the case of the whole
+    assert readings(fin, "yhdennessätoista")[0] == ("yhdestoista NUM;SG;IN+ESS", "yhdenne-ssä-toista")
+    assert readings(fin, "kahdeksannentoista")[0][0] == "kahdeksastoista NUM;SG;GEN"
+    assert readings(fin, "kahdennenkymmenennen")[0][0] == "kahdeskymmenes NUM;SG;GEN"
+    assert readings(fin, "kolmannessakymmenennessä")[0][0] == "kolmaskymmenes NUM;SG;IN+ESS"
+    assert readings(fin, "kahdeskymmenesensimmäinen")[0][0] == "kahdeskymmenesensimmäinen NUM;SG;NOM"
+    assert readings(fin, "kahdennenkymmenennenensimmäisen")[0][0] == "kahdeskymmenesensimmäinen NUM;SG;GEN"
+    assert readings(fin, "kahdeskymmenesyhdes")[0][0] == "kahdeskymmenesyhdes NUM;SG;NOM"
+    assert readings(fin, "sadaskahdeskymmenes")[0][0] == "sadaskahdeskymmenes NUM;SG;NOM"
+    # the cardinal 11 keeps its reading; parts in different cases, or -toista inflected, are no numeral
+    assert readings(fin, "yhdessätoista")[0][0] == "yksitoista NUM;SG;IN+ESS"
+    for word in ["kahdeskymmenennen", "kahdennenkymmenes", "yhdennessätoistassa", "yhdestoistassa"]:
+        assert fin.analyze(word) == [], word
+
+
 def test_adjective_first_parts(fin: morphfst.Language) -> None:
     # an adjective in the nominative before a noun (KARLSSON; autio 'deserted' and talo are listed,
     # autiotalo is not), at a heavier seam than a noun's

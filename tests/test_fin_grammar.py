@@ -325,6 +325,15 @@ INVERTED = (
         "SG;NOM=kaksikymmentä SG;GEN=kahdenkymmenen SG;PRT=kahtakymmentä SG;IN+ESS=kahdessakymmenessä "
         "SG;IN+ALL=kahteenkymmeneen SG;TRANS=kahdeksikymmeneksi SG;ESS=kahtenakymmenenä",
     )
+    # Karlsson (3rd ed., 2018), compound ordinals: -toista unchanged, both parts of the tens inflected
+    # — from memory
+    + cells("yhdestoista", "NUM", "SG;NOM=yhdestoista SG;GEN=yhdennentoista SG;PRT=yhdettätoista SG;IN+ALL=yhdenteentoista")
+    + cells(
+        "kahdeskymmenes",
+        "NUM",
+        "SG;NOM=kahdeskymmenes SG;GEN=kahdennenkymmenennen SG;PRT=kahdettakymmenettä "
+        "SG;ESS=kahdentenakymmenentenä SG;IN+ALL=kahdenteenkymmenenteen",
+    )
     + cells("kolmekymmentä", "NUM", "SG;GEN=kolmenkymmenen SG;PRT=kolmeakymmentä")
     + cells("seitsemänkymmentä", "NUM", "SG;NOM=seitsemänkymmentä SG;AT+ESS=seitsemälläkymmenellä")
     + cells("parikymmentä", "NUM", "SG;GEN=parinkymmenen")
