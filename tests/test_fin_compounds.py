@@ -139,6 +139,23 @@ def test_compound_ordinals(fin: morphfst.Language) -> None:
         assert fin.analyze(word) == [], word
 
 
+def test_a_multiplier_before_tuhat(fin: morphfst.Language) -> None:
+    # a multiplier before tuhat is written as one word, both parts in the case of the whole and tuhat
+    # a partitive in the nominative (common practice): kymmenentuhatta, kahdessakymmenessätuhannessa
+    assert readings(fin, "kymmenentuhatta")[0][0] == "kymmenentuhatta NUM;SG;NOM"
+    assert readings(fin, "kymmenentuhannen")[0][0] == "kymmenentuhatta NUM;SG;GEN"
+    assert readings(fin, "neljäkymmentätuhatta")[0][0] == "neljäkymmentätuhatta NUM;SG;NOM"
+    assert readings(fin, "kahdessakymmenessätuhannessa")[0][0] == "kaksikymmentätuhatta NUM;SG;IN+ESS"
+    assert readings(fin, "sadassatuhannessa")[0][0] == "satatuhatta NUM;SG;IN+ESS"
+    assert readings(fin, "viidensadantuhannen")[0][0] == "viisisataatuhatta NUM;SG;GEN"
+    assert readings(fin, "viidessätoistatuhannessa")[0][0] == "viisitoistatuhatta NUM;SG;IN+ESS"
+    # the units before them through the compound numeral block (kaksikymmentäviisituhatta)
+    assert readings(fin, "kaksikymmentäviisituhatta")[0][0] == "kaksikymmentäviisituhatta NUM;SG;NOM"
+    # parts in different cases are no numeral (common practice)
+    for word in ["kymmenessätuhatta", "neljäkymmentätuhannen", "kahdessakymmenessätuhatta", "sadantuhatta"]:
+        assert fin.analyze(word) == [], word
+
+
 def test_adjective_first_parts(fin: morphfst.Language) -> None:
     # an adjective in the nominative before a noun (KARLSSON; autio 'deserted' and talo are listed,
     # autiotalo is not), at a heavier seam than a noun's
