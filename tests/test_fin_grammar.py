@@ -1130,6 +1130,17 @@ def test_names_used_in_the_plural(fin: morphfst.Language) -> None:
     assert "Ässät PROPN;PL;GEN" in [a.text for a in fin.analyze("Ässien")]
 
 
+def test_the_fifth_infinitive(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, the infinitives (from memory): -mAisillA- 'about to',
+    # always with a possessive suffix (olin tekemäisilläni, hän oli lukemaisillaan)
+    assert fin.analyze("tekemäisilläni")[0].text == "tehdä V;NFIN;INF5;AT+ESS;PSS1S"
+    assert fin.analyze("lukemaisillaan")[0].text == "lukea V;NFIN;INF5;AT+ESS;PSS3S"
+    assert [f.form for f in fin.generate("olla", "V;NFIN;INF5;AT+ESS;PSS1P")] == ["olemaisillamme"]
+    # never without the possessive, and not on voida (no forms in -mA)
+    assert fin.analyze("tekemäisillä") == []
+    assert not [a for a in fin.analyze("voimaisillaan") if a.lemma == "voida"]
+
+
 def test_past_and_passive_participles_are_compared(fin: morphfst.Language) -> None:
     # Karlsson, Finnish: An Essential Grammar, participles (from memory): every participle is
     # compared like an adjective (kehittyneempi, rakastettavin, tunnetuin) and makes -sti adverbs
