@@ -1141,6 +1141,32 @@ def test_the_fifth_infinitive(fin: morphfst.Language) -> None:
     assert not [a for a in fin.analyze("voimaisillaan") if a.lemma == "voida"]
 
 
+def test_distributive_adverbs_in_ittain(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, adverb derivation (from memory): -ittAin on the plural
+    # stem of a noun, the weak grade before its closed syllable (paikka: paikoittain, kunta:
+    # kunnittain); a listed adverb keeps its reading first
+    for lemma, form in [
+        ("paikka", "paikoittain"),
+        ("kunta", "kunnittain"),
+        ("vuosi", "vuosittain"),
+        ("maa", "maittain"),
+        ("alue", "alueittain"),
+        ("ryhmä", "ryhmittäin"),
+        ("osa", "osittain"),
+        ("päivä", "päivittäin"),
+        ("pilvi", "pilvittäin"),
+    ]:
+        assert [f.form for f in fin.generate(lemma, "N;DISTR;ADV")] == [form], lemma
+    assert fin.analyze("kysymyksittäin")[0].text == "kysymys N;DISTR;ADV"
+    for word in ["osittain", "päivittäin", "paikoittain"]:
+        texts = [a.text for a in fin.analyze(word)]
+        assert texts[0] == f"{word} ADV" and len(texts) == 2, texts
+    # not on adjectives or names, and not on the singular stem (common practice)
+    assert fin.analyze("hyvittäin") == []
+    assert fin.analyze("paikkaittain") == []
+    assert not [a for a in fin.analyze("virtasittain") if a.pos == "ADV"]
+
+
 def test_past_and_passive_participles_are_compared(fin: morphfst.Language) -> None:
     # Karlsson, Finnish: An Essential Grammar, participles (from memory): every participle is
     # compared like an adjective (kehittyneempi, rakastettavin, tunnetuin) and makes -sti adverbs
