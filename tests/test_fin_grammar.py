@@ -1167,6 +1167,14 @@ def test_distributive_adverbs_in_ittain(fin: morphfst.Language) -> None:
     assert not [a for a in fin.analyze("virtasittain") if a.pos == "ADV"]
 
 
+def test_the_old_plural_genitive_of_type_41(fin: morphfst.Language) -> None:
+    # the Finnish standard word list, type 41 (from memory): vieraiden, vieraitten and the rare old
+    # -ten (kuningasten kuningas), ranked last
+    assert [f.form for f in fin.generate("kuningas", "N;PL;GEN")] == ["kuninkaiden", "kuninkaitten", "kuningasten"]
+    assert fin.analyze("vierasten")[0].lemma == "vieras"
+    assert fin.analyze("vieraiden")[0].text.endswith("PL;GEN")
+
+
 def test_past_and_passive_participles_are_compared(fin: morphfst.Language) -> None:
     # Karlsson, Finnish: An Essential Grammar, participles (from memory): every participle is
     # compared like an adjective (kehittyneempi, rakastettavin, tunnetuin) and makes -sti adverbs
