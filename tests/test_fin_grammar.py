@@ -1130,6 +1130,19 @@ def test_names_used_in_the_plural(fin: morphfst.Language) -> None:
     assert "Ässät PROPN;PL;GEN" in [a.text for a in fin.analyze("Ässien")]
 
 
+def test_a_compared_past_participle_ranks_last(fin: morphfst.Language) -> None:
+    # few past participles are compared in use (kehittyneempi, kokeneempi; common practice, from
+    # memory): the superlative ranks below the plural instructive spelt alike (kohdanne-i-n 'having
+    # met', not *kohdann-ein), and any reading without comparison ranks first
+    assert fin.analyze("kohdannein")[0].text == "kohdata V;V.PTCP;ACT;PST;ADJ;PL;INS"
+    assert fin.analyze("juostuin")[0].text == "juosta V;V.PTCP;PASS;PST;ADJ;PL;INS"
+    assert fin.analyze("kehittyneempi")[0].text == "kehittyä V;V.PTCP;ACT;PST;ADJ;CMPR;SG;NOM"
+    assert fin.analyze("väsyneempi")[0].text == "väsynyt ADJ;CMPR;SG;NOM"
+    assert "tunnettu ADJ;SPRL;SG;NOM" == fin.analyze("tunnetuin")[0].text
+    compared = fin.analyze("juosseempi")[0].weight
+    assert compared > fin.analyze("juosseet")[0].weight + 3.9
+
+
 def test_the_fifth_infinitive(fin: morphfst.Language) -> None:
     # Karlsson, Finnish: An Essential Grammar, the infinitives (from memory): -mAisillA- 'about to',
     # always with a possessive suffix (olin tekemäisilläni, hän oli lukemaisillaan)
