@@ -1171,6 +1171,9 @@ def test_distributive_adverbs_in_ittain(fin: morphfst.Language) -> None:
     ]:
         assert [f.form for f in fin.generate(lemma, "N;DISTR;ADV")] == [form], lemma
     assert fin.analyze("kysymyksittäin")[0].text == "kysymys N;DISTR;ADV"
+    # a stem in -i (type 5) also without the plural's e, ranked second (riveittäin, rivittäin)
+    assert [f.form for f in fin.generate("rivi", "N;DISTR;ADV")] == ["riveittäin", "rivittäin"]
+    assert fin.analyze("tunnittain")[0].text == "tunti N;DISTR;ADV"
     for word in ["osittain", "päivittäin", "paikoittain"]:
         texts = [a.text for a in fin.analyze(word)]
         assert texts[0] == f"{word} ADV" and len(texts) == 2, texts
