@@ -889,6 +889,9 @@ def test_hyphenated_compounds_inflect_the_last_part(fin: morphfst.Language) -> N
     assert not fin.accepts("xqz-maissa")
     # a word the lexicon has with its hyphen keeps its own analysis (tasa-arvo)
     assert fin.analyze("tasa-arvon")[0].text == "tasa-arvo N;SG;GEN"
+    # the last part is a nominal: ala 'field', not the connegative or imperative of alkaa (common practice)
+    assert [a.text for a in fin.analyze("pinta-ala")] == ["pinta-ala N;SG;NOM"]
+    assert fin.analyze("pinta-alan")[0].text == "pinta-ala N;SG;GEN"
 
 
 def test_postpositions_in_n_and_ksi_take_possessive_suffixes(fin: morphfst.Language) -> None:

@@ -10,7 +10,9 @@ whole word, this module gives one analysis per analysis of the last part:
   (*Etelä-Suomi*); part of speech and features are the last part's;
 - each first part is a stem morph (gloss and underlying form from its own best analysis), so the
   segmentation is the parts' morphs joined with hyphens, as for any word (*etelä-suome-ssa*);
-- the weight is the last part's plus the first parts' best weights, so the order is the last part's.
+- the weight is the last part's plus the first parts' best weights, so the order is the last part's;
+- a compound's last part is a nominal: its verb readings (UniMorph part of speech ``V``) are kept only
+  when it has no other (*pinta-ala* is 'surface area', not *pinta* + the connegative of *alkaa*).
 
 Every first part must be a word of the language (at least one analysis); otherwise, and when the
 last part has no analysis, there is none. Guessed analyses never come from here.
@@ -23,6 +25,7 @@ from collections.abc import Callable, Sequence
 from .results import Analysis, Morph
 
 HYPHEN = "-"
+VERB = "V"  # UniMorph's part of speech of verbs
 
 
 def hyphenated(
@@ -41,9 +44,12 @@ def hyphenated(
     firsts = head.split(HYPHEN)
     if not all(firsts):
         return []
-    last = analyze(tail)
+    last = [a for a in analyze(tail) if not a.guessed]
     if not last:
         return []
+    nominal = [a for a in last if a.pos != VERB]
+    if nominal:
+        last = nominal
     stems: list[Morph] = []
     extra = 0.0
     for part in firsts:
@@ -60,5 +66,4 @@ def hyphenated(
     return [
         Analysis(surface, prefix + a.lemma, a.pos, a.features, (*stems, *a.morphs), a.weight + extra, a.ud, False)
         for a in last
-        if not a.guessed
     ]
