@@ -95,3 +95,16 @@ def test_plus_glued_to_a_symbol_is_an_error() -> None:
     with pytest.raises(UserError) as info:
         parse_grammar_text(src, "plus.mfg")
     assert "one or more" in info.value.message and info.value.position and info.value.position.line == 5
+
+
+def test_quoted_letters_for_characters_the_rule_syntax_reserves() -> None:
+    # a period or comma inside a word (1.000'den, 3,5'lik) is a letter written in quotes; rules and
+    # class patterns reach it through a set, since a bare . is 'any symbol' there
+    src = 'alphabet {\n  letters a 0 1 "." ","\n}\nsets {\n  sep = "." ","\n  digit = 0 1\n}\n'
+    src += "rules {\n  rule r: a -> ∅ / @digit @sep _\n}\n"
+    g = parse_grammar_text(src, "quoted.mfg")
+    assert g.letters == ["a", "0", "1", ".", ","]
+    assert g.sets["sep"].members == [".", ","]
+    with pytest.raises(UserError) as info:
+        parse_grammar_text('alphabet {\n  letters a ".,"\n}\n', "two.mfg")
+    assert "one character" in info.value.message and info.value.position and info.value.position.line == 2

@@ -14,6 +14,7 @@ from __future__ import annotations
 import pytest
 
 import morphfst
+from morphfst.runtime.tokenize import Tokenizer
 
 CASES = ["NOM", "ACC", "DAT", "LOC", "ABL", "GEN", "INS"]
 
@@ -1144,3 +1145,38 @@ def test_spatial_nouns_in_their_postpositional_forms_first(tur: morphfst.Languag
     # only flagged nouns: no such cheap possessive for a common noun (evinde costs as before)
     ev = tur.analyze("evinde")[0]
     assert ev.text == "ev N;SG;PSS3S;LOC" and ev.weight > tur.analyze("ev")[0].weight + 2.9
+
+
+@pytest.mark.parametrize(
+    "surface, reading",
+    [
+        # Numbers written with a thousands period, a decimal comma or as a clock time take their
+        # suffixes as they are said (Turkish spelling rules on numbers; common practice): 1.000 bin,
+        # 2.500 iki bin beş yüz, 3,5 üç virgül beş, 09.00 dokuz, 09.30 dokuz otuz, 14.45 on dört kırk beş
+        ("1.000'den", "1.000 NUM;SG;ABL"),
+        ("2.500'e", "2.500 NUM;SG;DAT"),
+        ("1.000.000'dan", "1.000.000 NUM;SG;ABL"),
+        ("3,5'lik", "3,5 NUM;ABSTR;N;SG;NOM"),
+        ("0,5'i", "0,5 NUM;SG;ACC"),
+        ("09.00'da", "09.00 NUM;SG;LOC"),
+        ("10.00'a", "10.00 NUM;SG;DAT"),
+        ("09.30'da", "09.30 NUM;SG;LOC"),
+        ("14.45'te", "14.45 NUM;SG;LOC"),
+        ("12.00'de", "12.00 NUM;SG;LOC"),
+        # %50'si: the percent sign is a separate piece of the text; 50'si is said elli-si
+        ("50'si", "50 NUM;SG;PSS3S;NOM"),
+        ("1990'lı", "1990 NUM;PROPR;ADJ;SG;NOM"),
+    ],
+)
+def test_numbers_with_separators_take_suffixes_as_said(tur: morphfst.Language, surface: str, reading: str) -> None:
+    assert reading in [a.text for a in tur.analyze(surface)]
+
+
+def test_numbers_with_separators_reject_suffixes_as_spelt(tur: morphfst.Language) -> None:
+    # common practice: the suffix follows the spoken number, not the last digit written
+    for word in ["1.000'dan", "3,5'lık", "09.00'de", "10.00'e", "1.,5", "1..000"]:
+        assert tur.analyze(word) == [], word
+    assert [f.form for f in tur.generate("1.000", "NUM;SG;ABL")] == ["1.000'den"]
+    # the tokenizer keeps such a number in one token, the percent sign apart
+    tokens = Tokenizer.for_meta(tur.meta).tokens("1.000'den 3,5'lik %50'si 09.00'da")
+    assert tokens == ["1.000'den", "3,5'lik", "50'si", "09.00'da"]

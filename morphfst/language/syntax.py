@@ -247,8 +247,22 @@ class _Builder:
 
     def do_alphabet(self, node: Tree) -> None:
         for line in node.children:
-            syms = [str(c.children[0]) if isinstance(c, Tree) else str(c) for c in line.children]
+            toks = [c.children[0] if isinstance(c, Tree) else c for c in line.children]
+            syms = [self._quoted_letter(t) if t.type == "STRING" else str(t) for t in toks]
             getattr(self.grammar, str(line.data)).extend(syms)
+
+    def _quoted_letter(self, tok: Any) -> str:
+        """A letter written in quotes ("." ","): one character the rule syntax reserves, so that rules
+        reach it through a set (``sep = "." ","``, then ``@sep``)."""
+        text = self.unquote(tok)
+        if len(text) != 1 or text.isspace():
+            raise UserError(
+                f"a quoted letter is one character, not {str(tok)}",
+                self.pos_of(tok),
+                hint='quote a single character the rule syntax reserves, such as "." or ","',
+                source_line=self.lines[tok.line - 1],
+            )
+        return text
 
     def do_sets_block(self, node: Tree) -> None:
         for d in node.children:
@@ -280,6 +294,8 @@ class _Builder:
                         source_line=self.lines[tok.line - 1],
                     )
                 out.extend(self.grammar.sets[ref].members)
+            elif tok.type == "STRING":
+                out.append(self._quoted_letter(tok))
             else:
                 out.append(text)
         return out
