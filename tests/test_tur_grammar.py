@@ -1180,3 +1180,23 @@ def test_numbers_with_separators_reject_suffixes_as_spelt(tur: morphfst.Language
     # the tokenizer keeps such a number in one token, the percent sign apart
     tokens = Tokenizer.for_meta(tur.meta).tokens("1.000'den 3,5'lik %50'si 09.00'da")
     assert tokens == ["1.000'den", "3,5'lik", "50'si", "09.00'da"]
+
+
+def test_ordinals_take_lik_and_distributives_take_li(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake, Turkish: A Comprehensive Grammar, ch. 15 (numerals) and 7 (-lIk, -lI), from
+    # memory: the ordinal makes the noun of a rank with -lIk (ikincilik 'second place', ikinciliği,
+    # üçüncülükle, altıncılığı 'the sixth place'); the distributive an adjective with -lI (ikişerli
+    # 'in twos', üçerli)
+    assert tur.analyze("ikincilik")[0].text == "iki NUM;ORD;ADJ;ABSTR;N;SG;NOM"
+    assert tur.analyze("üçüncülükle")[0].text == "üç NUM;ORD;ADJ;ABSTR;N;SG;INS"
+    assert "iki NUM;ORD;ADJ;ABSTR;N;SG;PSS3S;NOM" in [a.text for a in tur.analyze("ikinciliği")]
+    # altıncılığı is altı's, not altın 'gold' + -CI + -lIk 'goldsmithing'
+    assert tur.analyze("altıncılığı")[0].lemma == "altı"
+    assert [f.form for f in tur.generate("üç", "NUM;ORD;ADJ;ABSTR;N;SG;NOM")] == ["üçüncülük"]
+    assert tur.analyze("ikişerli")[0].text == "iki NUM;DISTR;ADJ;PROPR;ADJ;SG;NOM"
+    assert [f.form for f in tur.generate("üç", "NUM;DISTR;ADJ;PROPR;ADJ;SG;NOM")] == ["üçerli"]
+    # a listed word comes first (birincilik); the distributive itself stays uninflected (no *ikişere,
+    # *ikişerim) and no -lIk follows the distributive (no *ikişerlik as a rank)
+    assert tur.analyze("birincilik")[0].text == "birincilik N;SG;NOM"
+    for word in ["ikişere", "ikişerim", "ikişerlik", "ikincilı", "ikincilük"]:
+        assert not any(a.lemma == "iki" for a in tur.analyze(word)), word
