@@ -1200,3 +1200,16 @@ def test_ordinals_take_lik_and_distributives_take_li(tur: morphfst.Language) -> 
     assert tur.analyze("birincilik")[0].text == "birincilik N;SG;NOM"
     for word in ["ikişere", "ikişerim", "ikişerlik", "ikincilı", "ikincilük"]:
         assert not any(a.lemma == "iki" for a in tur.analyze(word)), word
+
+
+def test_as_if_casina_after_the_copulas_evidential(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake, -CAsInA 'as if' (from memory): on the copula's -(y)mIş after a finite verb
+    # (bilmiyormuşçasına, gelecekmişçesine) and after a nominal (deliymişçesine, evdeymişçesine)
+    assert tur.analyze("bilmiyormuşçasına")[0].text == "bilmek V;NEG;PROG;NFH;ASIF;ADV"
+    assert tur.analyze("gelecekmişçesine")[0].text == "gelmek V;FUT;NFH;ASIF;ADV"
+    assert tur.analyze("deliymişçesine")[0].text == "deli ADJ;SG;NOM;NFH;ASIF;ADV"
+    assert tur.analyze("evdeymişçesine")[0].text == "ev N;SG;LOC;NFH;ASIF;ADV"
+    assert [f.form for f in tur.generate("bilmek", "V;NEG;PROG;NFH;ASIF;ADV")][:1] == ["bilmiyormuşçasına"]
+    # not after the other copulas, and nothing after -CAsInA (common practice)
+    for word in ["bilmiyordurcasına", "geliyordurcasına", "deliydiçesine", "bilmiyormuşçasınalar"]:
+        assert tur.analyze(word) == [], word
