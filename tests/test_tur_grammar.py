@@ -1213,3 +1213,27 @@ def test_as_if_casina_after_the_copulas_evidential(tur: morphfst.Language) -> No
     # not after the other copulas, and nothing after -CAsInA (common practice)
     for word in ["bilmiyordurcasına", "geliyordurcasına", "deliydiçesine", "bilmiyormuşçasınalar"]:
         assert tur.analyze(word) == [], word
+
+
+def test_only_place_and_time_adverbs_take_case(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake, adverbs (from memory): şimdi, yarın, dün and the place adverbs içeri,
+    # dışarı, yukarı, aşağı, ileri, geri take the cases (şimdiden, şimdiye kadar, yarına, dünden,
+    # dışarıda, yukarıya, geriden)
+    for word, text in [
+        ("şimdiye", "şimdi ADV;DAT"),
+        ("yarına", "yarın ADV;DAT"),
+        ("dünden", "dün ADV;ABL"),
+        ("dışarıda", "dışarı ADV;LOC"),
+        ("yukarıya", "yukarı ADV;DAT"),
+        ("geriden", "geri ADV;ABL"),
+    ]:
+        assert tur.analyze(word)[0].text == text, word
+    assert tur.analyze("yukarıdaki")[0].text == "yukarı ADV;LOC;RELZ;NOM"
+    # yazın 'in summer' and kışın 'in winter' are themselves old instrumentals and take no case:
+    # 1921 yazında is yaz + possessive + locative (common practice); no manner adverb takes one
+    assert tur.analyze("yazında")[0].text == "yaz N;SG;PSS3S;LOC"
+    assert tur.analyze("kışında")[0].text == "kış N;SG;PSS3S;LOC"
+    for word in ["yazında", "kışında", "kışına", "bazende", "belkiye", "hızlıcadan", "yinede"]:
+        assert not any(a.pos == "ADV" and ";" in a.text.split(" ", 1)[1] for a in tur.analyze(word)), word
+    # the relative -ki stays on every adverb (yarınki, şimdiki; yazınki 'of the summer')
+    assert "yazın ADV;RELZ;NOM" in [a.text for a in tur.analyze("yazınki")]
