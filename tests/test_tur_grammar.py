@@ -1237,3 +1237,25 @@ def test_only_place_and_time_adverbs_take_case(tur: morphfst.Language) -> None:
         assert not any(a.pos == "ADV" and ";" in a.text.split(" ", 1)[1] for a in tur.analyze(word)), word
     # the relative -ki stays on every adverb (yarınki, şimdiki; yazınki 'of the summer')
     assert "yazın ADV;RELZ;NOM" in [a.text for a in tur.analyze("yazınki")]
+
+
+def test_kendi_takes_a_case_only_after_a_possessive(tur: morphfst.Language) -> None:
+    # Göksel & Kerslake, ch. 18, the reflexive pronoun (from memory): kendi takes a possessive before
+    # any case (kendimi, kendine, kendisinden, kendimizce); its third person has the short kendini,
+    # kendine, kendinden beside kendisini; kendileri 'themselves'
+    assert tur.analyze("kendimi")[0].text == "kendi PRO;SG;PSS1S;ACC"
+    assert tur.analyze("kendini")[0].text == "kendi PRO;SG;PSS3S;ACC"
+    assert "kendi PRO;SG;PSS2S;ACC" in [a.text for a in tur.analyze("kendini")]
+    assert tur.analyze("kendisinden")[0].text == "kendi PRO;SG;PSS3S;ABL"
+    assert tur.analyze("kendileri")[0].text == "kendi PRO;SG;PSS3P;NOM"
+    assert tur.analyze("kendince")[0].text == "kendince ADV"
+    assert [f.form for f in tur.generate("kendi", "PRO;SG;PSS3S;ACC")] == ["kendisini", "kendini"]
+    assert [f.form for f in tur.generate("kendi", "PRO;SG;PSS1P;DAT")] == ["kendimize"]
+    # no bare case, plural or -(n)InlA: *kendiyi, *kendiye, *kendide, *kendiden, *kendiler,
+    # *kendininle (common practice)
+    for word in ["kendiyi", "kendiye", "kendide", "kendiden", "kendiyle", "kendiler", "kendilere", "kendininle"]:
+        assert tur.analyze(word) == [], word
+    # öbürkü 'the other one': öbür + -ki, rounded after ü like dünkü (G&K, the relative -ki, from memory)
+    assert tur.analyze("öbürkü")[0].text == "öbür PRO;SG;NOM;RELZ;NOM"
+    assert [f.form for f in tur.generate("öbür", "PRO;SG;NOM;RELZ;NOM")] == ["öbürkü"]
+    assert tur.analyze("öbürki") == [] and tur.analyze("bizki") == []
