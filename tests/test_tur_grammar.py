@@ -1259,3 +1259,24 @@ def test_kendi_takes_a_case_only_after_a_possessive(tur: morphfst.Language) -> N
     assert tur.analyze("öbürkü")[0].text == "öbür PRO;SG;NOM;RELZ;NOM"
     assert [f.form for f in tur.generate("öbür", "PRO;SG;NOM;RELZ;NOM")] == ["öbürkü"]
     assert tur.analyze("öbürki") == [] and tur.analyze("bizki") == []
+
+
+def test_words_added_from_the_second_running_text_probe(tur: morphfst.Language) -> None:
+    best = {w: tur.analyze(w)[0].text for w in "yükümlü kasisleri sathında hammaddeler kanımca ekmek sığıyor çoktan".split()}
+    # TDK Güncel Türkçe Sözlük headwords (from memory): yükümlü 'obliged', kasis 'speed bump', satıh
+    # 'surface' with vowel loss (sathı, sathında), hammadde 'raw material', kanımca 'in my view'
+    assert best["yükümlü"] == "yükümlü ADJ;SG;NOM"
+    assert best["kasisleri"].startswith("kasis N;PL")
+    assert best["sathında"] == "satıh N;SG;PSS3S;LOC"
+    assert [f.form for f in tur.generate("satıh", "N;SG;ACC")] == ["sathı"]
+    assert best["hammaddeler"] == "hammadde N;PL;NOM"
+    assert best["kanımca"] == "kanımca ADV"
+    # ekmek is the noun 'bread' first, the verb 'sow' second; sığıyor is sığmak 'fit', not the rare
+    # sığamak 'roll up (sleeves)'; çoktan 'long ago' is an adverb of its own (common practice)
+    assert best["ekmek"] == "ekmek N;SG;NOM" and "ekmek V;NFIN;NOM" in [a.text for a in tur.analyze("ekmek")]
+    assert best["sığıyor"] == "sığmak V;PROG;3;SG"
+    assert best["çoktan"] == "çoktan ADV"
+    # otuz yılı aşkın 'over thirty years': the postposition is among the readings
+    assert "aşkın ADP" in [a.text for a in tur.analyze("aşkın")]
+    # no vowel loss without a vowel after it (satıhta, not *sathta)
+    assert tur.analyze("sathta") == [] and tur.analyze("satıhı") == []
