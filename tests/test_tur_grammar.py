@@ -1280,3 +1280,21 @@ def test_words_added_from_the_second_running_text_probe(tur: morphfst.Language) 
     assert "aşkın ADP" in [a.text for a in tur.analyze("aşkın")]
     # no vowel loss without a vowel after it (satıhta, not *sathta)
     assert tur.analyze("sathta") == [] and tur.analyze("satıhı") == []
+
+
+def test_stacked_copulas_are_read_at_a_cost_and_never_generated(tur: morphfst.Language) -> None:
+    # The evidential copula on the evidential -mIş (gelmişmişim) and the past copula on the past -DI
+    # (kaybettiydim, geldiydi) are colloquial stacks (G&K ch. 21, from memory): read, behind the plain
+    # forms' weight, but not generated; -mIştI, -DIysA, -sAydI stay plain forms
+    readings = [a.text for a in tur.analyze("gelmişmişim")]
+    assert readings[0] == "gelmek V;NFH;NFH;1;SG"
+    assert tur.analyze("gelmişmişim")[0].weight >= tur.analyze("gelmişim")[0].weight + 3.0
+    assert tur.analyze("kaybettiydim")[0].text == "kaybetmek V;PST;PST;1;SG"
+    assert tur.analyze("gelmişlermiş")[0].text == "gelmek V;NFH;3;PL;NFH"
+    assert tur.generate("gelmek", "V;NFH;NFH;1;SG") == [] and tur.generate("gelmek", "V;PST;PST;1;SG") == []
+    assert [f.form for f in tur.generate("gelmek", "V;NFH;PST;1;SG")] == ["gelmiştim"]
+    assert [f.form for f in tur.generate("gelmek", "V;PST;COND;1;SG")] == ["geldiysem"]
+    assert [f.form for f in tur.generate("gelmek", "V;COND;PST;1;SG")] == ["gelseydim"]
+    assert tur.analyze("gelmiştim")[0].weight == tur.analyze("gelmişim")[0].weight
+    # a stem that ends in -mış is not a stacked suffix (kamışmış 'it was a reed')
+    assert tur.analyze("kamışmış")[0].weight < tur.analyze("kamış")[0].weight + 3.0
