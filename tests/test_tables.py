@@ -184,6 +184,23 @@ def test_turkish_verb_conjugation(tur: morphfst.Language) -> None:
     assert grid.cells[0][0] is not None and grid.cells[0][0].forms[0].form == "geldim"
 
 
+def test_turkish_copulas_in_another_order_are_two_tables(tur: morphfst.Language) -> None:
+    # -DIysA 'if (it is so that) I did' and -sAydI 'if I had (done)' carry the same two copulas in
+    # the other order and mean different things (Lewis 2000, ch. VIII, the compound tenses; G&K
+    # ch. 21 — from memory): two sub-tables titled in word order, not two variants of one cell.
+    # The person and -DIr in another order stay variants of one cell (gelmişlerdi / gelmiştiler).
+    a = arrange(only(tur, "gelmek", "V"), tur.meta)
+    did = grid_of(a, "past (-DI), conditional (-sA)")
+    had = grid_of(a, "conditional (-sA), past (-DI)")
+    assert [f.form for f in did.cells[0][0].forms] == ["geldiysem"]  # type: ignore[union-attr]
+    assert [f.form for f in had.cells[0][0].forms] == ["gelseydim"]  # type: ignore[union-attr]
+    pluperfect = grid_of(a, "past (-DI), evidential (-mIş)")
+    assert {f.form for f in pluperfect.cells[-1][0].forms} == {"gelmişlerdi", "gelmiştiler"}  # type: ignore[union-attr]
+    # the stacked evidential and past + past are not generated: their cells are left empty
+    stacked = grid_of(a, "NFH+NFH")
+    assert all(c is None or not c.forms for row in stacked.cells for c in row)
+
+
 def test_word_not_in_the_lexicon_with_its_class(tur: morphfst.Language) -> None:
     # A made-up noun whose last vowel is front inflects like ev (Göksel & Kerslake 2005, ch. 8: regular
     # front harmony; common practice).

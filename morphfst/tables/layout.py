@@ -441,10 +441,16 @@ def _section(
     tables = [d for d in spec.tables if d in present] + extra
     note = ", ".join(spec.label(present[d][0] or "") for d in present if d in fixed_dims)
     lookup: dict[tuple[Key, Key, Key], Cell] = {}
+    in_tables = set(tables)
     for v, cell in values:
-        key = (tuple(v.get(d) for d in tables), tuple(v.get(d) for d in rows), tuple(v.get(d) for d in columns))
+        # the sub-table key ends with the order in which the word carries the sub-table dimensions:
+        # the same values in another order of those affixes are another form, not a variant (Turkish
+        # -sAydI 'if it had' and -DIysA 'if it did': COND then PST, PST then COND)
+        order = "|".join(d for d in v if d in in_tables)
+        key = ((*(v.get(d) for d in tables), order), tuple(v.get(d) for d in rows), tuple(v.get(d) for d in columns))
         kept = lookup.get(key)
-        # cells with the same values in another affix order (gelmiştirler, gelmişlerdir) share a place
+        # cells with the same values in another order of the other affixes (gelmiştirler,
+        # gelmişlerdir: the person against -DIr) share a place
         lookup[key] = cell if kept is None else _merged(kept, cell)
     # the cells of each sub-table; sub-tables in the order of the product of their dimensions' values
     # (only those with cells: the product of many dimensions is far larger than the cells there are)
@@ -452,6 +458,10 @@ def _section(
     for (t, r, c), cell in lookup.items():
         by_table.setdefault(t, {})[(r, c)] = cell
     rank = [{v: i for i, v in enumerate(present[d])} for d in tables]
+    # the orders each set of sub-table values comes in: a set that comes in two is titled in word order
+    orders: dict[Key, list[Value]] = {}
+    for t in by_table:
+        orders.setdefault(t[:-1], []).append(t[-1])
     every_row = _all(present, rows)
     all_columns = _all(present, columns)
     grids: list[Grid] = []
@@ -464,7 +474,11 @@ def _section(
             continue
         grid_cells = [[here.get((r, c)) for c in ckeys] for r in rkeys]
         # a value labelled "" (e.g. 'label Mood.none ""') is left out of the title
-        gtitle = ", ".join(x for x in (spec.value_label(d, val) for d, val in zip(tables, tkey)) if x)
+        titled = list(zip(tables, tkey[:-1]))
+        if len(orders[tkey[:-1]]) > 1:
+            place = {d: i for i, d in enumerate((tkey[-1] or "").split("|"))}
+            titled.sort(key=lambda dv: place.get(dv[0], -1))
+        gtitle = ", ".join(x for x in (spec.value_label(d, val) for d, val in titled) if x)
         grids.append(
             Grid(
                 title=gtitle,
