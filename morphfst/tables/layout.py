@@ -441,12 +441,12 @@ def _section(
     tables = [d for d in spec.tables if d in present] + extra
     note = ", ".join(spec.label(present[d][0] or "") for d in present if d in fixed_dims)
     lookup: dict[tuple[Key, Key, Key], Cell] = {}
-    in_tables = set(tables)
+    # the sub-table key ends with the order in which the word carries the sub-table dimensions a
+    # declared layout names: the same values in another order of those affixes are another form, not
+    # a variant (Turkish -sAydI 'if it had' and -DIysA 'if it did': COND then PST, PST then COND)
+    ordered = set(spec.tables) if spec.origin == "declared" and not spec.listing else set()
     for v, cell in values:
-        # the sub-table key ends with the order in which the word carries the sub-table dimensions:
-        # the same values in another order of those affixes are another form, not a variant (Turkish
-        # -sAydI 'if it had' and -DIysA 'if it did': COND then PST, PST then COND)
-        order = "|".join(d for d in v if d in in_tables)
+        order = "|".join(d for d in v if d in ordered)
         key = ((*(v.get(d) for d in tables), order), tuple(v.get(d) for d in rows), tuple(v.get(d) for d in columns))
         kept = lookup.get(key)
         # cells with the same values in another order of the other affixes (gelmiştirler,
