@@ -64,6 +64,5 @@ def hyphenated(
     written_head = written.rpartition(HYPHEN)[0]
     prefix = (written_head if written_head.lower() == head.lower() else head) + HYPHEN
     return [
-        Analysis(surface, prefix + a.lemma, a.pos, a.features, (*stems, *a.morphs), a.weight + extra, a.ud, False)
-        for a in last
+        Analysis(surface, prefix + a.lemma, a.pos, a.features, (*stems, *a.morphs), a.weight + extra, a.ud, False) for a in last
     ]
