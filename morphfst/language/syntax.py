@@ -248,7 +248,7 @@ class _Builder:
     def do_alphabet(self, node: Tree) -> None:
         for line in node.children:
             toks = [c.children[0] if isinstance(c, Tree) else c for c in line.children]
-            syms = [self._quoted_letter(t) if t.type == "STRING" else str(t) for t in toks]
+            syms = [self._quoted_letter(t) if isinstance(t, Token) and t.type == "STRING" else str(t) for t in toks]
             getattr(self.grammar, str(line.data)).extend(syms)
 
     def _quoted_letter(self, tok: Any) -> str:
