@@ -707,20 +707,23 @@ class FastAnalyzer:
         the cycle collector walks)."""
         lemma, pos, features, stem_form, affixes, _ = parts
         kept = stems if stems is not None else {} if guessed else self._stems
-        stem_key = (stem_form, lemma, pos)
-        stem = kept.get(stem_key)
-        if stem is None:
-            if len(kept) > 100_000:
-                kept.clear()
-            stem = kept[stem_key] = _new_morph(
-                stem_form, self.lang.glosses.get((lemma, pos), lemma), (pos,), "stem", lemma, None, None, None
-            )
+        stem = kept.get((stem_form, lemma, pos)) or self._new_stem(kept, stem_form, lemma, pos)
         return _new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, self.lang.ud, guessed)  # type: ignore[no-any-return]
+
+    def _new_stem(self, kept: dict[tuple[str, str, str], Morph], form: str, lemma: str, pos: str) -> Morph:
+        """A stem morph with its lexicon gloss, kept in ``kept`` (cleared past 100,000 stems)."""
+        if len(kept) > 100_000:
+            kept.clear()
+        stem = kept[(form, lemma, pos)] = _new_morph(
+            form, self.lang.glosses.get((lemma, pos), lemma), (pos,), "stem", lemma, None, None, None
+        )
+        return stem  # type: ignore[no-any-return]
 
     def _decode_compound(self, surface: str, internal: str, bounded: str, weight: float) -> Analysis:
         """A compound: every part but the last is lemma and part of speech (its surface form between
-        seams); the last is decoded as a word. The lemma is the first parts' surface forms and the last
-        part's lemma; part of speech and features are the last part's; each part is a stem morph."""
+        seams); the last is decoded as a word. The lemma is the first parts' surface forms (their lemmas
+        in an ``agree`` compound) and the last part's lemma; part of speech and features are the last
+        part's; each part is a stem morph."""
         seam = self.seam
         parts = internal.split(seam)
         forms = bounded.split(seam)
@@ -730,12 +733,7 @@ class FastAnalyzer:
         for part, form in zip(parts[:-1], forms):
             lemma, pos = part[:-1], self.labels.get(part[-1:], "?")
             heads.append(lemma if pos in self.lemma_parts else form)
-            stem_key = (form, lemma, pos)
-            stem = self._stems.get(stem_key)
-            if stem is None:
-                gloss = self.lang.glosses.get((lemma, pos), lemma)
-                stem = self._stems[stem_key] = _new_morph(form, gloss, (pos,), "stem", lemma, None, None, None)
-            stems.append(stem)
+            stems.append(self._stems.get((form, lemma, pos)) or self._new_stem(self._stems, form, lemma, pos))
         lemma = "".join(heads) + last.lemma
         return _new_analysis(surface, lemma, last.pos, last.features, (*stems, *last.morphs), weight, self.lang.ud, False)
 
