@@ -12,6 +12,7 @@ import morphfst
 from morphfst.cli import main
 from morphfst.debug import DebugSession, lint, slot_graph_data, slot_graph_dot
 from morphfst.debug.graph import dot_program, render
+from morphfst.debug.lint import render_lint
 
 FLAWED = """\
 language toyl "Flawed toy for lint tests"
@@ -103,6 +104,99 @@ def test_lint_finds_each_kind_of_flaw(flawed: DebugSession) -> None:
     assert "D" in unresolved.detail["output"]
     # the rules that do apply are not reported
     assert not {"front_a", "back_a", "d_voiced"} & {f.subject for f in report.findings}
+
+
+# A grammar with nothing wrong that the first checks took for flaws: an affix repeated with another
+# continuation, an open class, a rule whose context an intermediate rule makes, a filter symbol that a
+# rule writes (the way a grammar rules a form out), and a slot in an included file.
+SOUND = """\
+language toys "Sound toy for lint tests"
+lexicon "toys.tsv"
+
+alphabet {
+  letters a e i o u k l m n p r s t d v
+  archiphonemes A C X
+}
+
+sets {
+  vowel = a e i o u
+  front = e i
+  cons  = k l m n p r s t d
+}
+
+features {
+  pos: N NUM
+  Number: SG PL
+  Voice: CAUS
+}
+
+classes {
+  noun pos N -> number
+  digits pos NUM -> end open @vowel @vowel*
+}
+
+slot number -> end {
+  ""     SG
+  ""     SG weight 1.0 -> extra
+  "lAr"  PL
+}
+
+include "toys_extra.mfg"
+
+rules {
+  rule ban_ke   : k -> X / _ + l A r
+  rule front_a  : A -> e / @front @cons* + @cons* _
+  rule back_a   : A -> a
+  rule c_vowel  : C -> t / @vowel + _
+  rule c_dir sim : C -> d i / [^C] + _
+  rule c_vowel2 : C -> t / i + _
+}
+"""
+
+SOUND_EXTRA = """\
+slot extra -> end second {
+  "C"    CAUS
+}
+
+slot second -> end {
+  "C"    CAUS
+}
+"""
+
+
+@pytest.fixture(scope="module")
+def sound(tmp_path_factory: pytest.TempPathFactory) -> DebugSession:
+    d = tmp_path_factory.mktemp("lint_sound")
+    (d / "toys.tsv").write_text(
+        "lemma\tclass\tpos\tgloss\nev\tnoun\tN\thouse\nkale\tnoun\tN\tcastle\nkek\tnoun\tN\tcake\n", encoding="utf-8"
+    )
+    (d / "toys_extra.mfg").write_text(SOUND_EXTRA, encoding="utf-8")
+    path = d / "toys.mfg"
+    path.write_text(SOUND, encoding="utf-8")
+    return DebugSession.open(morphfst.load(path))
+
+
+def test_lint_passes_what_is_not_a_flaw(sound: DebugSession) -> None:
+    report = lint(sound)
+    kinds = {(f.kind, f.subject) for f in report.findings}
+    # the repeated zero SG goes on to another slot; digits is open; c_vowel2 meets the i that c_dir
+    # writes after c_vowel has looked (ev-di-t); X is written by a rule and resolved by none: a filter (kek+lAr)
+    assert kinds == {("filter-archiphoneme", "X")}, kinds
+    assert all(f.severity == "note" for f in report.findings)
+    assert "<X>" not in str(report.findings) and "rules write X" in report.findings[0].message
+
+
+def test_lint_names_the_included_file(tmp_path: Path) -> None:
+    # a repeated affix in an included file is reported at that file's line, under that file's name
+    (tmp_path / "toys.tsv").write_text("lemma\tclass\tpos\tgloss\nev\tnoun\tN\thouse\n", encoding="utf-8")
+    (tmp_path / "toys_extra.mfg").write_text(SOUND_EXTRA + 'slot twice -> end {\n  "C" CAUS\n  "C" CAUS\n}\n', encoding="utf-8")
+    grammar = SOUND.replace('  ""     SG weight 1.0 -> extra', '  ""     SG weight 1.0 -> extra twice')
+    (tmp_path / "toys.mfg").write_text(grammar, encoding="utf-8")
+    report = lint(DebugSession.open(morphfst.load(tmp_path / "toys.mfg")))
+    twice = next(f for f in report.findings if f.kind == "duplicate-affix")
+    assert twice.subject == "twice:C" and twice.file.endswith("toys_extra.mfg") and twice.line == SOUND_EXTRA.count("\n") + 3
+    rendered = render_lint(report)
+    assert f"{twice.file}:{twice.line}: warning: [duplicate-affix]" in rendered
 
 
 def test_lint_ambiguity_report(tur_small: morphfst.Language) -> None:

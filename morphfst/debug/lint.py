@@ -3,16 +3,22 @@
 Checks (validation already rejects undeclared names and unreachable slots):
 
 - ``dead-end-slot``: a slot from which no path reaches the end of a word;
-- ``unused-class``: a class no lexicon entry uses;
-- ``duplicate-affix``: two affixes of one slot with the same form, features and part of speech;
+- ``unused-class``: a class no lexicon entry uses (an open class, whose pattern spells its stems, needs none);
+- ``duplicate-affix``: two affixes of one slot with the same form, features, part of speech and
+  continuation;
 - ``rule-never-applies``: a rule that changes no string the lexicon × slot graph can feed it (the
   output projection of the machine is pushed through the cascade rule by rule, per group of entries
   with the same blocked rules);
 - ``rule-shadowed``: a later rule whose every application an earlier obligatory rule takes first
   (its target is contained in the earlier target, its contexts in the earlier contexts, and the
-  earlier replacement does not give its target back);
+  earlier replacement does not give its target back, and no rule from the earlier to the later one
+  writes a symbol the later one reads: the later rule may meet a context made after the earlier one);
 - ``unresolved-archiphoneme``: an archiphoneme that reaches the end of the cascade on some path (the
   final step drops such paths, so those words silently cannot be analyzed);
+- ``filter-archiphoneme`` (a note): archiphonemes that rules write and no obligatory rule rewrites,
+  used to rule paths out (their paths are left out of the check above);
+
+Each finding names its file and line (an included grammar file's own).
 - an ambiguity report: the words of a word list with the most analyses.
 """
 
@@ -40,6 +46,7 @@ class Finding:
     line: int
     message: str
     detail: dict[str, Any] = field(default_factory=dict)
+    file: str = ""  # the source file of ``line`` when it is not the grammar file itself (an included file)
 
 
 @dataclass
@@ -85,6 +92,7 @@ def dead_end_slots(g: m.Grammar) -> list[Finding]:
             s.pos.line,
             f"slot {s.name}: no path from it reaches the end of a word",
             {"next": s.next},
+            s.pos.file,
         )
         for s in g.slots.values()
         if s.name not in ends
@@ -92,20 +100,24 @@ def dead_end_slots(g: m.Grammar) -> list[Finding]:
 
 
 def unused_classes(g: m.Grammar) -> list[Finding]:
+    """Classes no lexicon entry uses; an open class (its ``open`` pattern makes every string it accepts a
+    stem) needs no entry."""
     used = {e.klass for e in g.lexicon}
     return [
-        Finding("unused-class", "note", c.name, c.pos.line, f"class {c.name} has no lexicon entry")
+        Finding("unused-class", "note", c.name, c.pos.line, f"class {c.name} has no lexicon entry", file=c.pos.file)
         for c in g.classes.values()
-        if c.name not in used
+        if c.name not in used and c.open is None
     ]
 
 
 def duplicate_affixes(g: m.Grammar) -> list[Finding]:
+    """Two affixes of a slot with the same form, features, part of speech and continuation (the same
+    affix routed to other slots, often at another weight, is a way of writing the graph, not a repeat)."""
     out = []
     for slot in g.slots.values():
-        seen: dict[tuple[str, tuple[str, ...], str | None], m.Affix] = {}
+        seen: dict[tuple[str, tuple[str, ...], str | None, tuple[str, ...] | None], m.Affix] = {}
         for a in slot.affixes:
-            key = (a.form_text, tuple(a.features), a.new_pos)
+            key = (a.form_text, tuple(a.features), a.new_pos, tuple(a.next) if a.next is not None else None)
             if key in seen:
                 first = seen[key]
                 out.append(
@@ -116,6 +128,7 @@ def duplicate_affixes(g: m.Grammar) -> list[Finding]:
                         a.pos.line,
                         f"slot {slot.name}: affix {a.form_text or '∅'!r} {';'.join(a.features)} repeats the affix at line {first.pos.line}",
                         {"first_line": first.pos.line},
+                        a.pos.file,
                     )
                 )
             else:
@@ -143,6 +156,26 @@ def cascade_checks(session: DebugSession) -> list[Finding]:
     applies: dict[str, bool] = {r.name: False for r in g.rules}
     seen_rule: dict[str, bool] = {r.name: False for r in g.rules}
     arch_codes = [s.code(a) for a in g.archiphonemes]
+    # an archiphoneme that rules write and no obligatory rule rewrites is a filter: a path that keeps it
+    # has no surface form by design (a form the grammar rules out, or one read only by a lenient rule);
+    # paths that keep a filter are left out of the search for unresolved archiphonemes, and the filters
+    # get one note (an archiphoneme of the lexicon or affixes that no rule rewrites is still reported)
+    resolved: set[int] = set()
+    written: set[int] = set()
+    for rule in g.rules:
+        try:
+            written |= _symbols(comp.rule_tau(rule).copy().project("output"))
+            if not rule.optional and not rule.lenient:
+                resolved |= _symbols(comp.expr(rule.target))
+        except (UserError, KeyError):
+            resolved |= {ord(code) for code in arch_codes}
+    # (a code is one character; its label is its code point)
+    filters = [code for code in arch_codes if ord(code) in written and ord(code) not in resolved]
+    arch_codes = [code for code in arch_codes if code not in filters]
+    unfiltered = None
+    if filters:
+        keeps = comp.sigma_star + pynini.union(*(acc(code) for code in filters)) + comp.sigma_star
+        unfiltered = pynini.difference(comp.sigma_star, keeps.optimize()).optimize()
     unresolved: dict[str, tuple[str, str]] = {}
     filt = comp.constraint_filter({ch for e in g.lexicon for ch in e.lemma})
     for blocked, entries in session.groups(g.lexicon).items():
@@ -159,11 +192,12 @@ def cascade_checks(session: DebugSession) -> list[Finding]:
                 applies[rule.name] = True
             language = step.project("output").rmepsilon().optimize()
         if arch_codes:
+            kept = language if unfiltered is None else pynini.compose(language, unfiltered).connect()
             for code in arch_codes:
                 if s.name(code) in unresolved:
                     continue
                 has = (comp.sigma_star + acc(code) + comp.sigma_star).optimize()
-                left = pynini.compose(language, has).connect()
+                left = pynini.compose(kept, has).connect()
                 if not is_empty(left):
                     unresolved[s.name(code)] = _witness(session, machine, blocked, pynini.shortestpath(left))
     out = []
@@ -177,8 +211,22 @@ def cascade_checks(session: DebugSession) -> list[Finding]:
                     rule.pos.line,
                     f"rule {rule.name} changes no underlying form the lexicon and slot graph can feed it (after the rules before it)",
                     {"text": rule.text},
+                    rule.pos.file,
                 )
             )
+    if filters:
+        names = ", ".join(s.name(code) for code in filters)
+        out.append(
+            Finding(
+                "filter-archiphoneme",
+                "note",
+                names,
+                0,
+                f"rules write {names} and no obligatory rule rewrites it: a path that keeps one has no surface form "
+                "(a filter; such paths are left out of the check for unresolved archiphonemes)",
+                {"archiphonemes": [s.name(code) for code in filters]},
+            )
+        )
     for name, (analysis, output) in unresolved.items():
         out.append(
             Finding(
@@ -212,7 +260,15 @@ def _contained(a: pynini.Fst, b: pynini.Fst) -> bool:
     return is_empty(pynini.difference(a.copy().rmepsilon(), b).connect())
 
 
+def _symbols(fst: pynini.Fst) -> set[int]:
+    """The labels an acceptor's arcs read (a pattern like ``.*`` reads the whole alphabet)."""
+    return {arc.ilabel for state in fst.states() for arc in fst.arcs(state) if arc.ilabel}
+
+
 def shadowed_rules(session: DebugSession) -> list[Finding]:
+    """Later rules whose every application an earlier obligatory rule takes first: the later target,
+    left and right contexts contained in the earlier ones, the earlier replacement not giving the target
+    back, and no rule from the earlier one to the later one writing a symbol the later one reads."""
     g = session.grammar
     comp = session.compiler
     sigma_star = comp.sigma_star
@@ -233,14 +289,33 @@ def shadowed_rules(session: DebugSession) -> list[Finding]:
     def replacement(r: m.Rule) -> pynini.Fst:
         return comp.rule_tau(r).copy().project("output").optimize()
 
+    def reads(r: m.Rule) -> set[int]:
+        """The symbols the rule's target and contexts read."""
+        return set().union(*(_symbols(comp.expr(e)) for e in (r.target, r.left, r.right) if e is not None))
+
+    written: dict[str, set[int]] = {}
+
+    def writes(r: m.Rule) -> set[int]:
+        if r.name not in written:
+            written[r.name] = _symbols(replacement(r))
+        return written[r.name]
+
     out = []
     for j, later in enumerate(g.rules):
-        for earlier in g.rules[:j]:
+        try:
+            read = reads(later)
+        except (UserError, KeyError):
+            continue
+        for i, earlier in enumerate(g.rules[:j]):
             if earlier.optional or earlier.direction != later.direction:
                 continue
             if not blockers[earlier.name] <= blockers[later.name]:
                 continue
             try:
+                # the earlier rule and those between the two may write what the later one reads: a target
+                # or context made after the earlier rule looked (yap-DIr-<CS>: a second causative)
+                if any(writes(r) & read for r in g.rules[i:j]):
+                    continue
                 t_later, t_earlier = target(later), target(earlier)
                 if is_empty(t_later) or not _contained(t_later, t_earlier):
                     continue
@@ -259,6 +334,7 @@ def shadowed_rules(session: DebugSession) -> list[Finding]:
                     f"rule {later.name} is shadowed by rule {earlier.name} (line {earlier.pos.line}): every target it could rewrite, "
                     f"{earlier.name} rewrites first",
                     {"by": earlier.name, "by_line": earlier.pos.line},
+                    later.pos.file,
                 )
             )
             break
@@ -313,7 +389,7 @@ def lint(lang: Any, words: list[str] | None = None, top: int = 10) -> LintReport
 def render_lint(report: LintReport) -> str:
     out = []
     for f in report.findings:
-        where = f"{report.path}:{f.line}" if f.line else report.path
+        where = f"{f.file or report.path}:{f.line}" if f.line else report.path
         out.append(f"{where}: {f.severity}: [{f.kind}] {f.message}")
     if not report.findings:
         out.append(f"{report.path}: no findings")
