@@ -148,6 +148,9 @@ def _changes(fst: pynini.Fst) -> bool:
     return False
 
 
+OPTIMIZE_GROWTH = 1.5  # the cascade check optimizes the word list again when it has grown by this factor
+
+
 def cascade_checks(session: DebugSession) -> list[Finding]:
     """Rules that never apply and archiphonemes left unresolved, over the whole lexicon × slot graph."""
     g = session.grammar
@@ -183,6 +186,7 @@ def cascade_checks(session: DebugSession) -> list[Finding]:
         if filt is not None:
             machine = pynini.compose(filt, machine)
         language = machine.copy().project("output").rmepsilon().optimize()
+        optimized = language.num_states()
         for rule in g.rules:
             if rule.name in blocked:
                 continue
@@ -190,7 +194,12 @@ def cascade_checks(session: DebugSession) -> list[Finding]:
             step = pynini.compose(language, comp.rule_fst(rule)).connect()
             if not applies[rule.name] and _changes(step):
                 applies[rule.name] = True
-            language = step.project("output").rmepsilon().optimize()
+            language = step.project("output").rmepsilon()
+            # optimizing (determinize, minimize) the whole word list after every rule cost 20 x the
+            # composition and seldom made it smaller: only when it has grown by half
+            if language.num_states() > OPTIMIZE_GROWTH * optimized:
+                language = language.optimize()
+                optimized = language.num_states()
         if arch_codes:
             kept = language if unfiltered is None else pynini.compose(language, unfiltered).connect()
             for code in arch_codes:
