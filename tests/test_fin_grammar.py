@@ -1284,3 +1284,42 @@ def test_consonant_final_loans_of_type_6_keep_their_bare_nominative(fin: morphfs
     assert [f.form for f in fin.generate("laser", "N;SG;GEN")] == ["laserin"]
     assert fin.analyze("laseria")[0].text == "laser N;SG;PRT"
     assert fin.analyze("laservalo") and not fin.analyze("laserivalo")
+
+
+def _readings(fin: morphfst.Language, word: str) -> set[str]:
+    return {a.text for a in fin.analyze(word)}
+
+
+def test_abbreviations_and_numbers_take_the_illative_of_their_spoken_form(fin: morphfst.Language) -> None:
+    # Finnish spelling of abbreviations and numbers with a colon (common practice, from memory): the
+    # ending is that of the word as said, a letter's name (EU 'ee-uu': EU:hun, YK 'yy-koo': YK:hon,
+    # NHL 'än-hoo-äl': NHL:ään) or the numeral (5 viisi: 5:een, 4 neljä: 4:ään, 100 sata: 100:aan)
+    for word, analysis in [
+        ("EU:hun", "EU PROPN;SG;IN+ALL"),
+        ("YK:hon", "YK PROPN;SG;IN+ALL"),
+        ("BBC:hen", "BBC PROPN;SG;IN+ALL"),
+        ("USA:han", "USA PROPN;SG;IN+ALL"),
+        ("NHL:ään", "NHL PROPN;SG;IN+ALL"),
+        ("TV:hen", "TV N;SG;IN+ALL"),
+        ("5:een", "5 NUM;SG;IN+ALL"),
+        ("4:ään", "4 NUM;SG;IN+ALL"),
+        ("8:aan", "8 NUM;SG;IN+ALL"),
+        ("10:een", "10 NUM;SG;IN+ALL"),
+        ("14:ään", "14 NUM;SG;IN+ALL"),
+        ("100:aan", "100 NUM;SG;IN+ALL"),
+        ("2000:een", "2000 NUM;SG;IN+ALL"),
+    ]:
+        assert analysis in _readings(fin, word), word
+    for wrong in ["EU:hen", "EU:uun", "YK:hyn", "NHL:hen", "5:ään", "4:een", "8:een", "100:een"]:
+        assert not any(a.features[-1:] == ("IN+ALL",) for a in fin.analyze(wrong)), wrong
+    assert len(fin.generate("EU", "PROPN;SG;IN+ALL")) == 1
+
+
+def test_an_abbreviations_endings_follow_its_last_letters_name(fin: morphfst.Language) -> None:
+    # Finnish vowel harmony of abbreviations (common practice, from memory): as in a compound, the
+    # last part decides: YK 'yy-koo' and EK 'ee-koo' take back endings, NHL 'än-hoo-äl' front ones
+    assert "YK PROPN;SG;IN+ESS" in _readings(fin, "YK:ssa")
+    assert "EK PROPN;SG;IN+ESS" in _readings(fin, "EK:ssa")
+    assert "NHL PROPN;SG;IN+ESS" in _readings(fin, "NHL:ssä")
+    assert "EU PROPN;SG;IN+ESS" in _readings(fin, "EU:ssa")
+    assert not fin.analyze("YK:ssä") and not fin.analyze("NHL:ssa") and not fin.analyze("EU:ssä")
