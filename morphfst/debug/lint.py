@@ -4,8 +4,8 @@ Checks (validation already rejects undeclared names and unreachable slots):
 
 - ``dead-end-slot``: a slot from which no path reaches the end of a word;
 - ``unused-class``: a class no lexicon entry uses (an open class, whose pattern spells its stems, needs none);
-- ``duplicate-affix``: two affixes of one slot with the same form, features, part of speech and
-  continuation;
+- ``duplicate-affix``: two affixes of one slot with the same form, features, part of speech,
+  continuation and name;
 - ``rule-never-applies``: a rule that changes no string the lexicon × slot graph can feed it (the
   output projection of the machine is pushed through the cascade rule by rule, per group of entries
   with the same blocked rules);
@@ -111,13 +111,14 @@ def unused_classes(g: m.Grammar) -> list[Finding]:
 
 
 def duplicate_affixes(g: m.Grammar) -> list[Finding]:
-    """Two affixes of a slot with the same form, features, part of speech and continuation (the same
-    affix routed to other slots, often at another weight, is a way of writing the graph, not a repeat)."""
+    """Two affixes of a slot with the same form, features, part of speech, continuation and name (the
+    same affix routed to other slots, often at another weight, or named for a constraint, is a way of
+    writing the graph, not a repeat)."""
     out = []
     for slot in g.slots.values():
-        seen: dict[tuple[str, tuple[str, ...], str | None, tuple[str, ...] | None], m.Affix] = {}
+        seen: dict[tuple[str, tuple[str, ...], str | None, tuple[str, ...] | None, str | None], m.Affix] = {}
         for a in slot.affixes:
-            key = (a.form_text, tuple(a.features), a.new_pos, tuple(a.next) if a.next is not None else None)
+            key = (a.form_text, tuple(a.features), a.new_pos, tuple(a.next) if a.next is not None else None, a.name)
             if key in seen:
                 first = seen[key]
                 out.append(
