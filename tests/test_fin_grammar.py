@@ -1323,3 +1323,42 @@ def test_an_abbreviations_endings_follow_its_last_letters_name(fin: morphfst.Lan
     assert "NHL PROPN;SG;IN+ESS" in _readings(fin, "NHL:ssä")
     assert "EU PROPN;SG;IN+ESS" in _readings(fin, "EU:ssa")
     assert not fin.analyze("YK:ssä") and not fin.analyze("NHL:ssa") and not fin.analyze("EU:ssä")
+
+
+def test_kolme_has_the_plural_stem_kolmi(fin: morphfst.Language) -> None:
+    # Karlsson (3rd ed., 2018), the numerals (from memory): kolme declines on kolme- in the singular
+    # (kolmen, kolmea, kolmeen) and on kolmi- in the plural (kolmia, kolmien, kolmissa, kolmin), and
+    # its -ittAin adverb is kolmittain
+    for features, form in [
+        ("NUM;SG;GEN", "kolmen"),
+        ("NUM;SG;PRT", "kolmea"),
+        ("NUM;SG;IN+ALL", "kolmeen"),
+        ("NUM;PL;NOM", "kolmet"),
+        ("NUM;PL;PRT", "kolmia"),
+        ("NUM;PL;GEN", "kolmien"),
+        ("NUM;PL;IN+ESS", "kolmissa"),
+        ("NUM;PL;IN+ALL", "kolmiin"),
+        ("NUM;PL;INS", "kolmin"),
+        ("NUM;DISTR;ADV", "kolmittain"),
+    ]:
+        assert [f.form for f in fin.generate("kolme", features)] == [form], features
+    assert fin.analyze("kolmissa")[0].text == "kolme NUM;PL;IN+ESS"
+    # not the plural of type 8 (nalle: nalleja), which kolme does not follow (from memory)
+    for word in ["kolmeja", "kolmeissa", "kolmeiden", "kolmeittain"]:
+        assert fin.analyze(word) == [], word
+    # the other cardinals keep their plurals (from memory)
+    for word, lemma in [
+        ("yksiä", "yksi"),
+        ("kaksia", "kaksi"),
+        ("neljiä", "neljä"),
+        ("viisiä", "viisi"),
+        ("kuusia", "kuusi"),
+        ("seitsemiä", "seitsemän"),
+        ("kahdeksia", "kahdeksan"),
+        ("yhdeksiä", "yhdeksän"),
+        ("kymmeniä", "kymmenen"),
+        ("satoja", "sata"),
+        ("tuhansia", "tuhat"),
+        ("miljoonia", "miljoona"),
+    ]:
+        assert fin.analyze(word)[0].text == f"{lemma} NUM;PL;PRT", word
