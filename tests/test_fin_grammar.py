@@ -1362,3 +1362,12 @@ def test_kolme_has_the_plural_stem_kolmi(fin: morphfst.Language) -> None:
         ("miljoonia", "miljoona"),
     ]:
         assert fin.analyze(word)[0].text == f"{lemma} NUM;PL;PRT", word
+
+
+def test_nouns_in_uva_have_the_plural_in_ia(fin: morphfst.Language) -> None:
+    # the Finnish standard word list (from memory): untuva and suortuva are type 10 like kuva, with the
+    # plural untuvia, suortuvia; not type 12 (*untuvoita)
+    assert [f.form for f in fin.generate("untuva", "N;PL;PRT")] == ["untuvia"]
+    assert [f.form for f in fin.generate("untuva", "N;PL;GEN")] == ["untuvien"]
+    assert fin.analyze("suortuvia")[0].text == "suortuva N;PL;PRT"
+    assert fin.analyze("untuvoita") == []
