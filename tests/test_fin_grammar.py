@@ -1371,3 +1371,16 @@ def test_nouns_in_uva_have_the_plural_in_ia(fin: morphfst.Language) -> None:
     assert [f.form for f in fin.generate("untuva", "N;PL;GEN")] == ["untuvien"]
     assert fin.analyze("suortuvia")[0].text == "suortuva N;PL;PRT"
     assert fin.analyze("untuvoita") == []
+
+
+def test_no_emphatic_pa_on_a_participle(fin: morphfst.Language) -> None:
+    # -pA emphasizes a finite verb, an imperative or a nominal (tulepa, onpa, kylläpä), not a
+    # participle (from memory): onkivapa is the compound onki + vapa 'fishing rod'
+    assert readings_of(fin, "onkivapa")[0] == ("onkivapa N;SG;NOM", "onki-vapa")
+    assert fin.analyze("olevapa") == []
+    assert fin.analyze("onpa")[0].text == "olla V;IND;PRS;3;SG;PA"
+    assert fin.analyze("kylläpä")[0].text == "kyllä ADV;PA"
+
+
+def readings_of(fin: morphfst.Language, word: str) -> list[tuple[str, str]]:
+    return [(a.text, a.segmentation) for a in fin.analyze(word)]
