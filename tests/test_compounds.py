@@ -279,3 +279,47 @@ def test_agree_puts_every_part_in_the_same_form(tmp_path: Path) -> None:
     # without agree, the last part takes any form
     plain = toy(tmp_path / "plain")
     assert [a.text for a in plain.analyze("peltotien")] == ["peltotie N;SG;GEN"]
+
+
+def test_lastmin_bounds_the_last_part(tmp_path: Path) -> None:
+    """``lastmin``: the last part's lemma has at least that many letters (the first parts keep ``min``)."""
+    lang = toy(tmp_path, BLOCK.replace("  weight 0.5\n", "  weight 0.5\n  lastmin 4\n"))
+    assert lang.meta["compounds"][0]["lastmin"] == 4
+    assert lang.analyze("kalatie") == []  # tie has three letters
+    assert [a.text for a in lang.analyze("tiekala")] == ["tiekala N;SG;NOM"]
+    assert [a.text for a in lang.analyze("tiepelto")] == ["tiepelto N;SG;NOM"]
+
+
+def test_order_of_groups(tmp_path: Path) -> None:
+    """``group`` lines name sets of parts of speech or classes, and ``order`` is a regular expression
+    of group names that the parts, the last one too, must follow."""
+    block = BLOCK.replace(
+        "  weight 0.5\n", '  weight 0.5\n  group BIG noun\n  group SMALL short\n  order "BIG BIG? SMALL | BIG BIG"\n'
+    ).replace("min 3", "min 1")
+    g = parse_grammar_text(block)
+    assert g.compounds[0].groups == {"BIG": ["noun"], "SMALL": ["short"]}
+    lang = toy(tmp_path, block)
+    assert [a.text for a in lang.analyze("kalauu")] == ["kalauu N;SG;NOM"]
+    assert [a.text for a in lang.analyze("talokalauu")] == ["talokalauu N;SG;NOM"]
+    assert [a.text for a in lang.analyze("talokala")] == ["talokala N;SG;NOM"]
+    assert lang.analyze("uukala") == []  # SMALL only last
+    assert lang.analyze("kalauuuu") == []  # not two SMALL
+    assert lang.analyze("talokalapelto") == []  # BIG BIG BIG is not in the order
+    for word in ["kalauu", "talokalauu"]:
+        walked, composed = lang.analyze(word), lang.analyze_composed(word)
+        assert [(a.text, a.segmentation) for a in walked] == [(a.text, a.segmentation) for a in composed]
+
+
+@pytest.mark.parametrize(
+    ("block", "message"),
+    [
+        ('compound {\n  first N\n  forms SG\n  last N\n  group A noun\n  order "A B"\n}\n', "'B' is not a group"),
+        ('compound {\n  first N\n  forms SG\n  last N\n  group A nouns\n  order "A A"\n}\n', "'nouns' in group 'A'"),
+        ("compound {\n  first N\n  forms SG\n  last N\n  group A noun\n}\n", "groups but no 'order'"),
+        ('compound {\n  first N\n  forms SG\n  last N\n  group A noun\n  order "(A"\n}\n', "malformed"),
+        ("compound {\n  first N\n  forms SG\n  last N\n  lastmin 0\n}\n", "lastmin 0 is not a whole number"),
+    ],
+)
+def test_order_and_lastmin_errors(tmp_path: Path, block: str, message: str) -> None:
+    err = error_of(tmp_path, block)
+    assert message in err.message

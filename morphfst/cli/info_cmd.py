@@ -50,6 +50,10 @@ def run(args: argparse.Namespace) -> int:
                 f"  {' '.join(c['first'])} in {forms} + ... + {' '.join(c['last'])}: at most {c['parts']} parts, "
                 f"parts of {c['min']}+ letters, weight {c['weight']:g} per seam (line {c['line']})\n"
             )
+            if c.get("lastmin", 1) > 1:
+                w(f"    the last part's lemma of {c['lastmin']}+ letters\n")
+            if c.get("order"):
+                w(f"    parts in the order {c['order']!r} of the groups {', '.join(sorted(c['groups']))}\n")
     if args.slots:
         w("slots:\n")
         for name, slot in meta["slots"].items():

@@ -15,6 +15,8 @@ tropical semiring; lower is better.
 
 from __future__ import annotations
 
+import functools
+import itertools
 import time
 from collections import defaultdict
 from collections.abc import Callable
@@ -405,25 +407,55 @@ class Compiler:
         letter = chars(self.letter_codes)
         drop_plus = cross(self.plus, "")
         keep = union([letter, drop_plus])
+        pos_codes = [c for c, k in s.kinds.items() if k == "pos"]
         found = []
         for c in self.g.compounds:
             head = self._compound_heads(c.first, entries, lemma_codes)
             last_head = self._compound_heads(c.last, entries, lemma_codes)
+            if c.last_min > 1:  # the last part's lemma has at least lastmin letters
+                longer = (chars(lemma_codes).closure(c.last_min) + chars(pos_codes)).optimize()
+                last_head = pynini.intersect(last_head, longer).optimize()
             surface = (drop_plus.closure() + letter).closure(c.min_letters, c.min_letters) + keep.closure()
             surface = (surface + cross("", seam) + pynini.accep("", weight=base + c.weight)).optimize()
             bundles = [_bundle_tail([s.code(f"feature:{f}") for f in b], affix_codes) for b in c.forms]
+            # the sequences of groups that the order accepts, two to 'parts' parts (none: any order)
+            sequences: list[tuple[str, ...]] = []
+            if c.order:
+                rx = c.order_regex()
+                sequences = [
+                    seq
+                    for n in range(2, c.parts + 1)
+                    for seq in itertools.product(sorted(c.groups), repeat=n)
+                    if rx.fullmatch("".join(f"{g} " for g in seq))
+                ]
+                group_heads = {g: self._compound_heads(names, entries, lemma_codes) for g, names in c.groups.items()}
             # with agree, one machine per bundle, shared by every part; else one for them all
             for group in [[b] for b in bundles] if c.agree else [bundles]:
                 tails = union(group).optimize()
-                to_internal = head + pynini.cross(acc(seam), tails)  # new analysis → analysis of bounded
-                part = pynini.compose(pynini.compose(to_internal.optimize(), bounded), surface).optimize()
-                if part.start() == NO_STATE_ID or part.num_states() == 0:
-                    continue
                 last_tail = tails if c.agree else chars(tail_codes).closure()
-                last = pynini.compose((last_head + last_tail).optimize(), bounded).connect()
-                if last.start() == NO_STATE_ID or last.num_states() == 0:
+
+                part_of = functools.partial(_compound_part, bounded=bounded, surface=surface, seam=seam, tails=tails)
+                last_of = functools.partial(_compound_last, bounded=bounded, tail=last_tail)
+                if not c.order:
+                    part, last = part_of(head), last_of(last_head)
+                    if part is not None and last is not None:
+                        found.append(part.closure(1, c.parts - 1) + last)
                     continue
-                found.append(part.closure(1, c.parts - 1) + last)
+                # in order: each place a part of its group (and of 'first', or 'last' for the last part)
+                parts: dict[str, pynini.Fst | None] = {}
+                lasts: dict[str, pynini.Fst | None] = {}
+                for seq in sequences:
+                    for g in seq[:-1]:
+                        if g not in parts:
+                            parts[g] = part_of(pynini.intersect(group_heads[g], head).optimize())
+                    if seq[-1] not in lasts:
+                        lasts[seq[-1]] = last_of(pynini.intersect(group_heads[seq[-1]], last_head).optimize())
+                    pieces = [parts[g] for g in seq[:-1]] + [lasts[seq[-1]]]
+                    if all(p is not None for p in pieces):
+                        fst = pieces[0].copy()  # type: ignore[union-attr]
+                        for p in pieces[1:]:
+                            fst.concat(p)  # type: ignore[arg-type]
+                        found.append(fst)
         if not found:
             return None
         return union(found)  # optimized together with the lexicon words in derive
@@ -548,6 +580,22 @@ def _determinize_minimize(fst: pynini.Fst) -> pynini.Fst:
     """Epsilon removal, determinization and minimization (what ``optimize`` does, without its extra
     passes, which cost several times as much on a large unweighted acceptor)."""
     return pynini.determinize(fst.rmepsilon()).minimize()
+
+
+def _compound_part(head: pynini.Fst, bounded: pynini.Fst, surface: pynini.Fst, seam: str, tails: pynini.Fst) -> pynini.Fst | None:
+    """A non-last part of a compound: the words of ``bounded`` whose lemma and part of speech ``head``
+    accepts, in a form of ``tails``, the analysis rewritten to lemma, part of speech and seam and the
+    surface through ``surface`` (``None`` when there is no such word)."""
+    to_internal = head + pynini.cross(acc(seam), tails)  # new analysis → analysis of bounded
+    fst = pynini.compose(pynini.compose(to_internal.optimize(), bounded), surface).optimize()
+    return None if fst.start() == NO_STATE_ID or fst.num_states() == 0 else fst
+
+
+def _compound_last(head: pynini.Fst, bounded: pynini.Fst, tail: pynini.Fst) -> pynini.Fst | None:
+    """The last part of a compound: the words of ``bounded`` whose lemma and part of speech ``head``
+    accepts, with features and affixes of ``tail`` (``None`` when there is no such word)."""
+    fst = pynini.compose((head + tail).optimize(), bounded).connect()
+    return None if fst.start() == NO_STATE_ID or fst.num_states() == 0 else fst
 
 
 def _bundle_tail(features: list[str], affix_codes: list[str]) -> pynini.Fst:

@@ -79,6 +79,9 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
                 "min": c.min_letters,
                 "weight": c.weight,
                 "agree": c.agree,
+                "lastmin": c.last_min,
+                "groups": c.groups,
+                "order": c.order,
                 "file": c.pos.file,
                 "line": c.pos.line,
             }

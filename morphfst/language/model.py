@@ -7,6 +7,7 @@ later errors and traces can point at the source line.
 
 from __future__ import annotations
 
+import re
 from dataclasses import dataclass, field
 from typing import Literal
 
@@ -199,6 +200,29 @@ class Compound:
     pos: Position
     lines: dict[str, Position] = field(default_factory=dict)  # statement keyword -> where it stands
     agree: bool = False
+    # the fewest letters of the last part's lemma (a bound first part that joins only longer words)
+    last_min: int = 1
+    # named groups of parts of speech or classes, and the order of the parts over them: a regular
+    # expression of group names with ( ) | ? * + (every part, the last one too, is of the group its
+    # place names, besides being of 'first' or 'last'); empty: any order
+    groups: dict[str, list[str]] = field(default_factory=dict)
+    order: str = ""
+
+    def order_regex(self) -> re.Pattern[str]:
+        """The ``order`` expression as a regular expression over the group names of a compound's parts,
+        each followed by one space (``"H T U "``); a ``ValueError`` names what is wrong with it."""
+        out = []
+        for tok in re.findall(r"[A-Za-z_][A-Za-z0-9_\-]*|\S", self.order):
+            if tok in "()|?*+":
+                out.append("(?:" if tok == "(" else tok)
+            elif tok in self.groups:
+                out.append(f"(?:{re.escape(tok)} )")
+            else:
+                raise ValueError(f"{tok!r} is not a group of the block")
+        try:
+            return re.compile("".join(out))
+        except re.error as exc:
+            raise ValueError(f"the expression is malformed ({exc.msg})") from None
 
 
 @dataclass

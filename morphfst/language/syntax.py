@@ -417,6 +417,8 @@ class _Builder:
                 continue
             key = str(line.data)[2:]
             pos = self.pos_of(line)
+            if key == "group":  # one line per group: the group's name makes the statement's key
+                key = f"group {line.children[0]}"
             if key in lines:
                 raise UserError(
                     f"compound: '{key}' given twice",
@@ -432,6 +434,13 @@ class _Builder:
                     lines[f"{key} {t}"] = self.pos_of(t)
             elif key == "agree":
                 values[key] = True
+            elif key.startswith("group "):
+                names = [kid.children[0] for kid in line.children[1:]]
+                values.setdefault("groups", {})[key[6:]] = [str(t) for t in names]
+                for t in names:
+                    lines[f"{key} {t}"] = self.pos_of(t)
+            elif key == "order":
+                values[key] = str(line.children[0])[1:-1]
             elif key == "forms":
                 bundles = []
                 for bundle in line.children:
@@ -448,7 +457,7 @@ class _Builder:
                 raise UserError(
                     f"compound: no '{key}' line",
                     block,
-                    hint="a compound block needs 'first', 'forms' and 'last' lines (parts, min, weight and agree are optional)",
+                    hint="a compound block needs 'first', 'forms' and 'last' lines (parts, min, lastmin, weight, agree, group and order are optional)",
                     source_line=self._raw_line(block),
                 )
         self.grammar.compounds.append(
@@ -462,6 +471,9 @@ class _Builder:
                 block,
                 lines,
                 values.get("agree", False),
+                values.get("lastmin", 1),
+                values.get("groups", {}),
+                values.get("order", ""),
             )
         )
 
@@ -488,7 +500,10 @@ class _Builder:
                 source_line=self._raw_line(pos),
             )
         if not value.is_integer() or value < low:
-            what = "the most parts a compound word may have" if key == "parts" else "the fewest letters of a non-last part"
+            what = {
+                "parts": "the most parts a compound word may have",
+                "lastmin": "the fewest letters of the last part's lemma",
+            }.get(key, "the fewest letters of a non-last part")
             raise UserError(
                 f"compound: {key} {text} is not a whole number of at least {low}",
                 pos,

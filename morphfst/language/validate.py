@@ -259,6 +259,28 @@ def _check_compounds(g: m.Grammar) -> None:
                         _near(name, sorted(pos_tags | set(g.classes)))
                         or "name parts of speech of the 'pos' dimension or classes",
                     )
+        for group, names in c.groups.items():
+            for name in names:
+                if name not in pos_tags and name not in g.classes:
+                    raise _err(
+                        f"compound: {name!r} in group {group!r} is neither a part of speech nor a class",
+                        c.lines.get(f"group {group} {name}", c.lines.get(f"group {group}", c.pos)),
+                        _near(name, sorted(pos_tags | set(g.classes)))
+                        or "name parts of speech of the 'pos' dimension or classes",
+                    )
+        if c.groups and not c.order:
+            raise _err(
+                "compound: groups but no 'order' line", c.pos, "an 'order' line says in which order the groups' parts stand"
+            )
+        if c.order:
+            try:
+                c.order_regex()
+            except ValueError as exc:
+                raise _err(
+                    f"compound: order {c.order!r}: {exc}",
+                    c.lines.get("order", c.pos),
+                    "an order is a regular expression of the block's group names with ( ) | ? * +",
+                ) from None
         for bundle in c.forms:
             for label in bundle:
                 if label not in features:
