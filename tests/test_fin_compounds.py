@@ -139,6 +139,48 @@ def test_compound_ordinals(fin: morphfst.Language) -> None:
         assert fin.analyze(word) == [], word
 
 
+def test_compound_numerals_go_from_the_largest_part(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, the numerals (from memory): the parts of a number written
+    # as one word go from the thousands to the units, cardinals with cardinals and ordinals with
+    # ordinals, each part in the case of the whole
+    for word, text in [
+        ("sataviisikymmentä", "sataviisikymmentä NUM;SG;NOM"),
+        ("kolmetuhattaneljäsataa", "kolmetuhattaneljäsataa NUM;SG;NOM"),
+        ("kaksituhattakaksikymmentäneljä", "kaksituhattakaksikymmentäneljä NUM;SG;NOM"),
+        ("kaksisataaviisikymmentätuhatta", "kaksisataaviisikymmentätuhatta NUM;SG;NOM"),
+        ("tuhatyksi", "tuhatyksi NUM;SG;NOM"),
+        ("satakymmenen", "satakymmenen NUM;SG;NOM"),
+        ("kahdennessakymmenennessäkolmannessa", "kahdeskymmeneskolmas NUM;SG;IN+ESS"),
+        ("kolmassadas", "kolmassadas NUM;SG;NOM"),
+        ("sadaskahdeskymmenes", "sadaskahdeskymmenes NUM;SG;NOM"),
+        # an ordinal before a round cardinal: the range below it (kolmattakymmentä 'twenty odd')
+        ("kolmannellesadalle", "kolmassata NUM;SG;AT+ALL"),
+    ]:
+        assert readings(fin, word)[0][0] == text, word
+    # a unit before another part, parts out of order, a part twice, an ordinal with a cardinal
+    # (common practice): no numeral
+    for word in [
+        "kolmeneljä",
+        "kymmenentuhat",
+        "kaksikymmenenkolme",
+        "toinenkymmenes",
+        "kaksikymmentäkolmekymmentä",
+        "kaksisataakolmesataa",
+        "kaksikymmentäkymmenentuhatta",
+        "satakolmas",
+    ]:
+        assert fin.analyze(word) == [], word
+
+
+def test_both_parts_of_a_compound_ordinal_are_split(fin: morphfst.Language) -> None:
+    # the second part of kolmaskymmenes is an ordinal in the case of the whole, segmented like the first
+    # (Karlsson, numerals, from memory)
+    assert readings(fin, "kolmannessakymmenennessä")[0] == ("kolmaskymmenes NUM;SG;IN+ESS", "kolmanne-ssa-kymmenenne-ssä")
+    assert readings(fin, "kahdennenkymmenennen")[0] == ("kahdeskymmenes NUM;SG;GEN", "kahdenne-n-kymmenenne-n")
+    assert readings(fin, "kahdettakymmenettä")[0] == ("kahdeskymmenes NUM;SG;PRT", "kahdet-ta-kymmenet-tä")
+    assert readings(fin, "kahdeskymmenes")[0] == ("kahdeskymmenes NUM;SG;NOM", "kahdes-kymmenes")
+
+
 def test_a_multiplier_before_tuhat(fin: morphfst.Language) -> None:
     # a multiplier before tuhat is written as one word, both parts in the case of the whole and tuhat
     # a partitive in the nominative (common practice): kymmenentuhatta, kahdessakymmenessätuhannessa
