@@ -1384,3 +1384,14 @@ def test_no_emphatic_pa_on_a_participle(fin: morphfst.Language) -> None:
 
 def readings_of(fin: morphfst.Language, word: str) -> list[tuple[str, str]]:
     return [(a.text, a.segmentation) for a in fin.analyze(word)]
+
+
+def test_murto_is_a_bound_first_part_of_longer_words(fin: morphfst.Language) -> None:
+    # murto- 'break' stands before a noun (murtoviiva 'slash', murtovaras 'burglar', murtovesi
+    # 'brackish water'; common practice), but a short last part is not taken: murtoluun is a misspelling
+    # of murtoluvun (the WRONG list), not murto + luu
+    assert readings_of(fin, "murtoviiva")[0] == ("murtoviiva N;SG;NOM", "murto-viiva")
+    assert readings_of(fin, "murtovarkaudet")[0] == ("murtovarkaus N;PL;NOM", "murto-varkaude-t")
+    assert readings_of(fin, "murtovedessä")[0] == ("murtovesi N;SG;IN+ESS", "murto-vede-ssä")
+    assert fin.analyze("murtoluvun")[0].text == "murtoluku N;SG;GEN"
+    assert fin.analyze("murtoluun") == []
