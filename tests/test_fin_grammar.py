@@ -1395,3 +1395,13 @@ def test_murto_is_a_bound_first_part_of_longer_words(fin: morphfst.Language) -> 
     assert readings_of(fin, "murtovedessä")[0] == ("murtovesi N;SG;IN+ESS", "murto-vede-ssä")
     assert fin.analyze("murtoluvun")[0].text == "murtoluku N;SG;GEN"
     assert fin.analyze("murtoluun") == []
+
+
+def test_yksi_and_kaksi_have_no_consonant_stem_plural_genitive(fin: morphfst.Language) -> None:
+    # the standard word list's type 31 (from memory): the plural genitive is yksien, kaksien only,
+    # not the -ten of the consonant stem that types 27 and 32 have (kätten, kymmenten)
+    assert [f.form for f in fin.generate("kaksi", "NUM;PL;GEN")] == ["kaksien"]
+    assert [f.form for f in fin.generate("yksi", "NUM;PL;GEN")] == ["yksien"]
+    assert fin.analyze("kahten") == [] and fin.analyze("yhten") == []
+    assert [f.form for f in fin.generate("kymmenen", "NUM;PL;GEN")] == ["kymmenien", "kymmenten"]
+
