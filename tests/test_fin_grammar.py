@@ -1405,3 +1405,17 @@ def test_yksi_and_kaksi_have_no_consonant_stem_plural_genitive(fin: morphfst.Lan
     assert fin.analyze("kahten") == [] and fin.analyze("yhten") == []
     assert [f.form for f in fin.generate("kymmenen", "NUM;PL;GEN")] == ["kymmenien", "kymmenten"]
 
+
+def test_front_endings_without_the_flag_after_a_front_last_part(fin: morphfst.Language) -> None:
+    # vowel harmony follows the last part of a compound (Karlsson, vowel harmony, from memory): a
+    # front vowel after the stem's last back vowel gives front endings without the front_harmony
+    # flag, in the plural too where the ä drops (lentokentissä, isoisiä, maaperiä)
+    flagged = {e["lemma"] for e in fin.lexicon if "front_harmony" in (e.get("flags") or "")}
+    assert not {"lentokenttä", "isoisä", "maaperä", "sauvakävellä"} & flagged
+    assert [f.form for f in fin.generate("lentokenttä", "N;PL;IN+ESS")] == ["lentokentissä"]
+    assert [f.form for f in fin.generate("isoisä", "N;PL;PRT")] == ["isoisiä"]
+    assert [f.form for f in fin.generate("maaperä", "N;SG;IN+ESS")] == ["maaperässä"]
+    assert [f.form for f in fin.generate("sauvakävellä", "V;IND;PST;3;SG")] == ["sauvakäveli"]
+    # a last part with only i and e after a back vowel still needs the flag (moottoritie: moottoritiellä)
+    assert "moottoritie" in flagged
+    assert [f.form for f in fin.generate("moottoritie", "N;SG;AT+ESS")] == ["moottoritiellä"]
