@@ -1298,3 +1298,45 @@ def test_stacked_copulas_are_read_at_a_cost_and_never_generated(tur: morphfst.La
     assert tur.analyze("gelmiştim")[0].weight == tur.analyze("gelmişim")[0].weight
     # a stem that ends in -mış is not a stacked suffix (kamışmış 'it was a reed')
     assert tur.analyze("kamışmış")[0].weight < tur.analyze("kamış")[0].weight + 3.0
+
+
+def test_a_numeral_in_a_case_ranks_below_a_noun_spelt_alike(tur: morphfst.Language) -> None:
+    # common practice: a numeral mostly stands bare before a noun (yüz kişi); yüz 'face' in a case
+    # or with a possessive is far commoner than the numeral so inflected (bu yüzden 'for this reason',
+    # yüz yüze 'face to face', yüzünü yıkadı 'washed his face')
+    for word, best in [
+        ("yüzden", "yüz N;SG;ABL"),
+        ("yüze", "yüz N;SG;DAT"),
+        ("yüzünü", "yüz N;SG;PSS3S;ACC"),
+        ("yüzüne", "yüz N;SG;PSS3S;DAT"),
+        ("yüzleri", "yüz N;PL;PSS3S;NOM"),
+        # the bare numeral, -lArcA 'hundreds of' and the ordinal stay the numeral's (G&K ch. 15, from memory)
+        ("yüz", "yüz NUM;SG;NOM"),
+        ("yüzlerce", "yüz NUM;PL;EQTV"),
+        ("binlerce", "bin NUM;PL;EQTV"),
+        ("onlarca", "on NUM;PL;EQTV"),
+        ("yüzüncü", "yüz NUM;ORD;ADJ;SG;NOM"),
+        ("yüzde", "yüzde N;SG;NOM"),
+        # numerals that no noun spells keep their case forms (G&K ch. 15, from memory)
+        ("ikiye", "iki NUM;SG;DAT"),
+        ("üçte", "üç NUM;SG;LOC"),
+        ("beşe", "beş NUM;SG;DAT"),
+        ("altıyı", "altı NUM;SG;ACC"),
+        ("binden", "bin NUM;SG;ABL"),
+        ("ikisi", "iki NUM;SG;PSS3S;NOM"),
+        ("altı", "altı NUM;SG;NOM"),
+        # the pronoun o, not on 'ten'; birim 'unit', not bir + copula or possessive (common practice)
+        ("onu", "o PRO;SG;ACC"),
+        ("ona", "o PRO;SG;DAT"),
+        ("ondan", "o PRO;SG;ABL"),
+        ("birim", "birim N;SG;NOM"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    for word, reading in [("yüzden", "yüz NUM;SG;ABL"), ("yüzünü", "yüz NUM;SG;PSS3S;ACC"), ("bini", "bin NUM;SG;ACC")]:
+        assert reading in [a.text for a in tur.analyze(word)], word
+    # the weight changes no form: one form per cell, none spelt against harmony
+    assert [f.form for f in tur.generate("yüz", "NUM;PL;EQTV")] == ["yüzlerce"]
+    assert [f.form for f in tur.generate("iki", "NUM;SG;DAT")] == ["ikiye"]
+    assert [f.form for f in tur.generate("bin", "NUM;SG;PSS3S;NOM")] == ["bini"]
+    for word in ["yüzlarce", "ikiya", "binlarca", "üçta"]:
+        assert tur.analyze(word) == [], word
