@@ -1340,3 +1340,22 @@ def test_a_numeral_in_a_case_ranks_below_a_noun_spelt_alike(tur: morphfst.Langua
     assert [f.form for f in tur.generate("bin", "NUM;SG;PSS3S;NOM")] == ["bini"]
     for word in ["yüzlarce", "ikiya", "binlarca", "üçta"]:
         assert tur.analyze(word) == [], word
+
+
+def test_the_copula_third_plural_on_ben_and_sen_ranks_below_the_noun_ben(tur: morphfst.Language) -> None:
+    # common practice: benler is the plural of ben 'mole, beauty spot' (yüzündeki benler); the
+    # copula's third person plural on ben and sen ('they are I', 'they are you') is next to unheard
+    # of. bizler and sizler are the plural pronouns (G&K ch. 18, from memory), their copula second
+    assert tur.analyze("benler")[0].text == "ben N;PL;NOM"
+    assert "ben PRO;SG;NOM;3;PL" in [a.text for a in tur.analyze("benler")]
+    assert tur.analyze("bizler")[0].text == "biz PRO;PL;NOM"
+    assert tur.analyze("sizler")[0].text == "siz PRO;PL;NOM"
+    # the other persons of the copula on ben and sen, and the copula on any noun, cost as before
+    assert tur.analyze("öğretmenler")[0].text == "öğretmen N;PL;NOM"
+    assert tur.analyze("evdeler")[0].text == "ev N;SG;LOC;3;PL"
+    assert tur.analyze("bendim")[0].text == "ben PRO;SG;NOM;PST;1;SG"
+    # one form each, none against harmony or with a plural the pronoun lacks (no *benlar, *benleri)
+    assert [f.form for f in tur.generate("ben", "PRO;SG;NOM;3;PL")] == ["benler"]
+    assert [f.form for f in tur.generate("ben", "N;PL;NOM")] == ["benler"]
+    assert tur.generate("ben", "PRO;PL;NOM") == []
+    assert tur.analyze("benlar") == [] and tur.analyze("senlar") == []
