@@ -1359,3 +1359,31 @@ def test_the_copula_third_plural_on_ben_and_sen_ranks_below_the_noun_ben(tur: mo
     assert [f.form for f in tur.generate("ben", "N;PL;NOM")] == ["benler"]
     assert tur.generate("ben", "PRO;PL;NOM") == []
     assert tur.analyze("benlar") == [] and tur.analyze("senlar") == []
+
+
+def test_clock_times_with_a_colon_take_suffixes_as_said(tur: morphfst.Language) -> None:
+    # Turkish spelling rules on clock times (common practice): 10:30 as 10.30, the suffix after an
+    # apostrophe as the time is said: on otuz-da, dokuz on beş-te, yirmi üç elli dokuz-a; on the hour
+    # as the hour: sekiz-e, on-a, on üç-te; midnight sıfır sıfır-da
+    for word, best in [
+        ("10:30'da", "10:30 NUM;SG;LOC"),
+        ("9:15'te", "9:15 NUM;SG;LOC"),
+        ("23:59'a", "23:59 NUM;SG;DAT"),
+        ("08:00'e", "08:00 NUM;SG;DAT"),
+        ("10:00'a", "10:00 NUM;SG;DAT"),
+        ("13:00'te", "13:00 NUM;SG;LOC"),
+        ("12:45'ten", "12:45 NUM;SG;ABL"),
+        ("00:00'da", "00:00 NUM;SG;LOC"),
+        ("00.00'da", "00.00 NUM;SG;LOC"),
+        ("10:30", "10:30 NUM;SG;NOM"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    assert [f.form for f in tur.generate("10:30", "NUM;SG;LOC")] == ["10:30'da"]
+    assert [f.form for f in tur.generate("08:00", "NUM;SG;DAT")] == ["08:00'e"]
+    # a suffix that follows the last digit written, not the time said, is wrong; an hour has one
+    # or two digits and the minutes two (no 123:45, 10:3, 1:2, 10:30:15 as a time)
+    for word in ["10:30'de", "08:00'a", "9:15'ta", "10:00'e", "123:45", "10:3", "1:2", "10:30:15", "ev:de", ":30"]:
+        assert tur.analyze(word) == [], word
+    # the corpus tokenizer keeps a clock time with its suffix in one token
+    tokens = Tokenizer.for_meta(tur.meta).tokens("Saat 10:30'da geldi, 9:15'te çıktı.")
+    assert tokens == ["Saat", "10:30'da", "geldi", "9:15'te", "çıktı"]
