@@ -1387,3 +1387,27 @@ def test_clock_times_with_a_colon_take_suffixes_as_said(tur: morphfst.Language) 
     # the corpus tokenizer keeps a clock time with its suffix in one token
     tokens = Tokenizer.for_meta(tur.meta).tokens("Saat 10:30'da geldi, 9:15'te çıktı.")
     assert tokens == ["Saat", "10:30'da", "geldi", "9:15'te", "çıktı"]
+
+
+def test_a_listed_noun_before_a_verbs_second_person(tur: morphfst.Language) -> None:
+    # common practice: eksen 'axis' is the word written, ekmek 'sow' in the conditional second person
+    # ('if you sowed') is rare; a finite verb is mostly in the third person in writing
+    assert tur.analyze("eksen")[0].text == "eksen N;SG;NOM"
+    assert "ekmek V;COND;2;SG" in [a.text for a in tur.analyze("eksen")]
+    assert tur.analyze("hayrettin")[0].text == "Hayrettin PROPN;SG;NOM"
+    # second persons that no other word spells stay first (G&K ch. 8, person markers, from memory)
+    for word, best in [
+        ("istersen", "istemek V;HAB;COND;2;SG"),
+        ("olsan", "olmak V;COND;2;SG"),
+        ("geldin", "gelmek V;PST;2;SG"),
+        ("gelirsiniz", "gelmek V;HAB;2;PL"),
+        ("gelesin", "gelmek V;OPT;2;SG"),
+        ("desen", "demek V;COND;2;SG"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    # the weight changes no form: one per cell, the person endings as before (no *gelsin for 2SG)
+    assert [f.form for f in tur.generate("gelmek", "V;COND;2;SG")] == ["gelsen"]
+    assert [f.form for f in tur.generate("gelmek", "V;PST;2;PL")] == ["geldiniz"]
+    assert [f.form for f in tur.generate("gelmek", "V;PROG;2;SG")][:1] == ["geliyorsun"]
+    for word in ["gelsın", "geldınız", "geliyorsın"]:
+        assert tur.analyze(word) == [], word
