@@ -1411,3 +1411,36 @@ def test_a_listed_noun_before_a_verbs_second_person(tur: morphfst.Language) -> N
     assert [f.form for f in tur.generate("gelmek", "V;PROG;2;SG")][:1] == ["geliyorsun"]
     for word in ["gelsın", "geldınız", "geliyorsın"]:
         assert tur.analyze(word) == [], word
+
+
+def test_percentages_take_suffixes_as_the_number_is_said(tur: morphfst.Language) -> None:
+    # Turkish spelling rules on percentages (common practice): %50 is read yüzde elli, so the
+    # suffixes follow elli (%50'si, %50'sinden), %3,5 üç virgül beş (%3,5'lik), %100 yüz (%100'ü);
+    # the percent sign is a piece of the text of its own, the number with its suffix one token
+    tokens = Tokenizer.for_meta(tur.meta).tokens("Oyların %50'sinden fazlası, %3,5'lik artış, %100 yerli, yüzde 50'si.")
+    assert tokens == ["Oyların", "50'sinden", "fazlası", "3,5'lik", "artış", "100", "yerli", "yüzde", "50'si"]
+    for word, best in [
+        ("50'si", "50 NUM;SG;PSS3S;NOM"),
+        ("50'sinden", "50 NUM;SG;PSS3S;ABL"),
+        ("25'ini", "25 NUM;SG;PSS3S;ACC"),
+        ("100'ünü", "100 NUM;SG;PSS3S;ACC"),
+        ("3,5'lik", "3,5 NUM;ABSTR;N;SG;NOM"),
+        ("100", "100 NUM;SG;NOM"),
+        # yüzde 'percent' written out is the noun, not yüz + locative
+        ("yüzde", "yüzde N;SG;NOM"),
+    ]:
+        assert tur.analyze(word)[0].text == best, word
+    assert [f.form for f in tur.generate("50", "NUM;SG;PSS3S;ABL")] == ["50'sinden"]
+    assert [f.form for f in tur.generate("3,5", "NUM;ABSTR;N;SG;NOM")] == ["3,5'lik"]
+    # suffixes as spelt, not as said, are wrong (elli-si, not *-sı; üç virgül beş-lik, not *-lık;
+    # yüz-ün, not *-ın)
+    for word in ["50'sı", "50'sından", "3,5'lık", "100'ın", "25'ını"]:
+        assert tur.analyze(word) == [], word
+    # a number keeps its apostrophe before a derivation, as an abbreviation does (Turkish spelling
+    # rules on numbers, common practice: 1990'lı yıllar, 100'lük banknot; not *1990lı, *3,5lik)
+    assert [f.form for f in tur.generate("1990", "NUM;PROPR;ADJ;SG;NOM")] == ["1990'lı"]
+    assert [f.form for f in tur.generate("100", "NUM;ABSTR;N;SG;NOM")] == ["100'lük"]
+    # read as written, not through the lenient rule for an apostrophe after a common noun (cost 4)
+    assert tur.analyze("1990'lı")[0].weight < 12 and tur.analyze("3,5'lik")[0].weight < 12
+    for word in ["1990lı", "3,5lik", "100lük"]:
+        assert tur.analyze(word) == [], word
