@@ -1443,4 +1443,18 @@ def test_percentages_take_suffixes_as_the_number_is_said(tur: morphfst.Language)
     # read as written, not through the lenient rule for an apostrophe after a common noun (cost 4)
     assert tur.analyze("1990'lı")[0].weight < 12 and tur.analyze("3,5'lik")[0].weight < 12
     for word in ["1990lı", "3,5lik", "100lük"]:
+
+
+def test_the_possibility_after_the_negative_ability(tur: morphfst.Language) -> None:
+    # G&K ch. 21 on -(y)Abil and -(y)AmA, from memory: -(y)AmAyAbil 'may be unable to' (gelemeyebilir
+    # 'he may not be able to come'), beside -mAyAbil 'may not' (gelmeyebilir)
+    best = {w: tur.analyze(w)[0].text for w in "yapamayabilir gelemeyebilecek bulunamayabilir yapamayabilirsin".split()}
+    assert best["yapamayabilir"] == "yapmak V;NEG;POT;POT;HAB;3;SG"
+    assert best["gelemeyebilecek"] == "gelmek V;NEG;POT;POT;FUT;3;SG"
+    assert best["bulunamayabilir"] == "bulunmak V;NEG;POT;POT;HAB;3;SG"
+    assert best["yapamayabilirsin"] == "yapmak V;NEG;POT;POT;HAB;2;SG"
+    assert [f.form for f in tur.generate("gelmek", "V;NEG;POT;POT;HAB;3;SG")] == ["gelemeyebilir"]
+    assert tur.analyze("gelmeyebilir")[0].text == "gelmek V;NEG;POT;HAB;3;SG"
+    # no imperative after it, and no second negation (*gelemeyebil!, *gelemeyebilme, *gelemeyemez)
+    for word in ["gelemeyebil", "gelemeyebilin", "gelemeyemez", "gelemeyebilemez"]:
         assert tur.analyze(word) == [], word
