@@ -1486,3 +1486,15 @@ def test_a_verb_before_a_bare_noun_with_the_copulas_past(tur: morphfst.Language)
     assert [f.form for f in tur.generate("ev", "N;SG;NOM;NFH;3;SG")] == ["evmiş"]
     # no copula twice, no copula past before a case (*öğretmendiye, *evdiden)
     assert tur.analyze("öğretmendiye") == [] and tur.analyze("evdiden") == []
+
+
+def test_ordinals_written_with_a_period(tur: morphfst.Language) -> None:
+    # common practice (TDK Yazım Kılavuzu on ordinals, from memory): 23. madde, 3. sınıf, 1.000.
+    # kez; the inflected ordinal is spelt out (3'üncü, 5'incisi), so nothing follows the period
+    for word in ["23.", "3.", "1.000."]:
+        assert tur.analyze(word)[0].text == f"{word[:-1]} NUM;ORD;ADJ", word
+    for word in ["23.'te", "23..", "3.ü", ".3", "3.üncü"]:
+        assert tur.analyze(word) == [], word
+    assert tur.analyze("3'üncü")[0].text == "3 NUM;ORD;ADJ;SG;NOM"
+    # the corpus tokenizer leaves the period out of the token (an ordinal or a sentence's end)
+    assert Tokenizer.for_meta(tur.meta).tokens("23. madde ve Dr. Ayşe geldi.") == ["23", "madde", "ve", "Dr", "Ayşe", "geldi"]
