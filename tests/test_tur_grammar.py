@@ -1498,3 +1498,22 @@ def test_ordinals_written_with_a_period(tur: morphfst.Language) -> None:
     assert tur.analyze("3'üncü")[0].text == "3 NUM;ORD;ADJ;SG;NOM"
     # the corpus tokenizer leaves the period out of the token (an ordinal or a sentence's end)
     assert Tokenizer.for_meta(tur.meta).tokens("23. madde ve Dr. Ayşe geldi.") == ["23", "madde", "ve", "Dr", "Ayşe", "geldi"]
+
+
+def test_units_take_their_suffixes_as_said(tur: morphfst.Language) -> None:
+    # common practice: an abbreviation takes the suffixes of the word it is said as: kg, mg as
+    # kilogram, miligram (10 kg'lık, 5 kg'dan, kg'ı), dk as dakika (dk'da); km, cm as kilometre,
+    # santimetre (km'de)
+    best = {w: tur.analyze(w)[0].text for w in "kg'lık kg'dan mg'lık kg'ı dk'da km'de".split()}
+    assert best["kg'lık"] == "kg N;ABSTR;N;SG;NOM"
+    assert best["kg'dan"] == "kg N;SG;ABL"
+    assert best["mg'lık"] == "mg N;ABSTR;N;SG;NOM"
+    assert best["kg'ı"].startswith("kg N;SG")
+    assert best["dk'da"] == "dk N;SG;LOC"
+    assert best["km'de"] == "km N;SG;LOC"
+    assert [f.form for f in tur.generate("kg", "N;SG;LOC")] == ["kg'da"]
+    # an abbreviation with a stem of its own keeps its apostrophe before a derivation (PKK'lı)
+    assert tur.analyze("PKK'lı")[0].weight < tur.analyze("PKK")[0].weight + 8
+    # not as spelt letter by letter (ke-ge: *kg'de, *kg'den)
+    for word in ["kg'de", "kg'den", "mg'den", "dk'de"]:
+        assert all(a.lemma not in ("kg", "mg", "dk") for a in tur.analyze(word)), word
