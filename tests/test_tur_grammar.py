@@ -1517,3 +1517,15 @@ def test_units_take_their_suffixes_as_said(tur: morphfst.Language) -> None:
     # not as spelt letter by letter (ke-ge: *kg'de, *kg'den)
     for word in ["kg'de", "kg'den", "mg'den", "dk'de"]:
         assert all(a.lemma not in ("kg", "mg", "dk") for a in tur.analyze(word)), word
+
+
+def test_a_written_apostrophe_prefers_the_name(tur: morphfst.Language) -> None:
+    # common practice: the apostrophe is written after a proper name (Deniz'le 'with Deniz', Kuran'da
+    # 'in the Koran', Gülen'in); on a common noun it is a slip or a part of a name (Lig'de), read at
+    # a cost, so that a name spelt alike comes first
+    assert tur.analyze("Deniz'le")[0].text == "Deniz PROPN;SG;INS"
+    assert tur.analyze("Kuran'da")[0].text == "Kuran PROPN;SG;LOC"
+    assert tur.analyze("Lig'de")[0].text == "lig N;SG;LOC"
+    # without the apostrophe the common noun stays first
+    assert tur.analyze("denizle")[0].text == "deniz N;SG;INS"
+    assert tur.analyze("kuranda")[0].lemma != "Kuran"
