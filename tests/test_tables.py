@@ -159,6 +159,20 @@ def test_turkish_their_houses_cell_is_filled(tur: morphfst.Language) -> None:
     assert "cells have no form" not in render_text([a], 80)
 
 
+def test_turkish_numeral_and_kim_tables(tur: morphfst.Language) -> None:
+    # a numeral is declined like a noun (dördü, dörde, dördüm; G&K ch. 15, from memory): cases by
+    # number in seven possessor tables, without the associative plural, -gil or the copula's persons
+    dort = only(tur, "dört", "NUM")
+    assert len(dort.cells) == 8 * 2 * 7
+    assert not [c for c in dort.cells if {"ASSOC", "FAM", "1", "2", "3"} & set(c.features.split(";"))]
+    assert [preferred(dort, f) for f in ("NUM;SG;ACC", "NUM;SG;DAT", "NUM;SG;PSS1S;NOM")] == ["dördü", "dörde", "dördüm"]
+    # kim: kiminle and the colloquial kimle in one instrumental row
+    base = grid_of(arrange(only(tur, "kim", "PRO"), tur.meta), "no possessor")
+    assert base.rows.count("instrumental") == 1
+    row = base.cells[base.rows.index("instrumental")]
+    assert [v.form for v in row[base.columns.index("singular")].forms] == ["kiminle", "kimle"]  # type: ignore[union-attr]
+
+
 def test_turkish_verb_conjugation(tur: morphfst.Language) -> None:
     # Lewis, G. (2000), Turkish Grammar, 2nd ed., Oxford University Press, ch. VIII (the verb):
     # present progressive -Iyor, past -DI, future -(y)AcAk with personal endings; forms from memory.

@@ -114,7 +114,7 @@ PARADIGMS: dict[str, list[tuple[str, str, str]]] = {
         ("ben", "PRO;SG;LOC", "bende"),
         ("ben", "PRO;SG;ABL", "benden"),
         ("ben", "PRO;SG;GEN", "benim"),
-        ("ben", "PRO;INS", "benimle"),
+        ("ben", "PRO;SG;INS", "benimle"),
         ("sen", "PRO;SG;DAT", "sana"),
         ("sen", "PRO;SG;GEN", "senin"),
         ("o", "PRO;SG;ACC", "onu"),
@@ -1529,3 +1529,15 @@ def test_a_written_apostrophe_prefers_the_name(tur: morphfst.Language) -> None:
     # without the apostrophe the common noun stays first
     assert tur.analyze("denizle")[0].text == "deniz N;SG;INS"
     assert tur.analyze("kuranda")[0].lemma != "Kuran"
+
+
+def test_numerals_and_kim_in_tables(tur: morphfst.Language) -> None:
+    # kiminle and the colloquial kimle are one cell, the singular instrumental (G&K ch. 18, from
+    # memory); the other pronouns take only the case slot's instrumental (herkesle, kimseyle)
+    assert [a.text for a in tur.analyze("kiminle")][0] == "kim PRO;SG;INS"
+    assert [f.form for f in tur.generate("kim", "PRO;SG;INS")] == ["kiminle", "kimle"]
+    assert [f.form for f in tur.generate("herkes", "PRO;SG;INS")] == ["herkesle"]
+    assert "herkes PRO;SG;INS" not in [a.text for a in tur.analyze("herkesinle")]
+    # numerals take no associative plural nor -gil (*dördümler, *dördümgil)
+    assert tur.analyze("dördümler") == [] or all("ASSOC" not in a.text for a in tur.analyze("dördümler"))
+    assert tur.analyze("dördümgil") == []
