@@ -1541,3 +1541,15 @@ def test_numerals_and_kim_in_tables(tur: morphfst.Language) -> None:
     # numerals take no associative plural nor -gil (*dördümler, *dördümgil)
     assert tur.analyze("dördümler") == [] or all("ASSOC" not in a.text for a in tur.analyze("dördümler"))
     assert tur.analyze("dördümgil") == []
+
+
+def test_yedi_is_the_numeral_before_yemeks_past(tur: morphfst.Language) -> None:
+    # kırk yedi yaşında 'forty-seven years old': the numeral is the commoner yedi in written text
+    # (common practice); yemek's count holds the form yer, mostly the noun 'place', so the verb weighs
+    # more than its count says. Its other forms stay verbs (yedim, yiyor, yerken 'while eating').
+    readings = [a.text for a in tur.analyze("yedi")]
+    assert readings[0] == "yedi NUM;SG;NOM" and "yemek V;PST;3;SG" in readings
+    assert tur.analyze("yedim")[0].text == "yemek V;PST;1;SG"
+    assert tur.analyze("yiyor")[0].text == "yemek V;PROG;3;SG"
+    assert tur.analyze("yerken")[0].text == "yemek V;HAB;V.CVB;WHILE"
+    assert tur.analyze("yer")[0].text == "yer N;SG;NOM"
