@@ -1553,3 +1553,41 @@ def test_yedi_is_the_numeral_before_yemeks_past(tur: morphfst.Language) -> None:
     assert tur.analyze("yiyor")[0].text == "yemek V;PROG;3;SG"
     assert tur.analyze("yerken")[0].text == "yemek V;HAB;V.CVB;WHILE"
     assert tur.analyze("yer")[0].text == "yer N;SG;NOM"
+
+
+def test_the_curse_participle_and_rapid_after_a_negation(tur: morphfst.Language) -> None:
+    # G&K and L, from memory: the curse -(y)AsIcA (kör olasıca, gebere-sice, gelmeyesice) and the
+    # descriptive -(y)Iver after a negation (gelmeyiversin 'let him just not come', yapmayıver)
+    assert tur.analyze("gelesice")[0].text == "gelmek V;V.PTCP;OPT;ADJ"
+    assert tur.analyze("gelmeyesice")[0].text == "gelmek V;NEG;V.PTCP;OPT;ADJ"
+    assert tur.analyze("gelmeyiversin")[0].text == "gelmek V;NEG;RAPID;IMP;3;SG"
+    assert tur.analyze("yapmayıver")[0].text == "yapmak V;NEG;RAPID;IMP;2;SG"
+    # nothing after the curse, no second negation after -Iver (*gelesiceler, *gelmeyivermeyin)
+    for word in ["gelesiceye", "gelmeyivermeyin", "gelemeyiversin"]:
+        assert tur.analyze(word) == [], word
+
+
+def test_words_added_from_the_third_running_text_probe(tur: morphfst.Language) -> None:
+    # TDK Güncel Türkçe Sözlük headwords (from memory): tutar 'amount', buluntu 'find', ral 'rale' with
+    # front suffixes (raller), takyidat 'encumbrances', oybirliği 'unanimity', abur cubur 'junk food',
+    # geçe 'past (the hour)', temyizen 'on appeal'; MÖ 'before Christ'
+    best = {w: tur.analyze(w)[0].text for w in "tutarının buluntular raller takyidatı oybirliğiyle cubura temyizen".split()}
+    assert best["tutarının"] == "tutar N;SG;PSS3S;GEN"
+    assert best["buluntular"] == "buluntu N;PL;NOM"
+    assert best["raller"] == "ral N;PL;NOM"
+    assert best["takyidatı"].startswith("takyidat N;SG")
+    assert best["oybirliğiyle"] == "oybirliği N;SG;INS"
+    assert best["cubura"] == "cubur N;SG;DAT"
+    assert best["temyizen"] == "temyizen ADV"
+    assert "geçe ADP" in [a.text for a in tur.analyze("geçe")]
+    assert tur.analyze("Karaada'nın")[0].text == "Karaada PROPN;SG;GEN"
+    assert tur.analyze("MÖ")[0].text == "MÖ ADV"
+    # abbreviations said as words or letters (common practice): ml mililitre (ml'de), MR emar (MR'a),
+    # Doç doçent (Doç'e), KOAH as a word (KOAH'ta); not as spelt (*MR'e as MR)
+    assert tur.analyze("ml'de")[0].text == "ml N;SG;LOC"
+    assert tur.analyze("MR'a")[0].text == "MR N;SG;DAT"
+    assert tur.analyze("Doç'e")[0].text == "Doç N;SG;DAT"
+    assert tur.analyze("KOAH'ta")[0].text == "KOAH N;SG;LOC"
+    assert all(a.lemma != "MR" for a in tur.analyze("MR'e"))
+    # no back suffixes on ral, no voicing of takyidat (*rallar, *takyidadı)
+    assert tur.analyze("rallar") == [] and tur.analyze("takyidadı") == []
