@@ -76,7 +76,7 @@ def test_evlerinde_rule_by_rule(tur: morphfst.Language) -> None:
     assert [(c.kind, c.new) for c in insert.changes] == [("insert", "n")]
     assert [(p.node, p.kind) for p in a.path] == [
         ("noun", "class"),
-        ("number", "slot"),
+        ("nnumber", "slot"),
         ("possessive", "slot"),
         ("case", "slot"),
         ("end", "end"),

@@ -17,7 +17,7 @@ def test_analysis_object(tur: morphfst.Language) -> None:
     assert a.text == "ev N;PL;LOC"
     assert a.ud_feats() == "Case=Loc|Number=Plur" and a.upos() == "NOUN"
     assert a.morphs[0].kind == "stem" and a.morphs[0].gloss == "house"
-    assert [(m.slot, m.underlying) for m in a.morphs[1:]] == [("number", "lAr"), ("case", "DA")]
+    assert [(m.slot, m.underlying) for m in a.morphs[1:]] == [("nnumber", "lAr"), ("case", "DA")]
     assert a.to_dict()["segmentation"] == "ev-ler-de"
 
 
