@@ -1445,6 +1445,7 @@ def test_percentages_take_suffixes_as_the_number_is_said(tur: morphfst.Language)
     # read as written, not through the lenient rule for an apostrophe after a common noun (cost 4)
     assert tur.analyze("1990'lı")[0].weight < 12 and tur.analyze("3,5'lik")[0].weight < 12
     for word in ["1990lı", "3,5lik", "100lük"]:
+        assert tur.analyze(word) == [], word
 
 
 def test_the_possibility_after_the_negative_ability(tur: morphfst.Language) -> None:
