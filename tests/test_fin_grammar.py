@@ -1419,3 +1419,31 @@ def test_front_endings_without_the_flag_after_a_front_last_part(fin: morphfst.La
     # a last part with only i and e after a back vowel still needs the flag (moottoritie: moottoritiellä)
     assert "moottoritie" in flagged
     assert [f.form for f in fin.generate("moottoritie", "N;SG;AT+ESS")] == ["moottoritiellä"]
+
+
+def test_the_passive_past_participle_of_consonant_stems_gradates(fin: morphfst.Language) -> None:
+    # Karlsson, the passive past participle (from memory): after the l, n, r of a consonant stem the
+    # t of -tu gradates as lt:ll, nt:nn, rt:rr (kuultu: kuullun, kuullut, kuulluksi; mentu: mennyn;
+    # purtu: purrun; ajateltu: ajatellun), after s and h as elsewhere (pesty: pestyn; tehty: tehdyn)
+    for lemma, feats, form in [
+        ("kuulla", "SG;NOM", "kuultu"),
+        ("kuulla", "SG;GEN", "kuullun"),
+        ("kuulla", "SG;PRT", "kuultua"),
+        ("kuulla", "SG;TRANS", "kuulluksi"),
+        ("kuulla", "PL;NOM", "kuullut"),
+        ("kuulla", "PL;GEN", "kuultujen"),
+        ("tulla", "SG;GEN", "tullun"),
+        ("mennä", "SG;GEN", "mennyn"),
+        ("purra", "SG;GEN", "purrun"),
+        ("ajatella", "SG;GEN", "ajatellun"),
+        ("käsitellä", "PL;NOM", "käsitellyt"),
+        ("esitellä", "PL;IN+ESS", "esitellyissä"),
+        ("pestä", "SG;GEN", "pestyn"),
+        ("tehdä", "SG;GEN", "tehdyn"),
+    ]:
+        assert form in [f.form for f in fin.generate(lemma, f"V;V.PTCP;PASS;PST;ADJ;{feats}")], (lemma, feats)
+    assert "kuulla V;V.PTCP;PASS;PST;ADJ;SG;TRANS" in [a.text for a in fin.analyze("kuulluksi")]
+    assert "käsitellä V;V.PTCP;PASS;PST;ADJ;PL;NOM" in [a.text for a in fin.analyze("käsitellyt")]
+    # the strong grade in a closed syllable is no word (*kuultun, *tultun, *mentyn, *käsiteltyt)
+    for word in ["kuultun", "tultun", "mentyn", "ajateltun", "käsiteltyt", "purtun", "pessyn"]:
+        assert fin.analyze(word) == [], word
