@@ -1447,3 +1447,23 @@ def test_the_passive_past_participle_of_consonant_stems_gradates(fin: morphfst.L
     # the strong grade in a closed syllable is no word (*kuultun, *tultun, *mentyn, *käsiteltyt)
     for word in ["kuultun", "tultun", "mentyn", "ajateltun", "käsiteltyt", "purtun", "pessyn"]:
         assert fin.analyze(word) == [], word
+
+
+def test_a_verbal_noun_or_agent_noun_in_a_compound(fin: morphfst.Language) -> None:
+    # Finnish compounds, common practice (from memory): the -minen noun of any verb joins a following
+    # noun in its compound form -mis- (lukemisaika, sulamisvesi, kulumisraja), and a -minen or -jA
+    # noun of any verb may be the last part (maankohoaminen, kaupanvahvistaja); the lemma is the
+    # verb's, as for the derived word alone
+    assert fin.analyze("miettimisaikaa")[0].segmentation.startswith("miettimis-aika")
+    assert fin.analyze("sulamisvesien")[0].text == "sulamisvesi N;PL;GEN"
+    assert fin.analyze("kulumisrajan")[0].text == "kulumisraja N;SG;GEN"
+    assert fin.analyze("lukemisaika")[0].text == "lukemisaika N;SG;NOM"
+    assert fin.analyze("lukemis")[0].text == "lukea V;V.MSDR;N;CPD"
+    assert fin.analyze("maankohoaminen")[0].text == "maankohota V;V.MSDR;N;SG;NOM"
+    assert fin.analyze("kaupanvahvistajalle")[0].text == "kaupanvahvistaa V;AGTN;N;SG;AT+ALL"
+    # a listed compound and a simple word keep their own reading; the -mis- form only before a noun,
+    # and not the nominative -minen (*lukeminenaika) nor another verb form as a last part
+    assert fin.analyze("syömisaika")[0].lemma == "syömisaika"
+    assert fin.analyze("lukeminenaika") == []
+    assert fin.analyze("maanluki") == []
+    assert fin.analyze("lukemisluki") == []

@@ -410,8 +410,8 @@ class Compiler:
         pos_codes = [c for c, k in s.kinds.items() if k == "pos"]
         found = []
         for c in self.g.compounds:
-            head = self._compound_heads(c.first, entries, lemma_codes)
-            last_head = self._compound_heads(c.last, entries, lemma_codes)
+            head = self._compound_heads(c.first, entries, lemma_codes, derived_out=False)
+            last_head = self._compound_heads(c.last, entries, lemma_codes, derived_out=True)
             if c.last_min > 1:  # the last part's lemma has at least lastmin letters
                 longer = (chars(lemma_codes).closure(c.last_min) + chars(pos_codes)).optimize()
                 last_head = pynini.intersect(last_head, longer).optimize()
@@ -428,7 +428,10 @@ class Compiler:
                     for seq in itertools.product(sorted(c.groups), repeat=n)
                     if rx.fullmatch("".join(f"{g} " for g in seq))
                 ]
-                group_heads = {g: self._compound_heads(names, entries, lemma_codes) for g, names in c.groups.items()}
+                # (groups name parts of speech and classes, never a derivation feature)
+                group_heads = {
+                    g: self._compound_heads(names, entries, lemma_codes, derived_out=False) for g, names in c.groups.items()
+                }
             # with agree, one machine per bundle, shared by every part; else one for them all
             for group in [[b] for b in bundles] if c.agree else [bundles]:
                 tails = union(group).optimize()
@@ -460,15 +463,31 @@ class Compiler:
             return None
         return union(found)  # optimized together with the lexicon words in derive
 
-    def _compound_heads(self, names: list[str], entries: list[m.LexEntry], lemma_codes: list[str]) -> pynini.Fst:
-        """An acceptor of a lemma and its part of speech: any lemma of a named part of speech, or the
-        lemmas of the entries of a named class."""
+    def _compound_heads(
+        self, names: list[str], entries: list[m.LexEntry], lemma_codes: list[str], derived_out: bool
+    ) -> pynini.Fst:
+        """A lemma and its part of speech: any lemma of a named part of speech, or the lemmas of the
+        entries of a named class, or (a named feature) any lemma whose first affixes with a feature
+        have that one, a derivation such as a verbal noun (kohota -> kohoaminen). A derived head
+        reads that affix and feature too: kept on both tapes for a last part (``derived_out``), for a
+        first part on the analysis of the bounded machine only (the compound's part is lemma and
+        part of speech)."""
         s = self.space
+        features = {v for name, d in self.g.dimensions.items() if name != "pos" for v in d.values}
         tags = [n for n in names if n in self.g.pos_tags]
-        classes = {n for n in names if n not in tags}
+        derived = [n for n in names if n not in tags and n not in self.g.classes and n in features]
+        classes = {n for n in names if n not in tags and n not in derived}
         heads = []
         if tags:
             heads.append(chars(lemma_codes).closure() + chars(s.code(f"pos:{t}") for t in tags))
+        if derived:
+            affix_codes = [c for c, k in s.kinds.items() if k == "affix"]
+            feats = chars(s.code(f"feature:{f}") for f in derived)
+            any_pos = chars(s.code(f"pos:{t}") for t in self.g.pos_tags)
+            # the derivation's own part of speech follows its feature (kohota V V.MSDR N)
+            pos_opt = any_pos.copy().closure(0, 1)
+            after = chars(affix_codes).closure() + union([feats + pos_opt, any_pos + feats]).optimize()
+            heads.append(chars(lemma_codes).closure() + any_pos + (after if derived_out else cross("", after.optimize())))
         if classes:
             pairs = {(e.lemma, e.pos_tag) for e in entries if e.klass in classes}
             heads.extend(acc(lemma + s.code(f"pos:{tag}")) for lemma, tag in sorted(pairs))

@@ -246,18 +246,19 @@ def _check_stem_rules(g: m.Grammar) -> None:
 
 
 def _check_compounds(g: m.Grammar) -> None:
-    """Every name of a compound block is a part of speech or a class; every label of a form a feature."""
+    """Every name of a compound block is a part of speech, a class or a feature (a derived word); every
+    label of a form a feature."""
     pos_tags = set(g.pos_tags)
     features = {v for name, d in g.dimensions.items() if name != "pos" for v in d.values}
     for c in g.compounds:
         for key, names in (("first", c.first), ("last", c.last)):
             for name in names:
-                if name not in pos_tags and name not in g.classes:
+                if name not in pos_tags and name not in g.classes and name not in features:
                     raise _err(
-                        f"compound: {name!r} in '{key}' is neither a part of speech nor a class",
+                        f"compound: {name!r} in '{key}' is neither a part of speech nor a class nor a feature",
                         c.lines.get(f"{key} {name}", c.lines.get(key, c.pos)),
-                        _near(name, sorted(pos_tags | set(g.classes)))
-                        or "name parts of speech of the 'pos' dimension or classes",
+                        _near(name, sorted(pos_tags | set(g.classes) | features))
+                        or "name parts of speech of the 'pos' dimension, classes or features of a derivation",
                     )
         for group, names in c.groups.items():
             for name in names:
