@@ -1467,3 +1467,13 @@ def test_a_verbal_noun_or_agent_noun_in_a_compound(fin: morphfst.Language) -> No
     assert fin.analyze("lukeminenaika") == []
     assert fin.analyze("maanluki") == []
     assert fin.analyze("lukemisluki") == []
+
+
+def test_a_capital_at_the_start_of_a_hyphenated_compound_leaves_the_lemma(fin: morphfst.Language) -> None:
+    # common practice: a sentence-initial capital is no part of the lemma (Metsänhoito-opas ->
+    # metsänhoito-opas, as Talousarviopuhe -> talousarviopuhe); names and abbreviations keep theirs
+    assert fin.analyze("Metsänhoito-opas")[0].text == "metsänhoito-opas N;SG;NOM"
+    assert fin.analyze("Syy-yhteyttä")[0].text == "syy-yhteys N;SG;PRT"
+    assert fin.analyze("Keski-Suomen")[0].text == "Keski-Suomi PROPN;SG;GEN"
+    assert fin.analyze("EU-maissa")[0].text == "EU-maa N;PL;IN+ESS"
+    assert fin.analyze("SM-viestissä")[0].text == "SM-viesti N;SG;IN+ESS"

@@ -7,7 +7,10 @@ tokenizer keeps such a word together (:mod:`morphfst.runtime.tokenize`); when no
 whole word, this module gives one analysis per analysis of the last part:
 
 - the lemma is the first parts as written (hyphens kept) followed by the last part's lemma
-  (*Etelä-Suomi*); part of speech and features are the last part's;
+  (*Etelä-Suomi*); part of speech and features are the last part's. A first part whose own lemma
+  is in lower case is lower-cased when the last part's lemma is too (a capital at the start of a
+  sentence: *Metsänhoito-opas* -> *metsänhoito-opas*, as for a closed compound), and kept as
+  written before a name (*Keski-Suomi*) or when its lemma has capitals (*EU-maa*);
 - each first part is a stem morph (gloss and underlying form from its own best analysis), so the
   segmentation is the parts' morphs joined with hyphens, as for any word (*etelä-suome-ssa*);
 - the weight is the last part's plus the first parts' best weights, so the order is the last part's;
@@ -52,6 +55,7 @@ def hyphenated(
         last = nominal
     stems: list[Morph] = []
     extra = 0.0
+    common: list[bool] = []  # per first part: its best lemma has no capital
     for part in firsts:
         found = analyze(part)
         if not found:
@@ -61,8 +65,21 @@ def hyphenated(
         gloss = stem.gloss if stem is not None else best.lemma
         stems.append(Morph(part, gloss, (best.pos,), "stem", best.lemma))
         extra += best.weight
+        common.append(best.lemma == best.lemma.lower())
     written_head = written.rpartition(HYPHEN)[0]
-    prefix = (written_head if written_head.lower() == head.lower() else head) + HYPHEN
+    as_written = (written_head if written_head.lower() == head.lower() else head).split(HYPHEN)
+    lowered = HYPHEN.join(p.lower() if low else p for p, low in zip(as_written, common)) + HYPHEN
+    kept = HYPHEN.join(as_written) + HYPHEN
     return [
-        Analysis(surface, prefix + a.lemma, a.pos, a.features, (*stems, *a.morphs), a.weight + extra, a.ud, False) for a in last
+        Analysis(
+            surface,
+            (lowered if a.lemma == a.lemma.lower() else kept) + a.lemma,
+            a.pos,
+            a.features,
+            (*stems, *a.morphs),
+            a.weight + extra,
+            a.ud,
+            False,
+        )
+        for a in last
     ]
