@@ -1477,3 +1477,15 @@ def test_a_capital_at_the_start_of_a_hyphenated_compound_leaves_the_lemma(fin: m
     assert fin.analyze("Keski-Suomen")[0].text == "Keski-Suomi PROPN;SG;GEN"
     assert fin.analyze("EU-maissa")[0].text == "EU-maa N;PL;IN+ESS"
     assert fin.analyze("SM-viestissä")[0].text == "SM-viesti N;SG;IN+ESS"
+
+
+def test_a_numeral_genitive_first_part_is_written_as_it_stands(fin: morphfst.Language) -> None:
+    # common practice: a numeral genitive before a noun or adjective keeps its form in the lemma
+    # (yhdenmukainen, kahdenkertainen); only a compound numeral takes its parts' lemmas
+    assert fin.analyze("yhdenmukaisia")[0].lemma == "yhdenmukainen"
+    assert fin.analyze("kahdenkertainen")[0].lemma == "kahdenkertainen"
+    assert fin.analyze("kahdessakymmenessä")[0].lemma == "kaksikymmentä"
+    assert not [a for a in fin.analyze("yhdenmukaisia") if a.lemma == "yksimukainen"]
+    # -lainen after a numeral genitive: kahdenlaista is kahdenlainen, not kahden + laki
+    assert fin.analyze("kahdenlaista")[0].text == "kahdenlainen ADJ;SG;PRT"
+    assert fin.analyze("kuudenlaisia")[0].text == "kuudenlainen ADJ;PL;PRT"

@@ -547,7 +547,11 @@ class FastAnalyzer:
         self._stems: dict[tuple[str, str, str], Morph] = {}
         # the first parts of 'agree' compounds stand in the compound's lemma by their own lemma (a
         # compound numeral's lemma is its nominative: kahdessakymmenessäkolmessa -> kaksikymmentäkolme)
-        self.lemma_parts = {name for c in lang.meta.get("compounds") or () if c.get("agree") for name in c.get("first", ())}
+        # (only there: a numeral genitive before a noun or adjective is written as it stands,
+        # yhdenmukainen, kahdenkertainen); (first names, last names) of each agree block
+        self.lemma_parts = [
+            (set(c.get("first", ())), set(c.get("last", ()))) for c in lang.meta.get("compounds") or () if c.get("agree")
+        ]
 
     @property
     def guesser(self) -> ArcWalker | None:
@@ -751,7 +755,8 @@ class FastAnalyzer:
         heads = []
         for part, form in zip(parts[:-1], forms):
             lemma, pos = part[:-1], self.labels.get(part[-1:], "?")
-            heads.append(lemma if pos in self.lemma_parts else form)
+            agree = any(pos in first and last.pos in lasts for first, lasts in self.lemma_parts)
+            heads.append(lemma if agree else form)
             stems.append(self._stems.get((form, lemma, pos)) or self._new_stem(self._stems, form, lemma, pos))
         lemma = "".join(heads) + last.lemma
         return _new_analysis(surface, lemma, last.pos, last.features, (*stems, *last.morphs), weight, self.lang.ud, False)
