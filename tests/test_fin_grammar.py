@@ -1517,3 +1517,19 @@ def test_the_factitive_is_made_of_adjectives_only(fin: morphfst.Language) -> Non
     assert "yksityinen ADJ;FACT;V;NFIN" in [a.text for a in fin.analyze("yksityistää")]
     assert not [a for a in fin.analyze("lapasta") if "FACT" in a.features]
     assert not [a for a in fin.analyze("loistivat") if a.lemma == "loinen"]
+
+
+def test_ordinals_in_digits_take_a_colon_ending(fin: morphfst.Language) -> None:
+    # common practice (Finnish orthography): an ordinal in digits takes the ordinal's ending after a
+    # colon (3:s, 3:nnen, 14:nnessä, 5:nneksi), a cardinal the cardinal's (80:n, 5:nä)
+    for word, text in [
+        ("3:s", "3 NUM;SG;NOM"),
+        ("3:nnen", "3 NUM;SG;GEN"),
+        ("14:nnen", "14 NUM;SG;GEN"),
+        ("5:nneksi", "5 NUM;SG;TRANS"),
+        ("2:ntena", "2 NUM;SG;ESS"),
+        ("80:n", "80 NUM;SG;GEN"),
+    ]:
+        assert fin.analyze(word)[0].text == text, word
+    assert fin.analyze("3:nen") == []
+    assert fin.analyze("3:ns") == []
