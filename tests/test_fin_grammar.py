@@ -1533,3 +1533,29 @@ def test_ordinals_in_digits_take_a_colon_ending(fin: morphfst.Language) -> None:
         assert fin.analyze(word)[0].text == text, word
     assert fin.analyze("3:nen") == []
     assert fin.analyze("3:ns") == []
+
+
+def test_new_lemmas_of_running_text(fin: morphfst.Language) -> None:
+    # common practice (from memory): the inflection of a few words of everyday text
+    for lemma, feats, form in [
+        ("kukinta", "N;SG;AT+ESS", "kukinnalla"),
+        ("pitoisuus", "N;SG;IN+ALL", "pitoisuuteen"),
+        ("painallus", "N;SG;AT+ESS", "painalluksella"),
+        ("varotoimi", "N;PL;NOM", "varotoimet"),
+        ("murtovesi", "N;SG;PRT", "murtovettä"),
+        ("valonheitin", "N;PL;PRT", "valonheittimiä"),
+        ("hiomakivi", "N;PL;PRT", "hiomakiviä"),
+        ("rahina", "N;PL;PRT", "rahinoita"),
+        ("hapekas", "ADJ;SG;PRT", "hapekasta"),
+        ("hapekas", "ADJ;SG;GEN", "hapekkaan"),
+        ("asteinen", "ADJ;SG;IN+ESS", "asteisessa"),
+        ("ravita", "V;IND;PRS;3;SG", "ravitsee"),
+        ("liikutella", "V;IND;PRS;1;SG", "liikuttelen"),
+        ("langettaa", "V;PASS;IND;PRS", "langetetaan"),
+        ("reivata", "V;IND;PST;1;PL", "reivasimme"),
+    ]:
+        assert form in [f.form for f in fin.generate(lemma, feats)], (lemma, feats)
+    assert "valonheittimia" not in [f.form for f in fin.generate("valonheitin", "N;PL;PRT")]
+    assert fin.analyze("275-asteisessa")[0].text == "275-asteinen ADJ;SG;IN+ESS"
+    assert fin.analyze("voisulan")[0].lemma == "voisula"
+    assert fin.analyze("rahinoita")[0].lemma == "rahina"
