@@ -1559,3 +1559,26 @@ def test_new_lemmas_of_running_text(fin: morphfst.Language) -> None:
     assert fin.analyze("275-asteisessa")[0].text == "275-asteinen ADJ;SG;IN+ESS"
     assert fin.analyze("voisulan")[0].lemma == "voisula"
     assert fin.analyze("rahinoita")[0].lemma == "rahina"
+
+
+def test_a_postposition_ranks_above_the_second_infinitive(fin: morphfst.Language) -> None:
+    # common practice: lähtien, nähden, mennessä, ollenkaan are adverbs and postpositions in running
+    # text far more often than the infinitive of lähteä, nähdä, mennä, olla; the infinitive stays
+    for word, text in [
+        ("lähtien", "lähtien ADP"),
+        ("nähden", "nähden ADP"),
+        ("mennessä", "mennessä ADP"),
+        ("ollenkaan", "ollenkaan ADV"),
+    ]:
+        readings = [a.text for a in fin.analyze(word)]
+        assert readings[0] == text and len(readings) > 1, readings
+    assert fin.analyze("kävellen")[0].text == "kävellä V;NFIN;INF2;INS"
+
+
+def test_a_colloquial_pronoun_ranks_below_a_standard_reading(fin: morphfst.Language) -> None:
+    # common practice: in standard text säkin is säkki's genitive and toi tuoda's past; the
+    # colloquial pronoun forms (sä, toi) remain readings, and alone they are the only one
+    assert fin.analyze("säkin")[0].text == "säkki N;SG;GEN"
+    assert fin.analyze("toi")[0].text == "tuoda V;IND;PST;3;SG"
+    assert "tuo PRON;SG;NOM" in [a.text for a in fin.analyze("toi")]
+    assert fin.analyze("sä")[0].text == "sinä PRON;SG;NOM"
