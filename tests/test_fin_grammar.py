@@ -1583,3 +1583,46 @@ def test_a_colloquial_pronoun_ranks_below_a_standard_reading(fin: morphfst.Langu
     assert fin.analyze("toi")[0].text == "tuoda V;IND;PST;3;SG"
     assert "tuo PRON;SG;NOM" in [a.text for a in fin.analyze("toi")]
     assert fin.analyze("sä")[0].text == "sinä PRON;SG;NOM"
+
+
+@pytest.mark.parametrize(
+    "word,expected",
+    [
+        # invented words, read by the shape of their lemma and its type (the Finnish standard word
+        # list's types, from memory): gradation of types 1, 10 and 48 (tortikku : tortikun like
+        # tikku : tikun; tönkä : töngän like kenkä : kengän; lämpsäke : lämpsäkkeen like
+        # lääke : lääkkeen; tälenne : tälenteen like rakenne : rakenteen)
+        ("tortikun", "tortikku N;SG;GEN"),
+        ("töngän", "tönkä N;SG;GEN"),
+        ("lämpsäkkeen", "lämpsäke N;SG;GEN"),
+        ("tälenteen", "tälenne N;SG;GEN"),
+        # verbs of types 53 (-ttAA: hölkyttää, past hölkytti), 52 (-UA: striimautua, tölväytyä) and
+        # 67 (-ellA: tölvellä, tölvelee)
+        ("hölkytti", "hölkyttää V;IND;PST;3;SG"),
+        ("striimautui", "striimautua V;IND;PST;3;SG"),
+        ("tölväytyy", "tölväytyä V;IND;PRS;3;SG"),
+        ("tölvelee", "tölvellä V;IND;PRS;3;SG"),
+    ],
+)
+def test_the_guesser_reads_unknown_words_by_type_and_gradation(fin: morphfst.Language, word: str, expected: str) -> None:
+    guesses = fin.guess(word)
+    assert guesses and guesses[0].guessed and guesses[0].text == expected
+
+
+def test_the_guesser_does_not_replace_lexicon_readings(fin: morphfst.Language) -> None:
+    # a word the lexicon knows keeps its lexicon readings, guess or not (katu : kadun, tikku : tikun,
+    # muistaa : muisti — from memory)
+    for word in ("kadun", "tikun", "muisti", "rakenteen"):
+        known = fin.analyze(word)
+        assert known and not known[0].guessed
+        assert fin.analyze(word, guess=True) == known
+    # a guessed gradating lemma is inflected in the weak grade first, not with the strong one kept
+    # (tortikun, not tortikkun; lämpsäkkeen, not lämpsäkeen — common practice)
+    assert fin.generate("tortikku", "N;SG;GEN", guess=True)[0].form == "tortikun"
+    assert fin.generate("lämpsäke", "N;SG;GEN", guess=True)[0].form == "lämpsäkkeen"
+    assert fin.guess("tortikun")[0].lemma != "tortiku"
+    # type 73 with gradation: hokata : hokkaan like pakata : pakkaan (the illative of a noun hokka
+    # is spelt alike and ranks first)
+    assert "hokata V;IND;PRS;1;SG" in [a.text for a in fin.guess("hokkaan")]
+    # no verb guess of type 73 for -tAtA beside the -ttAA verb of type 53 (liikuttaa is not *liikutata)
+    assert not [a for a in fin.guess("hölkyttää") if a.lemma == "hölkytätä"]
