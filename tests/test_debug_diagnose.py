@@ -226,13 +226,15 @@ def test_diagnosis_on_turkish(tur: morphfst.Language) -> None:
     # or the copula's 1SG, after which the plural or (ev-im-ler read with the copula's 3PL) a case is
     # wanted; which of these equally cheap readings is reported depends on the grammar's weights.
     # Since the copula's 3PL begins with a marker (<c3>lAr), -ler is read as a plural, which an
-    # adjective's number slot (anumber) holds as well as the noun's.
+    # adjective's number slot (anumber) holds as well as the noun's; a singular noun's cases other than
+    # the nominative are the slot case_oblique (its nominative has a slot of its own, nominative_noun).
     d = diagnose(tur, "evimlerde")
     assert d.layer == "morphotactics" and d.morphotactics is not None
     assert d.morphotactics.kind == "order" and d.morphotactics.segmentation == "ev-im-ler-de"
     assert (d.morphotactics.after, d.morphotactics.wanted) in {
         ("predicate", "case"),
         ("predicate", "rcase"),
+        ("predicate", "case_oblique"),
         ("predicate", "number"),
         ("possessive", "number"),
         ("possessive", "anumber"),
