@@ -611,43 +611,24 @@ class FastAnalyzer:
         A guessed path's analysis side is the stem's letters, a part of speech and the guess mark
         (then affix ids and features), so the lemma ends one code before the mark: found with one
         ``str.find`` instead of the part-of-speech pattern."""
-        # (the loop is :meth:`_parts_at` and the building is :meth:`_build` written out: a guess reads
-        # about ten paths and builds about seven analyses, each with a stem of its own)
-        low: dict[Key, tuple[float, float, str, str, Shared]] = {}
+        low: dict[Key, tuple[float, Parts]] = {}
         bound: float | None = None
-        mark, plus = self.mark, self.plus
-        shared_of = self._shared.get
+        mark = self.mark
+        parts_at = self._parts_at
         for bounded, internal, weight in walked:
             if bound is not None and round(weight, 5) > bound:
                 break
             i = internal.find(mark) - 1
             if i < 0:  # not a plain guess: decode everything
                 return self.decode_all(surface, walked, True)[:limit]
-            lemma = internal[:i]
-            cut = bounded.find(plus)
-            if cut < 0:
-                stem_form, rest = bounded, ""
-            else:
-                stem_form, rest = bounded[:cut], bounded[cut:]
-            shared = shared_of((internal[i:], rest)) or self._parse_shared((internal[i:], rest), True)
-            affix_seg = shared[3]
-            key = (f"{lemma} {shared[4]}", f"{stem_form}-{affix_seg}" if stem_form and affix_seg else stem_form or affix_seg)
-            if key not in low:
-                low[key] = (round(weight, 5), weight, lemma, stem_form, shared)
+            parts = parts_at(internal, i, bounded, True)
+            if parts[5] not in low:
+                low[parts[5]] = (weight, parts)
                 if bound is None and len(low) >= limit:
                     bound = round(weight, 5)
-        ranked = sorted((kept[0], key, kept) for key, kept in low.items())[:limit]  # keys are distinct: no tie reaches ``kept``
-        glosses, ud = self.lang.glosses, self.lang.ud
+        ranked = sorted(low.items(), key=lambda item: (round(item[1][0], 5), item[0]))[:limit]
         stems: dict[tuple[str, str, str], Morph] = {}  # this word's guessed stems, kept for it alone
-        found = []
-        for _, _, (_, weight, lemma, stem_form, (pos, features, affixes, _, _)) in ranked:
-            stem = stems.get((stem_form, lemma, pos))
-            if stem is None:
-                stem = stems[(stem_form, lemma, pos)] = _new_morph(
-                    stem_form, glosses.get((lemma, pos), lemma), (pos,), "stem", lemma, None, None, None
-                )
-            found.append(_new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, ud, True))
-        return found
+        return [self._build(surface, parts, weight, True, stems) for _, (weight, parts) in ranked]
 
     def decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool = False) -> Analysis:
         """One :class:`Analysis` from a walked or composed path, through precomputed tables."""
