@@ -473,7 +473,7 @@ class Compiler:
         first part on the analysis of the bounded machine only (the compound's part is lemma and
         part of speech)."""
         s = self.space
-        features = {v for name, d in self.g.dimensions.items() if name != "pos" for v in d.values}
+        features = self.g.feature_labels
         tags = [n for n in names if n in self.g.pos_tags]
         derived = [n for n in names if n not in tags and n not in self.g.classes and n in features]
         classes = {n for n in names if n not in tags and n not in derived}

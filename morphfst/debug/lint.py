@@ -168,7 +168,7 @@ def cascade_checks(session: DebugSession) -> list[Finding]:
     written: set[int] = set()
     for rule in g.rules:
         try:
-            written |= _symbols(comp.rule_tau(rule).copy().project("output"))
+            written |= _written(session, rule)
             if not rule.optional and not rule.lenient:
                 resolved |= _symbols(comp.expr(rule.target))
         except (UserError, KeyError):
@@ -275,6 +275,11 @@ def _symbols(fst: pynini.Fst) -> set[int]:
     return {arc.ilabel for state in fst.states() for arc in fst.arcs(state) if arc.ilabel}
 
 
+def _written(session: DebugSession, rule: m.Rule) -> set[int]:
+    """The symbols a rule's replacement writes."""
+    return _symbols(session.compiler.rule_tau(rule).copy().project("output"))
+
+
 def shadowed_rules(session: DebugSession) -> list[Finding]:
     """Later rules whose every application an earlier obligatory rule takes first: the later target,
     left and right contexts contained in the earlier ones, the earlier replacement not giving the target
@@ -307,7 +312,7 @@ def shadowed_rules(session: DebugSession) -> list[Finding]:
 
     def writes(r: m.Rule) -> set[int]:
         if r.name not in written:
-            written[r.name] = _symbols(replacement(r))
+            written[r.name] = _written(session, r)
         return written[r.name]
 
     out = []

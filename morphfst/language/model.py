@@ -311,6 +311,11 @@ class Grammar:
         dim = self.dimensions.get("pos")
         return list(dim.values) if dim else []
 
+    @property
+    def feature_labels(self) -> set[str]:
+        """Every label of every dimension but the part of speech."""
+        return {v for name, d in self.dimensions.items() if name != "pos" for v in d.values}
+
 
 MORPH_BOUNDARY = "+"
 WORD_START = "^"

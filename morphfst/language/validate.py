@@ -249,7 +249,7 @@ def _check_compounds(g: m.Grammar) -> None:
     """Every name of a compound block is a part of speech, a class or a feature (a derived word); every
     label of a form a feature."""
     pos_tags = set(g.pos_tags)
-    features = {v for name, d in g.dimensions.items() if name != "pos" for v in d.values}
+    features = g.feature_labels
     for c in g.compounds:
         for key, names in (("first", c.first), ("last", c.last)):
             for name in names:
