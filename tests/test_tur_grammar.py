@@ -1592,3 +1592,34 @@ def test_words_added_from_the_third_running_text_probe(tur: morphfst.Language) -
     assert all(a.lemma != "MR" for a in tur.analyze("MR'e"))
     # no back suffixes on ral, no voicing of takyidat (*rallar, *takyidadı)
     assert tur.analyze("rallar") == [] and tur.analyze("takyidadı") == []
+
+
+def test_similative_on_nouns_and_the_evidential_copulas_converb(tur: morphfst.Language) -> None:
+    # -(I)msI 'something like, a sort of' on a noun as on an adjective (G&K on -(I)msI, from memory):
+    # bir çorbamsı, kulübemsi bir yapı, cehennemimsi bir sıcak; the stem voices before its vowel
+    assert tur.analyze("cehennemimsi")[0].text == "cehennem N;SIMIL;ADJ;SG;NOM"
+    assert tur.analyze("çorbamsı")[0].text == "çorba N;SIMIL;ADJ;SG;NOM"
+    assert tur.analyze("kitabımsı")[0].segmentation == "kitab-ımsı"
+    assert [f.form for f in tur.generate("kulübe", "N;SIMIL;ADJ;SG;NOM")] == ["kulübemsi"]
+    # a listed word spelt alike comes first (çocuksu, not a derivation)
+    assert tur.analyze("çocuksu")[0].text == "çocuksu ADJ;SG;NOM"
+    # no linking vowel dropped after a consonant, no unvoiced stop before it (*cehennemsi, *kitapımsı)
+    assert tur.analyze("cehennemsi") == [] and tur.analyze("kitapımsı") == []
+    # -(y)ken after the copula's evidential, as after the evidential -mIş itself (gelmişken): G&K on
+    # -(y)ken, from memory
+    assert tur.analyze("geliyormuşken")[0].text == "gelmek V;PROG;NFH;V.CVB;WHILE"
+    assert tur.analyze("gelmeliymişken")[0].text == "gelmek V;OBLIG;NFH;V.CVB;WHILE"
+    assert tur.analyze("öğrenciymişken")[0].text == "öğrenci N;SG;NOM;NFH;V.CVB;WHILE"
+    assert tur.analyze("yokmuşken")[0].text == "yok ADJ;NFH;V.CVB;WHILE"
+    assert [f.form for f in tur.generate("gelmek", "V;PROG;NFH;V.CVB;WHILE")][0] == "geliyormuşken"
+    # the converb takes no person or plural (*geliyormuşumken, *geliyormuşkenler)
+    assert tur.analyze("geliyormuşumken") == [] and tur.analyze("geliyormuşkenler") == []
+    # the evidential copula after the conditional, the reported unreal wish (keşke gelseymiş; G&K on
+    # -sAydI and -sAymIş, from memory), with the first set of person endings
+    assert tur.analyze("gelseymiş")[0].text == "gelmek V;COND;NFH;3;SG"
+    assert tur.analyze("gelmeseymişim")[0].text == "gelmek V;NEG;COND;NFH;1;SG"
+    assert [f.form for f in tur.generate("olmak", "V;COND;NFH;2;SG")] == ["olsaymışsın"]
+    # not after the copula's conditional, no second copula after it (*gelirseymiş, *gelseymişlerdi,
+    # *gelseymişse)
+    for word in ["gelirseymiş", "gelseymişlerdi", "gelseymişse", "gelseymişken"]:
+        assert tur.analyze(word) == [], word
