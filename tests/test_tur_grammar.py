@@ -1623,3 +1623,21 @@ def test_similative_on_nouns_and_the_evidential_copulas_converb(tur: morphfst.La
     # *gelseymişse)
     for word in ["gelirseymiş", "gelseymişlerdi", "gelseymişse", "gelseymişken"]:
         assert tur.analyze(word) == [], word
+
+
+def test_words_added_from_the_fourth_running_text_probe(tur: morphfst.Language) -> None:
+    # the planets (common practice: Satürn'ün halkaları, Merkür'e, Plüton'un), the legal determiner
+    # işbu 'this present' (işbu tutanak), akar 'mite' and varroa (the bee mite): TDK Güncel Türkçe
+    # Sözlük headwords, from memory
+    assert tur.analyze("Satürn'ün")[0].text == "Satürn PROPN;SG;GEN"
+    assert tur.analyze("Merkür'e")[0].text == "Merkür PROPN;SG;DAT"
+    assert tur.analyze("Plüton'un")[0].text == "Plüton PROPN;SG;GEN"
+    assert tur.analyze("Neptün'de")[0].text == "Neptün PROPN;SG;LOC"
+    assert tur.analyze("Uranüs'ten")[0].text == "Uranüs PROPN;SG;ABL"
+    assert tur.analyze("İşbu")[0].text == "işbu DET"
+    assert tur.analyze("akarlarıyla")[0].text == "akar N;PL;PSS3S;INS"
+    assert tur.analyze("varroa")[0].text == "varroa N;SG;NOM"
+    # the aorist of akmak stays first for akar, akarlar (a river akar 'flows')
+    assert tur.analyze("akar")[0].text == "akmak V;HAB;3;SG"
+    # front suffixes after the front vowels of the planets, no case on işbu (*Satürn'ın, *Neptün'da, *işbuyu)
+    assert tur.analyze("Satürn'ın") == [] and tur.analyze("Neptün'da") == [] and tur.analyze("işbuyu") == []
