@@ -1641,3 +1641,28 @@ def test_words_added_from_the_fourth_running_text_probe(tur: morphfst.Language) 
     assert tur.analyze("akar")[0].text == "akmak V;HAB;3;SG"
     # front suffixes after the front vowels of the planets, no case on işbu (*Satürn'ın, *Neptün'da, *işbuyu)
     assert tur.analyze("Satürn'ın") == [] and tur.analyze("Neptün'da") == [] and tur.analyze("işbuyu") == []
+
+
+def test_listed_words_before_a_frequent_verbs_participle_converb_or_the_particle(tur: morphfst.Language) -> None:
+    # a participle used as a noun costs more than the bare one, so a lexicon noun spelt like it keeps
+    # its forms (common practice of written text: alanında 'in its field', bakanları 'the ministers')
+    assert tur.analyze("alanında")[0].text == "alan N;SG;PSS3S;LOC"
+    assert tur.analyze("bakanları")[0].text == "bakan N;PL;PSS3S;NOM"
+    assert "bakmak V;V.PTCP;ADJ;PL;PSS3S;NOM" in [a.text for a in tur.analyze("bakanları")]
+    # a participle spelt like no listed word is read as before (gelenler, okuyanlara, yapılanı)
+    assert tur.analyze("gelenler")[0].text == "gelmek V;V.PTCP;ADJ;PL;NOM"
+    assert tur.analyze("okuyanlara")[0].text == "okumak V;V.PTCP;ADJ;PL;DAT"
+    assert [f.form for f in tur.generate("gelmek", "V;V.PTCP;ADJ;PL;DAT")] == ["gelenlere"]
+    # the adverbs -DIkçA has become come before the converb (oldukça 'quite', gittikçe
+    # 'increasingly'); the converb of other verbs stays (geçtikçe, okudukça)
+    assert tur.analyze("oldukça")[0].text == "oldukça ADV"
+    assert tur.analyze("gittikçe")[0].text == "gittikçe ADV"
+    assert tur.analyze("geçtikçe")[0].text == "geçmek V;V.CVB;ASLONG"
+    assert [f.form for f in tur.generate("olmak", "V;V.CVB;ASLONG")] == ["oldukça"]
+    # müdür 'director' before the question particle with -DIr; mıdır, midir, mudur stay the particle
+    assert tur.analyze("müdür")[0].text == "müdür N;SG;NOM"
+    assert "mi PART;ASSR" in [a.text for a in tur.analyze("müdür")]
+    for word in ["mıdır", "midir", "mudur"]:
+        assert tur.analyze(word)[0].text == "mi PART;ASSR", word
+    # no participle on the question particle nor a second -DIr (*müdürdür as mi)
+    assert all(a.lemma != "mi" for a in tur.analyze("müdürdür"))
