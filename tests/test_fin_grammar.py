@@ -1626,3 +1626,30 @@ def test_the_guesser_does_not_replace_lexicon_readings(fin: morphfst.Language) -
     assert "hokata V;IND;PRS;1;SG" in [a.text for a in fin.guess("hokkaan")]
     # no verb guess of type 73 for -tAtA beside the -ttAA verb of type 53 (liikuttaa is not *liikutata)
     assert not [a for a in fin.guess("hölkyttää") if a.lemma == "hölkytätä"]
+
+
+def test_no_question_clitic_on_a_connegative_or_the_2sg_imperative(fin: morphfst.Language) -> None:
+    # Karlsson (3rd ed., 2018), clitics and negation, from memory: -kO goes on the negative verb
+    # (enkö tiedä, eikö tule), never on the connegative or the 2sg imperative, so älkää puhdistako,
+    # älköön jättäkö are imperative connegatives; -kAAn, -hAn, -pA stay (en tiedäkään, tulehan)
+    assert [a.text for a in fin.analyze("puhdistako")] == ["puhdistaa V;IMP;NEG"]
+    assert fin.analyze("jättäkö")[0].text == "jättää V;IMP;NEG"
+    assert fin.analyze("tiedäkö") == []
+    assert fin.analyze("tuleko") == []
+    assert fin.generate("tulla", "V;IND;PRS;NEG;KO") == []
+    assert fin.generate("tulla", "V;IMP;2;SG;KO") == []
+    assert fin.analyze("voiko")[0].text == "voida V;IND;PRS;3;SG;KO"
+    assert fin.analyze("enkö")[0].text == "ei AUX;NEG;IND;1;SG;KO"
+    assert "tietää V;IND;PRS;NEG;KAAN" in [a.text for a in fin.analyze("tiedäkään")]
+    assert "tulla V;IMP;2;SG;PA" in [a.text for a in fin.analyze("tulepa")]
+
+
+def test_the_2pl_imperative_keeps_its_t_before_han_and_pa(fin: morphfst.Language) -> None:
+    # Karlsson (3rd ed., 2018), the imperative, from memory: before -hAn and -pA the 2pl imperative
+    # may keep an old final t (tulkaathan, olkaatpa), beside the commoner tulkaahan; never alone
+    assert readings_of(fin, "ilmoittakaathan")[0] == ("ilmoittaa V;IMP;2;PL;HAN", "ilmoitta-kaat-han")
+    assert fin.analyze("olkaatpa")[0].text == "olla V;IMP;2;PL;PA"
+    assert [f.form for f in fin.generate("tulla", "V;IMP;2;PL;HAN")][:2] == ["tulkaahan", "tulkaathan"]
+    assert [f.form for f in fin.generate("tulla", "V;IMP;2;PL")] == ["tulkaa"]
+    assert fin.analyze("tulkaat") == []
+    assert fin.analyze("tulkaatkin") == []
