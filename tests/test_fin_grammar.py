@@ -1653,3 +1653,17 @@ def test_the_2pl_imperative_keeps_its_t_before_han_and_pa(fin: morphfst.Language
     assert [f.form for f in fin.generate("tulla", "V;IMP;2;PL")] == ["tulkaa"]
     assert fin.analyze("tulkaat") == []
     assert fin.analyze("tulkaatkin") == []
+
+
+def test_numbers_with_a_decimal_comma_or_periods(fin: morphfst.Language) -> None:
+    # common practice: a decimal (3,5), a time (klo 14.30), a date (15.3.2024) or a version (3.2) is
+    # one token of the corpus tokenizer and a number written in digits; the decimal takes a case
+    # ending after a colon, read by its last digit (3,5:llä, 2,5:een)
+    assert fin.analyze("14.30")[0].text == "14.30 NUM;SG;NOM"
+    assert fin.analyze("15.3.2024")[0].text == "15.3.2024 NUM;SG;NOM"
+    assert fin.analyze("3,5")[0].text == "3,5 NUM;SG;NOM"
+    assert fin.analyze("3,5:llä")[0].text == "3,5 NUM;SG;AT+ESS"
+    # (the generator's colon may be written as an apostrophe: compared with the colon put back)
+    assert "2,5:een" in [f.form.replace("'", ":") for f in fin.generate("2,5", "NUM;SG;IN+ALL")]
+    for word in ["14.", ".30", "14..30", "3,", ",5", "3,5.", "a.b"]:
+        assert fin.analyze(word) == [], word
