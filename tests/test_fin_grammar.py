@@ -1667,3 +1667,39 @@ def test_numbers_with_a_decimal_comma_or_periods(fin: morphfst.Language) -> None
     assert "2,5:een" in [f.form.replace("'", ":") for f in fin.generate("2,5", "NUM;SG;IN+ALL")]
     for word in ["14.", ".30", "14..30", "3,", ",5", "3,5.", "a.b"]:
         assert fin.analyze(word) == [], word
+
+
+def test_new_lemmas_of_announcements_leaflets_and_reports(fin: morphfst.Language) -> None:
+    # common practice (from memory): words of railway notices, pharmacy leaflets, digs and village life
+    for lemma, feats, form in [
+        ("kuuri", "N;SG;GEN", "kuurin"),
+        ("lika", "N;SG;PRT", "likaa"),
+        ("lika", "N;SG;GEN", "lian"),
+        ("asutus", "N;SG;GEN", "asutuksen"),
+        ("iskos", "N;PL;PRT", "iskoksia"),
+        ("kauttakulku", "N;SG;GEN", "kauttakulun"),
+        ("köysistö", "N;SG;IN+ALL", "köysistöön"),
+        ("rajoite", "N;PL;PRT", "rajoitteita"),
+        ("kyläläinen", "N;PL;GEN", "kyläläisten"),
+        ("muunnelma", "N;PL;PRT", "muunnelmia"),
+        ("tähänastinen", "ADJ;PL;IN+ABL", "tähänastisista"),
+        ("suosittaa", "V;IND;PRS;3;PL", "suosittavat"),
+        ("suosittaa", "V;IND;PST;3;SG", "suositti"),
+        ("suistua", "V;IND;PST;3;SG", "suistui"),
+        ("matkata", "V;V.PTCP;ACT;PST;ADJ;SG;NOM", "matkannut"),
+        ("Saturnus", "PROPN;SG;GEN", "Saturnuksen"),
+        ("Jupiter", "PROPN;SG;PRT", "Jupiteria"),
+    ]:
+        assert form in [f.form for f in fin.generate(lemma, feats)], (lemma, feats)
+    # aueta has both the aukeaa and the aukenee present (Kotus types 74 and 72)
+    assert "aueta V;IND;PST;3;SG" in [a.text for a in fin.analyze("aukeni")]
+    assert "aueta V;IND;PRS;3;SG" in [a.text for a in fin.analyze("aukeaa")]
+    assert fin.analyze("kolmasti")[0].text == "kolmasti ADV"
+    assert fin.analyze("kuurin")[0].text == "kuuri N;SG;GEN"
+    assert fin.analyze("likaa")[0].text == "lika N;SG;PRT"
+    assert fin.analyze("suosittavat")[0].text == "suosittaa V;IND;PRS;3;PL"
+    assert fin.analyze("sivusta")[0].text == "sivu N;SG;IN+ABL"
+    assert fin.analyze("matkasi")[0].lemma == "matka"
+    # no forms of a wrong grade or type
+    for word in ["likkaa", "lijan", "kuuriä", "köysistöhön", "kauttakulvun", "suosittaavat"]:
+        assert fin.analyze(word) == [], word
