@@ -961,6 +961,47 @@ def test_added_verbs_and_adjectives_inflect_by_their_type(fin: morphfst.Language
         assert [f.form for f in fin.generate(lemma, features)][0] == form
 
 
+def test_domain_lemmas_inflect_by_their_type(fin: morphfst.Language) -> None:
+    # Kotus word list inflection types of lemmas of public life, science and the church (1J varanto,
+    # 9J seulonta, 10C juntta, 13 selusta, 14C parsinavetta, 4A evakko, 33C suoritin, 39 muunnos,
+    # 40 yhteentoimivuus, 41 messias, 48C pelote, 48J varmenne, 19 raitiotie with the front vowels of
+    # tie, 38 lakisääteinen, 5 maligni; verbs 62 kapituloida, 52F emansipoitua, 53C genotyypittää,
+    # 69 kuumasinkitä, 73 tinata, 74 siilota) — from memory
+    for lemma, features, form in [
+        ("varanto", "N;SG;GEN", "varannon"),
+        ("varanto", "N;PL;PRT", "varantoja"),
+        ("seulonta", "N;SG;GEN", "seulonnan"),
+        ("juntta", "N;SG;GEN", "juntan"),
+        ("selusta", "N;SG;IN+ESS", "selustassa"),
+        ("parsinavetta", "N;SG;GEN", "parsinavetan"),
+        ("evakko", "N;SG;GEN", "evakon"),
+        ("evakko", "N;PL;IN+ESS", "evakoissa"),
+        ("suoritin", "N;SG;GEN", "suorittimen"),
+        ("suoritin", "N;PL;PRT", "suorittimia"),
+        ("muunnos", "N;SG;GEN", "muunnoksen"),
+        ("yhteentoimivuus", "N;SG;GEN", "yhteentoimivuuden"),
+        ("messias", "N;SG;GEN", "messiaan"),
+        ("pelote", "N;SG;GEN", "pelotteen"),
+        ("varmenne", "N;SG;GEN", "varmenteen"),
+        ("varmenne", "N;PL;PRT", "varmenteita"),
+        ("raitiotie", "N;SG;PRT", "raitiotietä"),
+        ("raitiotie", "N;PL;IN+ESS", "raitioteissä"),
+        ("lakisääteinen", "ADJ;SG;GEN", "lakisääteisen"),
+        ("maligni", "ADJ;SG;PRT", "malignia"),
+        ("kapituloida", "V;IND;PRS;1;SG", "kapituloin"),
+        ("emansipoitua", "V;IND;PRS;1;SG", "emansipoidun"),
+        ("genotyypittää", "V;IND;PRS;1;SG", "genotyypitän"),
+        ("kuumasinkitä", "V;IND;PRS;1;SG", "kuumasinkitsen"),
+        ("tinata", "V;IND;PRS;1;SG", "tinaan"),
+        ("siilota", "V;IND;PRS;1;SG", "siiloan"),
+    ]:
+        assert [f.form for f in fin.generate(lemma, features)][0] == form
+    # forms these types do not make: no weak grade kept in the strong one, no back vowels after tie
+    # (Kotus word list, from memory)
+    for word in ("suoritimen", "evakkon", "varmeneen", "raitiotieta", "messiaksen", "pelotteeen"):
+        assert fin.analyze(word) == []
+
+
 def test_foreign_names_with_u_umlaut(fin: morphfst.Language) -> None:
     # ü is a front vowel in Finnish spelling of foreign names: Münchenissä, Zürichiin (common
     # practice, from memory)
