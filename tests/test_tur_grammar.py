@@ -1666,3 +1666,39 @@ def test_listed_words_before_a_frequent_verbs_participle_converb_or_the_particle
         assert tur.analyze(word)[0].text == "mi PART;ASSR", word
     # no participle on the question particle nor a second -DIr (*müdürdür as mi)
     assert all(a.lemma != "mi" for a in tur.analyze("müdürdür"))
+
+
+def test_learned_scientific_and_historical_lemmas_with_their_flags(tur: morphfst.Language) -> None:
+    def first(lemma: str, features: str) -> str:
+        return [f.form for f in tur.generate(lemma, features)][0]
+
+    # TDK spelling dictionary entries (from memory): emval 'goods' takes front suffixes ('emval, -li');
+    # kohort, varyant, belit keep their t ('-tu', '-tı', '-ti'); irtidat, müçtehit voice it ('-dı',
+    # '-di'); neşir loses its vowel ('-şri'); soykütüğü inflects on kütük (soykütükleri)
+    assert first("emval", "N;SG;ACC") == "emvali"
+    assert first("kohort", "N;SG;ACC") == "kohortu"
+    assert first("varyant", "N;SG;DAT") == "varyanta"
+    assert first("belit", "N;PL;ACC") == "belitleri" and first("belit", "N;SG;ACC") == "beliti"
+    assert first("irtidat", "N;SG;ACC") == "irtidadı"
+    assert first("müçtehit", "N;SG;DAT") == "müçtehide"
+    assert first("neşir", "N;SG;ACC") == "neşri"
+    assert first("soykütüğü", "N;PL;NOM") == "soykütükleri"
+    # -lA verbs of two syllables or more take the aorist -r (G&K, the aorist — from memory)
+    assert first("sinterlemek", "V;HAB;3;SG") == "sinterler"
+    # not generated or read: *emvalı, *kohordu, *irtidatı, *neşiri
+    assert "emvalı" not in [f.form for f in tur.generate("emval", "N;SG;ACC")]
+    assert all(a.lemma != "kohort" for a in tur.analyze("kohordu"))
+    assert all(a.lemma != "irtidat" for a in tur.analyze("irtidatı"))
+    assert all(a.lemma != "neşir" for a in tur.analyze("neşiri"))
+    # a listed word before an inflected form of another spelt alike (common practice: a dictionary
+    # word is read as itself): itibari 'nominal' and ırki 'racial' are not itibar, ırk + possessive
+    # with a harmony slip; kartografi 'cartography' is not kartograf + possessive; kanton 'canton'
+    # is not kanto + 'your'; monogami 'monogamy' is not monogam + possessive
+    best = {w: tur.analyze(w)[0].text for w in "itibari ırki kartografi kanton monogami".split()}
+    assert best["itibari"] == "itibari ADJ;SG;NOM" and best["ırki"] == "ırki ADJ;SG;NOM"
+    assert best["kartografi"] == "kartografi N;SG;NOM"
+    assert best["kanton"] == "kanton N;SG;NOM" and best["monogami"] == "monogami N;SG;NOM"
+    # the common word keeps its reading: arazi 'land' (not araz + possessive), oluşu is olmak's
+    # verbal noun (not oluş 'becoming')
+    assert tur.analyze("arazi")[0].text == "arazi N;SG;NOM"
+    assert tur.analyze("oluşu")[0].lemma == "olmak"
