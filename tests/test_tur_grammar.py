@@ -797,6 +797,37 @@ def test_verbs_and_nouns_added_by_hand(tur: morphfst.Language) -> None:
     assert first("kuşburnu", "N;PL;NOM") == "kuşburunları"
 
 
+def test_less_frequent_lemmas_keep_the_alternations_of_their_flags(tur: morphfst.Language) -> None:
+    def first(lemma: str, features: str) -> str:
+        return [f.form for f in tur.generate(lemma, features)][0]
+
+    # Arabic loans whose last vowel drops before a vowel (uzuv: uzvu, hışım: hışmı); loans that keep
+    # their t (kısıtı, ufunete, taksiratı); a one-syllable noun that voices (frenk: frengi); teberru
+    # takes -I without s (teberruu) (TDK spelling entries — from memory)
+    assert first("uzuv", "N;SG;ACC") == "uzvu"
+    assert first("uzuv", "N;PL;NOM") == "uzuvlar"
+    assert first("hışım", "N;SG;PSS3S;NOM") == "hışmı"
+    assert first("kısıt", "N;SG;ACC") == "kısıtı"
+    assert first("ufunet", "N;SG;DAT") == "ufunete"
+    assert first("taksirat", "N;SG;PSS3S;NOM") == "taksiratı"
+    assert first("frenk", "N;SG;ACC") == "frengi"
+    assert first("teberru", "N;SG;PSS3S;NOM") == "teberruu"
+    # yadetmek voices like the other etmek compounds (yadeder), koyvermek keeps vermek's -Ir
+    # (koyverir), a longer stem takes -Ir (tokuşur), a vowel stem -r (kürür) (G&K 8.2.3 — from memory)
+    assert first("yadetmek", "V;HAB;3;SG") == "yadeder"
+    assert first("koyvermek", "V;HAB;3;SG") == "koyverir"
+    assert first("tokuşmak", "V;HAB;3;SG") == "tokuşur"
+    assert first("kürümek", "V;HAB;3;SG") == "kürür"
+    # köpeküzümü is a compound with the possessive (G&K ch. 10 — from memory)
+    assert first("köpeküzümü", "N;SG;ACC") == "köpeküzümünü"
+    assert first("köpeküzümü", "N;PL;NOM") == "köpeküzümleri"
+    for word in ["kısıdı", "uzuvu", "hışımı", "frenki", "yadetir", "koyverer", "köpeküzümüsü"]:
+        assert tur.analyze(word) == [], word
+    # nouns no derivation spells: parıltı, salgı, günce 'diary' before gün's equative, istim 'steam'
+    for word, lemma in [("parıltı", "parıltı"), ("salgı", "salgı"), ("günce", "günce"), ("istim", "istim")]:
+        assert tur.analyze(word)[0].lemma == lemma, word
+
+
 def test_lexicon_nouns_in_yis_before_the_verbal_noun_and_the_reciprocal(tur: morphfst.Language) -> None:
     # -(y)Iş nouns with a meaning of their own are dictionary words and read first as themselves:
     # geliş 'arrival', görüş 'view', çıkış 'exit', bakış 'look', giriş 'entrance', dönüş 'return',
