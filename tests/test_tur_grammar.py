@@ -1733,3 +1733,53 @@ def test_learned_scientific_and_historical_lemmas_with_their_flags(tur: morphfst
     # verbal noun (not oluş 'becoming')
     assert tur.analyze("arazi")[0].text == "arazi N;SG;NOM"
     assert tur.analyze("oluşu")[0].lemma == "olmak"
+
+
+def test_lexicalized_derived_words_before_the_productive_derivation(tur: morphfst.Language) -> None:
+    # TDK Güncel Türkçe Sözlük headwords (from memory): sözleşme 'contract', geçenlerde 'recently',
+    # ikindi 'afternoon (prayer time)', alan 'area', bakan 'minister', çalışan 'employee', geçmiş 'the
+    # past', gelecek 'future', düşünce 'thought', oldukça 'quite', gittikçe 'increasingly', kural 'rule'
+    best = {
+        w: tur.analyze(w)[0].text
+        for w in "sözleşmeden geçenlerde ikindi alanında bakanlar çalışanları geçmişte gelecekte düşünce oldukça gittikçe kuralı".split()
+    }
+    assert best["sözleşmeden"] == "sözleşme N;SG;ABL"
+    assert best["geçenlerde"] == "geçenlerde ADV"
+    assert best["ikindi"] == "ikindi N;SG;NOM"
+    assert best["alanında"] == "alan N;SG;PSS3S;LOC"
+    assert best["bakanlar"] == "bakan N;PL;NOM"
+    assert best["çalışanları"] == "çalışan N;PL;PSS3S;NOM"
+    assert best["geçmişte"] == "geçmiş N;SG;LOC"
+    assert best["gelecekte"] == "gelecek N;SG;LOC"
+    assert best["düşünce"] == "düşünce N;SG;NOM"
+    assert best["oldukça"] == "oldukça ADV"
+    assert best["gittikçe"] == "gittikçe ADV"
+    assert best["kuralı"] == "kural N;SG;PSS3S;NOM"
+    # the productive readings stay, after them (G&K on participles and converbs, from memory)
+    assert "sözleşmek V;V.CVB;WTHT" in [a.text for a in tur.analyze("sözleşmeden")]
+    assert "geçmek V;V.PTCP;ADJ;PL;LOC" in [a.text for a in tur.analyze("geçenlerde")]
+    assert "olmak V;V.CVB;ASLONG" in [a.text for a in tur.analyze("oldukça")]
+    # gelecek hafta 'next week': without context the future and the participle come first; the noun
+    # 'future' is there too
+    readings = [a.text for a in tur.analyze("gelecek")]
+    assert readings[0] == "gelmek V;FUT;3;SG"
+    assert "gelmek V;V.PTCP;FUT;ADJ;SG;NOM" in readings and "gelecek N;SG;NOM" in readings
+    # a participle without a lexicon word spelt alike keeps its nominal uses; after it, the
+    # accusative before the possessive (olanı, geleni 'what is, who comes')
+    assert tur.analyze("gelenler")[0].text == "gelmek V;V.PTCP;ADJ;PL;NOM"
+    assert tur.analyze("okuyanlara")[0].text == "okumak V;V.PTCP;ADJ;PL;DAT"
+    assert tur.analyze("olanı")[0].text == "olmak V;V.PTCP;ADJ;SG;ACC"
+    # the converbs stay first where no lexicon word is spelt alike (gelmeden, gelince, geldikçe)
+    assert tur.analyze("gelmeden")[0].text == "gelmek V;V.CVB;WTHT"
+    assert tur.analyze("gelince")[0].text == "gelmek V;V.CVB;WHEN"
+    assert tur.analyze("geldikçe")[0].text == "gelmek V;V.CVB;ASLONG"
+    # -DIr after the copula's evidential is rare: asılmıştır 'has been hanged' is the verb's perfect,
+    # not asıl 'main' + copula (which stays, last of the three)
+    readings = [a.text for a in tur.analyze("asılmıştır")]
+    assert readings[0] in ("asmak V;PASS;NFH;3;SG;ASSR", "asılmak V;NFH;3;SG;ASSR")
+    assert readings.index("asıl ADJ;SG;NOM;NFH;3;SG;ASSR") > readings.index("asılmak V;NFH;3;SG;ASSR")
+    assert tur.analyze("gelmiştir")[0].text == "gelmek V;NFH;3;SG;ASSR"
+    # no participle cells lost, none made up (*gelenlerlar, *alanıdır as a participle's plural)
+    assert [f.form for f in tur.generate("gelmek", "V;V.PTCP;ADJ;PL;DAT")] == ["gelenlere"]
+    assert [f.form for f in tur.generate("gelmek", "V;V.PTCP;PRF;ADJ;SG;LOC")] == ["gelmişte"]
+    assert tur.analyze("gelenlerlar") == []
