@@ -1783,3 +1783,15 @@ def test_lexicalized_derived_words_before_the_productive_derivation(tur: morphfs
     assert [f.form for f in tur.generate("gelmek", "V;V.PTCP;ADJ;PL;DAT")] == ["gelenlere"]
     assert [f.form for f in tur.generate("gelmek", "V;V.PTCP;PRF;ADJ;SG;LOC")] == ["gelmişte"]
     assert tur.analyze("gelenlerlar") == []
+
+
+def test_roman_numerals_with_a_period_are_ordinals(tur: morphfst.Language) -> None:
+    # common practice (TDK Yazım Kılavuzu on Roman numerals, from memory): XX. yüzyıl 'the 20th
+    # century', II. Dünya Savaşı, IV. Murat, XIX. yüzyılda (the noun takes the suffix)
+    for word, lemma in [("XX.", "XX"), ("II.", "II"), ("IV.", "IV"), ("XIX.", "XIX"), ("XXXIX.", "XXXIX"), ("I.", "I")]:
+        assert tur.analyze(word)[0].text == f"{lemma} NUM;ORD;ADJ", word
+    # only well-formed numerals, only with the period, nothing after it (*IIII., *VV., *IC., *XXXX.;
+    # L, C, D, M are left out: XL is a size), and no suffix on the numeral (*II.'si, *XX.de)
+    for word in ["IIII.", "VV.", "IC.", "IIV.", "VX.", "XXXX.", "XL.", "II", "XX", "II.'si", "XX.de", "II..", "XX'inci"]:
+        assert tur.analyze(word) == [], word
+    assert [f.form for f in tur.generate("XX", "NUM;ORD;ADJ")] == ["XX."]
