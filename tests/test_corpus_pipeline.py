@@ -373,7 +373,7 @@ def test_survey_types_are_the_types_the_chunks_look_up(tur: morphfst.Language, c
     # A Dask partition's survey reads each distinct piece of bytes once for all its chunks; it must list
     # exactly the types the partition's chunks then look up: invalid bytes, NUL, non-NFC text, long and
     # cut lines and white space of every kind included.
-    data = bad_corpus() + "\ne\u0301v\u00a0evde\u2028kitap\u3000okul\x1cev".encode()
+    data = bad_corpus() + "\ne\u0301v\u00a0evde\u2028kitap\u3000okul\x1cev 23. madde 23. Madde XX.\u00a0yüzyıl 3.\n".encode()
     processor = ChunkProcessor(tur, Options(chunk_bytes=chunk_bytes, max_line_bytes=max_line_bytes))
     parts = list(chunks([data], 1, chunk_bytes, max_line_bytes))
     assert set(processor.types_of(parts)) == _types_by_chunk(processor, parts)
@@ -384,6 +384,8 @@ def test_survey_types_are_the_types_the_chunks_look_up(tur: morphfst.Language, c
     st.lists(
         st.sampled_from(
             [b"ev", b"\xc3\xa9", b"e\xcc\x81", b"\xff", b"\xc3", b" ", b"\n", b"'", b"-", b".", b"\xc2\xa0", b"\x00", b"a1"]
+            # an ordinal's period before a lower-case letter (23. madde, XX. \xc3\xbcye) and before a capital
+            + [b"23.", b"XX.", b"\t", b"\x1c", b"\xc3\xbc", b"\xc3\x9c", b"M"]
         ),
         max_size=40,
     )

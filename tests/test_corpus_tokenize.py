@@ -14,7 +14,7 @@ TOK = Tokenizer(("'", "’"))
 
 # Characters that exercise every branch: letters (with Turkish and Finnish ones), digits, joiners,
 # punctuation, white space of several kinds, control characters and a combining mark.
-ALPHABET = "aeıioöuükltrsşçğäAİIEK019'’-:.,!?… \t\u00a0\x00\x1f\u0307\u00ad_()\"«»"
+ALPHABET = "aeıioöuükltrsşçğäAİIEKVX019'’-:.,!?… \t\u00a0\x00\x1f\u0307\u00ad_()\"«»"
 
 
 @settings(max_examples=300, deadline=None)
@@ -153,3 +153,35 @@ def test_distinct_tokens_are_the_tokens_in_first_seen_order(text: str) -> None:
 def test_distinct_tokens_of_repeated_pieces() -> None:
     text = "Evde, evde ev. Evde!\nev (evde) Ankara'da Ankara'da"
     assert TOK.distinct_tokens(text) == ["Evde", "evde", "ev", "Ankara'da"]
+
+
+def test_an_ordinals_period_before_a_lower_case_letter_stays_in_the_token() -> None:
+    # common practice (Turkish and Finnish spelling): an ordinal in digits or Roman numerals is written
+    # with a period (23. madde, 3. sınıf, XX. yüzyıl, II. Dünya Savaşı, 3. luokka); the period before
+    # an upper-case letter or at the line's end is the end of a sentence
+    assert TOK.tokens("23. madde ve 3. sınıf") == ["23.", "madde", "ve", "3.", "sınıf"]
+    assert TOK.tokens("XX. yüzyıl, XIX.\tyüzyılda, IV. Murat") == ["XX.", "yüzyıl", "XIX.", "yüzyılda", "IV", "Murat"]
+    assert TOK.tokens("3. luokka ja 1.000. kerta") == ["3.", "luokka", "ja", "1.000", "kerta"]
+    assert TOK.tokens("yıl 2023. Sonra geldi 1990.") == ["yıl", "2023", "Sonra", "geldi", "1990"]
+    # not after a word, a decimal or an ill-formed numeral, not before a digit or a line end
+    line = "Dr. ayşe a23. madde 3.5. madde IIII. yüzyıl XL. beden 3. 4. kat"
+    assert TOK.tokens(line) == "Dr ayşe a23 madde 3.5 madde IIII yüzyıl XL beden 3 4. kat".split()
+    assert TOK.tokens_and_newlines("23.\nmadde") == ["23", "\n", "madde"]
+    assert TOK.distinct_tokens("23. madde 23. Madde\n23.\n(23. madde)") == ["23.", "madde", "23", "Madde"]
+    pieces = TOK.pieces("bkz. 3. sınıf.")
+    assert [p.text for p in pieces] == ["bkz", ".", " ", "3.", " ", "sınıf", "."]
+    assert [p.kind for p in pieces] == ["word", "punct", "space", "word", "space", "word", "punct"]
+
+
+# pieces around an ordinal's period: numbers, words, letters of either case, white space, line ends
+ORDINAL_PARTS = ["23.", "XX.", "IV.", "3.5.", "a.", "(3.", "madde", "Madde", "ü", "Ü", "x", "\n", " ", "  ", "\t", ".", "1"]
+
+
+@settings(max_examples=300, deadline=None)
+@given(st.lists(st.sampled_from(ORDINAL_PARTS), max_size=20))
+def test_ordinal_periods_fast_and_regular_expression_agree(parts: list[str]) -> None:
+    # the fast path looks at the next piece after a period; the expression's look-ahead does the same
+    text = "".join(parts)
+    assert TOK.tokens_and_newlines(text) == TOK.word_or_newline_re.findall(text)
+    every = TOK.word_or_newline_re.findall(text)
+    assert TOK.distinct_tokens(text) == [t for t in dict.fromkeys(every) if t != "\n"]

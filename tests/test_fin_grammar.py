@@ -15,6 +15,7 @@ from __future__ import annotations
 import pytest
 
 import morphfst
+from morphfst.runtime.tokenize import Tokenizer
 
 KARLSSON = "Karlsson, Finnish: An Essential Grammar (3rd ed., 2018)"
 
@@ -1575,6 +1576,19 @@ def test_ordinals_in_digits_take_a_colon_ending(fin: morphfst.Language) -> None:
         assert fin.analyze(word)[0].text == text, word
     assert fin.analyze("3:nen") == []
     assert fin.analyze("3:ns") == []
+
+
+def test_ordinals_in_digits_with_a_period(fin: morphfst.Language) -> None:
+    # common practice (Finnish orthography): an ordinal in digits is also written with a period and
+    # no ending, its case the noun's (3. luokka, 3. luokalla); the corpus tokenizer keeps that period
+    # before a lower-case letter
+    assert fin.analyze("3.")[0].text == "3 NUM"
+    assert fin.analyze("23.")[0].text == "23 NUM"
+    assert Tokenizer.for_meta(fin.meta).tokens("3. luokalla. Sitten 4.") == ["3.", "luokalla", "Sitten", "4"]
+    # nothing after the period, no period alone or twice (*3.:ssa, *3.ssa, *3..)
+    for word in ["3.:ssa", "3.ssa", "3..", ".", ".3"]:
+        assert fin.analyze(word) == [], word
+    assert [a.text for a in fin.analyze("3")][0].startswith("3 NUM")
 
 
 def test_new_lemmas_of_running_text(fin: morphfst.Language) -> None:

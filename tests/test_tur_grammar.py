@@ -1528,8 +1528,11 @@ def test_ordinals_written_with_a_period(tur: morphfst.Language) -> None:
     for word in ["23.'te", "23..", "3.ü", ".3", "3.üncü"]:
         assert tur.analyze(word) == [], word
     assert tur.analyze("3'üncü")[0].text == "3 NUM;ORD;ADJ;SG;NOM"
-    # the corpus tokenizer leaves the period out of the token (an ordinal or a sentence's end)
-    assert Tokenizer.for_meta(tur.meta).tokens("23. madde ve Dr. Ayşe geldi.") == ["23", "madde", "ve", "Dr", "Ayşe", "geldi"]
+    # the corpus tokenizer keeps an ordinal's period before a lower-case letter, and leaves a period
+    # before an upper-case letter or at the end out of the token (a sentence's end)
+    tokens = Tokenizer.for_meta(tur.meta).tokens("23. madde ve Dr. Ayşe XX. yüzyılda geldi 2023. Sonra")
+    assert tokens == ["23.", "madde", "ve", "Dr", "Ayşe", "XX.", "yüzyılda", "geldi", "2023", "Sonra"]
+    assert [tur.analyze(t)[0].text for t in ["23.", "XX."]] == ["23 NUM;ORD;ADJ", "XX NUM;ORD;ADJ"]
 
 
 def test_units_take_their_suffixes_as_said(tur: morphfst.Language) -> None:

@@ -10,7 +10,11 @@ space: ``lasten\u00adtarhassa`` is one token) inside a word, joined into one tok
 - a hyphen followed by more letters: ``sarı-kırmızı``, ``e-posta``;
 - a colon after an upper-case letter or a digit, before more letters: ``TRT:nin``, ``10:30``
   (a colon after a lower-case letter is a separator: ``not:bu`` is three pieces);
-- a period or a comma between digits: ``3.5``, ``1,000``.
+- a period or a comma between digits: ``3.5``, ``1,000``;
+- the period of an ordinal: after a digit string or a Roman numeral I-XXXIX written as a token of its
+  own, before white space (not a line end) and a lower-case letter: ``23. madde``, ``3. luokka``,
+  ``XX. yüzyıl`` (a period before an upper-case letter or at the line's end stays a piece of its own,
+  the end of a sentence: ``yıl 2023. Sonra``).
 
 Everything else (white space, punctuation, symbols, control characters) is a **separator** piece:
 white-space runs are one piece, a run of one repeated punctuation character (``...``, ``!!``) is one
@@ -58,6 +62,18 @@ def combining_marks() -> str:
 
 
 _UPPER = re.escape("".join(c for c in map(chr, range(0x10000)) if c.isupper()))  # upper-case letters of the BMP
+# lower-case letters of the BMP (category Ll: each is a token character): after an ordinal's period
+_LOWER_CHARS = "".join(c for c in map(chr, range(0x10000)) if unicodedata.category(c) == "Ll")
+_LOWER_SET = frozenset(_LOWER_CHARS)
+# an ordinal with its period: a digit string or a well-formed Roman numeral I-XXXIX, then the period,
+# then white space within the line and a lower-case letter (read by the look-ahead only)
+ORDINAL = rf"(?:\d+|(?=[IVX])X{{0,3}}(?:IX|IV|V?I{{0,3}}))\.(?=[^\S\n]+[{re.escape(_LOWER_CHARS)}])"
+# a period, white space within the line and a lower-case letter: where a piece's tokens may depend on
+# the next piece (the fast path looks at the next piece only on a line that has one)
+_DOT_BEFORE_LOWER = re.compile(rf"\.[^\S\n]+[{re.escape(_LOWER_CHARS)}]")
+# the same in UTF-8 bytes, generously: white space is an ASCII one (with the separators \x1c-\x1f) or
+# any non-ASCII byte, and so is the first byte of a lower-case letter other than a-z
+DOT_BEFORE_LOWER_BYTES = re.compile(rb"\.[\t\x0b\x0c\r \x1c-\x1f\x80-\xff]+[a-z\x80-\xff]")
 
 WORD = "word"
 SPACE = "space"
@@ -89,7 +105,8 @@ class Tokenizer:
             rf"|(?<=[{_UPPER}\d]):(?=[^\W_])"  # colon after an abbreviation or a number
             r"|(?<=\d)[.,](?=\d)"  # decimal point or digit group separator
         )
-        word = rf"[^\W_]+(?:(?:{joiner})[^\W_]*)*"
+        # the ordinal is tried first, at a token's start: it must end at its period
+        word = rf"{ORDINAL}|[^\W_]+(?:(?:{joiner})[^\W_]*)*"
         self.word_re = re.compile(word)
         self.word_or_newline_re = re.compile(rf"{word}|\n")
         self.sep_re = re.compile(r"\s+|(.)\1*", re.DOTALL)
@@ -131,17 +148,42 @@ class Tokenizer:
         :data:`EDGE_PUNCTUATION` joins nothing: a joiner needs a letter on both sides, and those
         characters are neither letters nor combining marks). Any other piece goes through the regular
         expression, which gives the same tokens on the piece as on the whole line (its look-arounds
-        see only letters, digits and joiners, which white space never is)."""
-        self._add_piece_tokens(line.split(), out)
+        see only letters, digits and joiners, which white space never is), but for the look-ahead
+        after an ordinal's period (:data:`ORDINAL`), which sees white space and a lower-case letter:
+        on a line with a period before those, a piece ending with a period is read with the first
+        letter of the next piece (:meth:`_ordinal_units`)."""
+        pieces = line.split()
+        self._add_piece_tokens(self._ordinal_units(pieces) if _DOT_BEFORE_LOWER.search(line) else pieces, out)
+
+    @staticmethod
+    def _ordinal_units(pieces: list[str]) -> list[str]:
+        """The pieces of one line, where a piece that ends with a period is followed by a lower-case
+        letter in the next piece written after a space: ``23.`` before ``madde`` is ``23. m``, which
+        :meth:`_add_piece_tokens` reads with the regular expression, leaving out the last token (the
+        letter). The expression's look-ahead after an ordinal's period sees white space and a letter
+        only, so the tokens are those of the whole line."""
+        last = len(pieces) - 1
+        return [
+            f"{piece} {pieces[i + 1][0]}" if i < last and piece[-1] == "." and pieces[i + 1][0] in _LOWER_SET else piece
+            for i, piece in enumerate(pieces)
+        ]
 
     def distinct_tokens(self, text: str) -> list[str]:
         """The distinct word tokens of a text of any number of lines, in first-seen order: the same as
         ``dict.fromkeys(self.tokens_and_newlines(text))`` without the line ends, but each distinct
         white-space-separated piece is read once (a token never spans white space, and a piece's tokens
-        do not depend on its neighbours: see :meth:`_add_tokens`). On running text this is several
-        times faster than reading every token."""
+        do not depend on its neighbours but for an ordinal's period: see :meth:`_add_tokens`). On
+        running text this is several times faster than reading every token."""
         out: list[str] = []
-        self._add_piece_tokens(dict.fromkeys(text.split()), out)
+        if _DOT_BEFORE_LOWER.search(text):
+            # a piece's tokens may depend on the next piece of its line (an ordinal's period)
+            units: dict[str, None] = {}
+            for line in text.split("\n"):
+                pieces = line.split()
+                units.update(dict.fromkeys(self._ordinal_units(pieces) if _DOT_BEFORE_LOWER.search(line) else pieces))
+            self._add_piece_tokens(units, out)
+        else:
+            self._add_piece_tokens(dict.fromkeys(text.split()), out)
         return list(dict.fromkeys(out))
 
     def _add_piece_tokens(self, pieces: Iterable[str], out: list[str]) -> None:
@@ -151,6 +193,9 @@ class Tokenizer:
         for piece in pieces:
             if piece.isalnum():
                 append(piece)
+                continue
+            if " " in piece:  # a piece and the lower-case letter after it (see _ordinal_units)
+                out.extend(findall(piece)[:-1])
                 continue
             core = piece.strip(EDGE_PUNCTUATION)
             if core.isalnum():
