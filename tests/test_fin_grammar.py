@@ -1720,8 +1720,10 @@ def test_numbers_with_a_decimal_comma_or_periods(fin: morphfst.Language) -> None
     assert fin.analyze("3,5:llä")[0].text == "3,5 NUM;SG;AT+ESS"
     # (the generator's colon may be written as an apostrophe: compared with the colon put back)
     assert "2,5:een" in [f.form.replace("'", ":") for f in fin.generate("2,5", "NUM;SG;IN+ALL")]
-    for word in ["14.", ".30", "14..30", "3,", ",5", "3,5.", "a.b"]:
+    for word in [".30", "14..30", "3,", ",5", "3,5.", "a.b"]:
         assert fin.analyze(word) == [], word
+    # a period after digits alone is an ordinal's (14. päivä), read as the number itself
+    assert fin.analyze("14.")[0].lemma == "14"
 
 
 def test_new_lemmas_of_announcements_leaflets_and_reports(fin: morphfst.Language) -> None:
