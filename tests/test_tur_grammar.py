@@ -1798,3 +1798,23 @@ def test_roman_numerals_with_a_period_are_ordinals(tur: morphfst.Language) -> No
     for word in ["IIII.", "VV.", "IC.", "IIV.", "VX.", "XXXX.", "XL.", "II", "XX", "II.'si", "XX.de", "II..", "XX'inci"]:
         assert tur.analyze(word) == [], word
     assert [f.form for f in tur.generate("XX", "NUM;ORD;ADJ")] == ["XX."]
+
+
+def test_names_without_their_apostrophe_are_read_last_and_never_generated(tur: morphfst.Language) -> None:
+    # informal writing leaves the apostrophe of a name out (Ankarada, Ahmetin, Türkiyenin; common
+    # practice): read as the name, at a cost, so that a common noun or a verb spelt alike comes first
+    # even when the word is capitalized at the start of a sentence (Denizde 'at sea', Barışın 'of
+    # peace', Aslanın 'of the lion'), and never generated (TDK Yazım Kılavuzu, from memory)
+    assert tur.analyze("Ankarada")[0].text == "Ankara PROPN;SG;LOC"
+    assert tur.analyze("Ahmetin")[0].text == "Ahmet PROPN;SG;GEN"
+    assert tur.analyze("Türkiyenin")[0].text == "Türkiye PROPN;SG;GEN"
+    assert tur.analyze("Ankarada")[0].weight > tur.analyze("Ankara'da")[0].weight
+    assert tur.analyze("Denizde")[0].text == "deniz N;SG;LOC"
+    assert tur.analyze("Barışın")[0].text == "barış N;SG;GEN"
+    assert tur.analyze("Aslanın")[0].text == "aslan N;SG;GEN"
+    readings = [a.text for a in tur.analyze("Barışın")]
+    assert readings.index("barışmak V;IMP;2;PL") < readings.index("Barış PROPN;SG;GEN")
+    assert [f.form for f in tur.generate("Ankara", "PROPN;SG;LOC")] == ["Ankara'da"]
+    assert [f.form for f in tur.generate("Ahmet", "PROPN;SG;GEN")] == ["Ahmet'in"]
+    # a common noun takes no apostrophe-less name reading (*denizde as a name before deniz)
+    assert tur.analyze("denizde")[0].text == "deniz N;SG;LOC"
