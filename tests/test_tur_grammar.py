@@ -1818,3 +1818,22 @@ def test_names_without_their_apostrophe_are_read_last_and_never_generated(tur: m
     assert [f.form for f in tur.generate("Ahmet", "PROPN;SG;GEN")] == ["Ahmet'in"]
     # a common noun takes no apostrophe-less name reading (*denizde as a name before deniz)
     assert tur.analyze("denizde")[0].text == "deniz N;SG;LOC"
+
+
+def test_ders_and_demek_and_the_distributive_kacar(tur: morphfst.Language) -> None:
+    # derse, dersin: ders 'lesson' + dative / genitive, and demek's aorist conditional / second person
+    # ('if he says', 'you say'; G&K on the aorist, from memory): both readings are there
+    for word, noun, verb in [
+        ("derse", "ders N;SG;DAT", "demek V;HAB;COND;3;SG"),
+        ("dersin", "ders N;SG;GEN", "demek V;HAB;2;SG"),
+    ]:
+        readings = [a.text for a in tur.analyze(word)]
+        assert noun in readings and verb in readings, word
+        capitalized = [a.text for a in tur.analyze(word.capitalize())]
+        assert noun in capitalized and verb in capitalized, word
+    # kaçar: the distributive of kaç 'how many each' and kaçmak's aorist 'flees' (G&K on
+    # distributives, from memory); the distributive takes no case (*kaçara)
+    readings = [a.text for a in tur.analyze("kaçar")]
+    assert "kaç NUM;DISTR;ADJ" in readings and "kaçmak V;HAB;3;SG" in readings
+    assert all("DISTR" not in a.text for a in tur.analyze("kaçara"))
+    assert [f.form for f in tur.generate("kaç", "NUM;DISTR;ADJ")] == ["kaçar"]
