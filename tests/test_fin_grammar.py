@@ -841,6 +841,30 @@ def test_colon_before_suffixes_of_abbreviations_and_digits(fin: morphfst.Languag
     assert "5 NUM;SG;PRT" in [a.text for a in fin.analyze("5:tä")]
 
 
+def test_the_generator_writes_the_colon_of_abbreviations_and_numbers(fin: morphfst.Language) -> None:
+    # common practice (Finnish orthography): the suffix of an abbreviation or a number in digits
+    # follows a colon (EU:n, EU:ssa, EU:hun, 5:een, 3:s), while k : ∅ between like vowels leaves an
+    # apostrophe (vaa'an); an apostrophe for the colon (EU'n) is read, below the colon, never written
+    for lemma, feats, form in [
+        ("EU", "PROPN;SG;GEN", "EU:n"),
+        ("EU", "PROPN;SG;IN+ESS", "EU:ssa"),
+        ("EU", "PROPN;SG;IN+ALL", "EU:hun"),
+        ("5", "NUM;SG;IN+ALL", "5:een"),
+        ("2020", "NUM;SG;IN+ESS", "2020:ssa"),
+        ("vaaka", "N;SG;GEN", "vaa'an"),
+    ]:
+        forms = [g.form for g in fin.generate(lemma, feats)]
+        assert forms and forms[0] == form, (lemma, feats, forms)
+    for lemma, feats in [("EU", "PROPN;SG;GEN"), ("EU", "PROPN;PL;IN+ESS"), ("5", "NUM;SG;IN+ALL"), ("TV", "N;SG;AT+ESS")]:
+        assert not [g.form for g in fin.generate(lemma, feats) if "'" in g.form], (lemma, feats)
+    assert not [g.form for g in fin.generate("vaaka", "N;SG;GEN") if ":" in g.form]
+    assert "3 NUM;SG;NOM" in [a.text for a in fin.analyze("3:s")]
+    apostrophe = fin.analyze("EU'n")
+    assert apostrophe and apostrophe[0].text == "EU PROPN;SG;GEN"
+    assert apostrophe[0].weight > fin.analyze("EU:n")[0].weight
+    assert not fin.analyze("vaa:an")
+
+
 def test_the_ud_mapping_covers_every_label(fin: morphfst.Language) -> None:
     # common practice: every feature label maps to UD v2 FEATS or UPOS
     best = fin.analyze("talossanikin")[0]
