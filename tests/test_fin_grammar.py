@@ -416,6 +416,11 @@ REVIEWED = (
     # (raa'an, nau'un), not in the contracted verbs (maata, maattiin) — from memory
     + cells("raaka", "ADJ", "SG;GEN=raa'an PL;NOM=raa'at SG;IN+ESS=raa'assa")
     + cells("naukua", "V", "IND;PRS;1;SG=nau'un")
+    # common practice (Finnish orthography): also before the plural i (reikä: rei'issä, rei'illä), and
+    # only between like vowels (reiän, reiät; ruoka: ruoan, ruuan; liukua: liu'un) — from memory
+    + cells("reikä", "N", "SG;GEN=reiän PL;NOM=reiät PL;IN+ESS=rei'issä PL;AT+ESS=rei'illä PL;IN+ALL=reikiin")
+    + cells("ruoka", "N", "SG;GEN=ruoan SG;IN+ESS=ruoassa")
+    + cells("liukua", "V", "IND;PRS;1;SG=liu'un IND;PST;1;SG=liu'uin")
     + cells("maata", "V", "V.PTCP;ACT;PST;ADJ;SG;NOM=maannut")
     # Kotus word list: type 14 rounds a final ä like a (kännykkä: kännyköitä) — from memory
     + cells("kännykkä", "N", "PL;PRT=kännyköitä PL;IN+ESS=kännyköissä")
@@ -796,6 +801,9 @@ WRONG = [
     "kotimaaan",  # kotimaahan — from memory
     # (not "hiiden" for haiden: it is the genitive of hiisi 'goblin', listed since)
     "raaan",  # raa'an — common practice
+    "reiissä",  # rei'issä — common practice
+    "rei'än",  # reiän: no apostrophe between unlike vowels — common practice
+    "ruo'an",  # ruoan — common practice
     "hyvempi",  # parempi — from memory
     "tekemäton",  # tekemätön — from memory
     "velen",  # veljen — from memory
