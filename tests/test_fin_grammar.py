@@ -1792,3 +1792,33 @@ def test_new_lemmas_of_announcements_leaflets_and_reports(fin: morphfst.Language
     # no forms of a wrong grade or type
     for word in ["likkaa", "lijan", "kuuriä", "köysistöhön", "kauttakulvun", "suosittaavat"]:
         assert fin.analyze(word) == [], word
+
+
+def test_case_forms_with_a_possessive_suffix_are_still_read(fin: morphfst.Language) -> None:
+    # Karlsson (3rd ed., 2018), possessive suffixes — from memory: a case ending takes them (talossaan,
+    # kerrassaan beside the adverb, ajoissaan), and a word with no adverb spelt alike reads them first
+    assert fin.analyze("talossaan")[0].text == "talo N;SG;IN+ESS;PSS3S"
+    assert fin.analyze("kirjoissani")[0].text == "kirja N;PL;IN+ESS;PSS1S"
+    assert "kerta N;SG;IN+ESS;PSS3S" in {a.text for a in fin.analyze("kerrassaan")}
+    assert "paikka N;PL;INS" in {a.text for a in fin.analyze("paikoin")}
+
+
+def test_signs_take_a_colon_and_the_ending_of_the_word_said(fin: morphfst.Language) -> None:
+    # common practice (Finnish orthography): a sign before a case ending takes a colon and the ending
+    # of the word said, % prosentti (5 %:n, %:lla, %:iin, %:a), € euro (€:n, €:oon), § pykälä (§:n,
+    # §:ssä, §:ään)
+    for word, analysis in [
+        ("%:n", "% N;SG;GEN"),
+        ("%:lla", "% N;SG;AT+ESS"),
+        ("%:iin", "% N;SG;IN+ALL"),
+        ("%:a", "% N;SG;PRT"),
+        ("€:n", "€ N;SG;GEN"),
+        ("€:oon", "€ N;SG;IN+ALL"),
+        ("§:n", "§ N;SG;GEN"),
+        ("§:ssä", "§ N;SG;IN+ESS"),
+        ("§:ään", "§ N;SG;IN+ALL"),
+    ]:
+        assert analysis in _readings(fin, word), word
+    assert [g.form for g in fin.generate("%", "N;SG;IN+ALL")] == ["%:iin"]
+    for wrong in ["%:ssä", "%:hin", "%:ta", "§:ssa", "€:hen", "%n"]:
+        assert not fin.analyze(wrong), wrong
