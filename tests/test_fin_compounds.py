@@ -213,3 +213,12 @@ def test_info_lists_the_compound_block(fin: morphfst.Language, capsys: pytest.Ca
     assert "compounds (analysis only):" in out
     block = fin.meta["compounds"][0]
     assert block["parts"] == 3 and block["min"] == 3 and ["SG", "NOM"] in block["forms"]
+
+
+def test_an_adjective_last_part_follows_one_first_part_only(fin: morphfst.Language) -> None:
+    # common practice: a two-part compound may end in an adjective (verovapaa), but a third part does
+    # not split the -UUs noun of a compound (muotiteollisuuden: muoti + teollisuus, not muoti +
+    # teollis- + uusi)
+    assert not [a for a in fin.analyze("muotiteollisuuden") if a.lemma == "muotiteollisuusi"]
+    assert fin.analyze("muotiteollisuuden")[0].text == "muotiteollisuus N;SG;GEN"
+    assert "verovapaa ADJ;SG;NOM" in {a.text for a in fin.analyze("verovapaa")}

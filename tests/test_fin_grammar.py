@@ -1822,3 +1822,21 @@ def test_signs_take_a_colon_and_the_ending_of_the_word_said(fin: morphfst.Langua
     assert [g.form for g in fin.generate("%", "N;SG;IN+ALL")] == ["%:iin"]
     for wrong in ["%:ssä", "%:hin", "%:ta", "§:ssa", "€:hen", "%n"]:
         assert not fin.analyze(wrong), wrong
+
+
+def test_kangasala_drops_its_last_syllable_before_the_l_cases(fin: morphfst.Language) -> None:
+    # common practice (Finnish place names): Kangasala takes the external local cases as Kangasalla,
+    # Kangasalta, Kangasalle (not *Kangasalalla), the other cases on the whole stem (Kangasalan,
+    # Kangasalaan); Hattula takes the inner cases, unchanged (Hattulassa)
+    for feats, form in [
+        ("PROPN;SG;AT+ESS", "Kangasalla"),
+        ("PROPN;SG;AT+ABL", "Kangasalta"),
+        ("PROPN;SG;AT+ALL", "Kangasalle"),
+        ("PROPN;SG;GEN", "Kangasalan"),
+        ("PROPN;SG;IN+ALL", "Kangasalaan"),
+    ]:
+        assert [g.form for g in fin.generate("Kangasala", feats)] == [form], feats
+    assert fin.analyze("Kangasalla")[0].text == "Kangasala PROPN;SG;AT+ESS"
+    assert not [a for a in fin.analyze("Kangasalalla") if a.lemma == "Kangasala"]
+    assert fin.analyze("Hattulassa")[0].text == "Hattula PROPN;SG;IN+ESS"
+    assert not fin.analyze("Hattulla")
