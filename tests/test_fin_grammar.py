@@ -1840,3 +1840,29 @@ def test_kangasala_drops_its_last_syllable_before_the_l_cases(fin: morphfst.Lang
     assert not [a for a in fin.analyze("Kangasalalla") if a.lemma == "Kangasala"]
     assert fin.analyze("Hattulassa")[0].text == "Hattula PROPN;SG;IN+ESS"
     assert not fin.analyze("Hattulla")
+
+
+def test_action_nouns_and_moderatives_of_listed_words(fin: morphfst.Language) -> None:
+    # the standard word list's types (from memory): -ointi is type 5 with nt : nn (vartioinnissa),
+    # -elU type 2 (vuorottelujen), -Us of an -AtA verb type 39 with the verb's strong grade
+    # (ruoppauksen, not *ruopauksen); -hkO adjectives type 1 on the adjective's vowel stem
+    # (raskaahko, raskaahkon); -illA frequentatives type 67 (huomailen), 54I temmeltää (temmelsi)
+    for lemma, feats, form in [
+        ("vartiointi", "N;SG;IN+ESS", "vartioinnissa"),
+        ("vartiointi", "N;PL;PRT", "vartiointeja"),
+        ("vuorottelu", "N;PL;GEN", "vuorottelujen"),
+        ("ruoppaus", "N;SG;GEN", "ruoppauksen"),
+        ("ruoppaus", "N;PL;PRT", "ruoppauksia"),
+        ("raskaahko", "ADJ;SG;GEN", "raskaahkon"),
+        ("hartiakas", "ADJ;SG;GEN", "hartiakkaan"),
+        ("huhmar", "N;SG;IN+ESS", "huhmaressa"),
+        ("huomailla", "V;IND;PRS;1;SG", "huomailen"),
+        ("temmeltää", "V;IND;PST;3;SG", "temmelsi"),
+        ("kesytellä", "V;IND;PRS;3;SG", "kesyttelee"),
+        ("pasteuroida", "V;IND;PST;3;SG", "pasteuroi"),
+    ]:
+        assert form in [f.form for f in fin.generate(lemma, feats)], (lemma, feats)
+    assert "ruopauksen" not in [f.form for f in fin.generate("ruoppaus", "N;SG;GEN")]
+    assert "vartiointissa" not in [f.form for f in fin.generate("vartiointi", "N;SG;IN+ESS")]
+    assert "kesytelee" not in [f.form for f in fin.generate("kesytellä", "V;IND;PRS;3;SG")]
+    assert fin.analyze("vartioinnissa")[0].text == "vartiointi N;SG;IN+ESS"
