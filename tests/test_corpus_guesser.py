@@ -170,3 +170,26 @@ def test_finnish_lemmas_the_lexicon_lacks_are_generated_by_their_guessed_type(
 ) -> None:
     assert not fin.generate(lemma, features)
     assert [f.form for f in fin.generate(lemma, features, guess=True)][:1] == [form]
+
+
+def test_a_new_word_is_guessed_a_noun_before_an_adjective(tur: morphfst.Language) -> None:
+    # The class prior (Compiler.guess_priors): the Turkish lexicon lists about three nouns for each
+    # adjective, so a bare unknown word is a noun first; before, the two tied and the analysis text
+    # ranked the adjective first. The adjective reading is still there, a little dearer.
+    for word in ["fırzopluk", "glorfi"]:
+        guesses = tur.guess(word)
+        assert guesses[0].pos == "N", word
+        adjective = [g for g in guesses if g.pos == "ADJ" and g.segmentation == guesses[0].segmentation]
+        assert adjective and adjective[0].weight > guesses[0].weight, word
+
+
+def test_guess_priors_follow_the_lexicon_shares() -> None:
+    from morphfst.compile.compiler import UNSEEN, Compiler
+    from morphfst.compile.loader import load_model
+
+    root = Path(__file__).resolve().parent.parent
+    priors = Compiler(load_model(root / "grammars" / "tur.mfg")).guess_priors()
+    # more nouns than adjectives than verbs in the lexicon: a lower prior for each, the commonest 0,
+    # and a (class, part of speech) no entry has dearer than any
+    assert priors[("noun", "N")] == 0.0
+    assert priors[("noun", "N")] < priors[("adj", "ADJ")] < priors[("verb", "V")] < priors[UNSEEN]
