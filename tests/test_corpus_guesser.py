@@ -173,7 +173,7 @@ def test_finnish_lemmas_the_lexicon_lacks_are_generated_by_their_guessed_type(
 
 
 def test_a_new_word_is_guessed_a_noun_before_an_adjective(tur: morphfst.Language) -> None:
-    # The class prior (Compiler.guess_priors): the Turkish lexicon lists about three nouns for each
+    # The guess prior (Compiler.guess_priors): the Turkish lexicon lists about three nouns for each
     # adjective, so a bare unknown word is a noun first; before, the two tied and the analysis text
     # ranked the adjective first. The adjective reading is still there, a little dearer.
     for word in ["fırzopluk", "glorfi"]:
@@ -184,12 +184,23 @@ def test_a_new_word_is_guessed_a_noun_before_an_adjective(tur: morphfst.Language
 
 
 def test_guess_priors_follow_the_lexicon_shares() -> None:
-    from morphfst.compile.compiler import UNSEEN, Compiler
+    from morphfst.compile.compiler import Compiler
     from morphfst.compile.loader import load_model
 
     root = Path(__file__).resolve().parent.parent
-    priors = Compiler(load_model(root / "grammars" / "tur.mfg")).guess_priors()
-    # more nouns than adjectives than verbs in the lexicon: a lower prior for each, the commonest 0,
-    # and a (class, part of speech) no entry has dearer than any
-    assert priors[("noun", "N")] == 0.0
-    assert priors[("noun", "N")] < priors[("adj", "ADJ")] < priors[("verb", "V")] < priors[UNSEEN]
+    tur = Compiler(load_model(root / "grammars" / "tur.mfg")).guess_priors()
+    # classes of one part of speech: more nouns than adjectives than verbs in the lexicon, a lower
+    # prior for each, the commonest 0
+    assert tur[("noun", "N")] == 0.0
+    assert tur[("noun", "N")] < tur[("adj", "ADJ")] < tur[("verb", "V")]
+    fin = Compiler(load_model(root / "grammars" / "fin.mfg")).guess_priors()
+    # a class of two: the Finnish -nen words (type 38) are mostly adjectives; the gradating and the
+    # plain noun types weigh alike (their order is the grammar's)
+    assert fin[("guess38", "ADJ")] == 0.0 < fin[("guess38", "N")]
+    assert fin[("guess1", "N")] == fin[("guess1A", "N")] == 0.0
+
+
+def test_a_finnish_nen_word_is_guessed_an_adjective_first(fin: morphfst.Language) -> None:
+    # common practice: the -inen words of type 38 are mostly adjectives (the stem invented)
+    first = fin.guess("tromppiselle")[0]
+    assert (first.lemma, first.pos) == ("tromppinen", "ADJ")

@@ -530,7 +530,7 @@ class Compiler:
         :data:`GUESS_OFFSET` (so it always ranks below an analysis with a lexicon stem) plus
         :data:`GUESS_STEM_WEIGHT` per stem letter (shorter stems, i.e. longer affix chains, rank first), half
         of it counted on the lemma and half on the stem the class's stem rules make of it, plus the
-        class's prior for each part of speech (``priors``, see :meth:`guess_priors`).
+        prior of each part of speech (``priors``, see :meth:`guess_priors`).
         """
         if klass.guess is None:
             return None
@@ -549,39 +549,49 @@ class Compiler:
         stems = pynini.compose(lemma_to_stem(self, klass, lemmas), weigh.optimize())
         tags = klass.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == klass.name}) or self.g.pos_tags
         priors = priors or {}
-        unseen = priors.get(UNSEEN, 0.0)
-        tail = union(acc(s.code(f"pos:{t}"), weight=priors.get((klass.name, t), unseen)) for t in tags) + acc(mark)
+        tail = union(acc(s.code(f"pos:{t}"), weight=priors.get((klass.name, t), 0.0)) for t in tags) + acc(mark)
         after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""
         return stems + cross(tail, after) + pynini.accep("", weight=GUESS_OFFSET)
 
     def guess_priors(self) -> dict[tuple[str, str], float]:
-        """A prior for each (class, part of speech) a word may be guessed as: :data:`GUESS_PRIOR_SCALE`
-        times -ln of its share of the lexicon's entries that a guess class stands for (its own, and
-        those of the classes with its stem rules), add-one smoothed; the commonest pair weighs 0, a
-        pair no entry has weighs most (key :data:`UNSEEN`).
+        """A prior for each (class, part of speech) a word may be guessed as, :data:`GUESS_PRIOR_SCALE`
+        times -ln a share of lexicon entries (add-one smoothed, the likeliest 0):
 
-        An unknown word is more likely a new noun than a new adjective, as the lexicon's own lemmas
-        are (a relative-frequency class prior, as naive Bayes estimates it): without it, guesses that
-        differ only by part of speech tied and were ranked by their text (ADJ before N)."""
-        # a guess class counts its own entries and those of the classes with its stem rules (a
-        # grammar may keep its guess classes apart: Finnish guess1A has the stems of type 1A)
-        by_stems: dict[tuple[str, ...], list[str]] = defaultdict(list)
-        for k in self.g.classes.values():
-            if k.guess is not None and k.stems:
-                by_stems[tuple(k.stems)].append(k.name)
-        counts: dict[tuple[str, str], int] = {}
-        for e in self.g.lexicon:
-            klass = self.g.classes.get(e.klass)
-            guessers = list(by_stems.get(tuple(klass.stems), ())) if klass is not None and klass.stems else []
-            if klass is not None and klass.guess is not None and e.klass not in guessers:
-                guessers.append(e.klass)
-            for name in guessers:
-                counts[(name, e.pos_tag)] = counts.get((name, e.pos_tag), 0) + 1
-        total = sum(counts.values())
-        raw = {key: -math.log((n + 1) / (total + 1)) for key, n in counts.items()}
-        raw[UNSEEN] = -math.log(1 / (total + 1))
-        low = min(raw.values())
-        return {key: GUESS_PRIOR_SCALE * (value - low) for key, value in raw.items()}
+        - a class that gives one part of speech: that part of speech's share among the parts of speech
+          such classes give (a Turkish unknown word is a noun before an adjective, as the lexicon's own
+          lemmas are);
+        - a class that gives several: each one's share among the entries of the classes with its stem
+          rules (a Finnish -nen word is an adjective before a noun).
+
+        Without it, guesses that differed only by part of speech tied and were ranked by their text
+        (ADJ before N). The classes of one part of speech keep the order their weights give (the
+        grammar's choice among inflection types: Finnish *tortikun* is the gradating *tortikku*)."""
+        guess = [k for k in self.g.classes.values() if k.guess is not None]
+
+        def tags_of(k: m.StemClass) -> list[str]:
+            return k.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == k.name}) or self.g.pos_tags
+
+        def scaled(counts: dict[str, int]) -> dict[str, float]:
+            total = sum(counts.values())
+            raw = {tag: -math.log((n + 1) / (total + 1)) for tag, n in counts.items()}
+            low = min(raw.values(), default=0.0)
+            return {tag: GUESS_PRIOR_SCALE * (value - low) for tag, value in raw.items()}
+
+        single = {tags_of(k)[0] for k in guess if len(tags_of(k)) == 1}
+        overall = scaled({tag: sum(1 for e in self.g.lexicon if e.pos_tag == tag) for tag in single})
+        priors: dict[tuple[str, str], float] = {}
+        for k in guess:
+            tags = tags_of(k)
+            if len(tags) == 1:
+                priors[(k.name, tags[0])] = overall[tags[0]]
+                continue
+            mine = {c.name for c in self.g.classes.values() if c.name == k.name or (k.stems and c.stems == k.stems)}
+            counts = dict.fromkeys(tags, 0)
+            for e in self.g.lexicon:
+                if e.klass in mine and e.pos_tag in counts:
+                    counts[e.pos_tag] += 1
+            priors.update({(k.name, tag): value for tag, value in scaled(counts).items()})
+        return priors
 
     def guesser(self) -> pynini.Fst | None:
         """Bounded surface → internal analysis of guessed words (``None`` when no class has a guess pattern).
@@ -626,11 +636,10 @@ GUESS_OFFSET = 100.0  # weight added to every guessed analysis
 # Turkish 9.5 % at 0.3, 31.3 % at 1.5; Finnish 25.0 %, 25.8 %).
 GUESS_STEM_WEIGHT = 1.5
 GUESS_MORPH_WEIGHT = 0.15  # weight per guessed-word affix with a surface form
-# Scale of the class prior (Compiler.guess_priors), chosen as GUESS_STEM_WEIGHT was (bench/guess_report.py,
+# Scale of the part-of-speech prior (Compiler.guess_priors), chosen as GUESS_STEM_WEIGHT was (bench/guess_report.py,
 # first guess with the lexicon's lemma and part of speech / segmentation): Turkish 46.3 / 71.4 % without,
 # 55.8 / 71.4 % at 0.05, 55.9 / 71.5 % at 0.15, 55.7 / 71.2 % at 0.3, 54.2 / 70.2 % at 0.5, 53.3 / 68.7 % at 1.
 GUESS_PRIOR_SCALE = 0.15
-UNSEEN = ("", "")  # the key of guess_priors for a (class, part of speech) no lexicon entry has
 SEAM_BASE_WEIGHT = 1.0  # added to every seam besides the block's weight and the heaviest lexicon entry's
 
 
