@@ -19,7 +19,7 @@ import functools
 import itertools
 import math
 import time
-from collections import defaultdict
+from collections import Counter, defaultdict
 from collections.abc import Callable, Mapping
 from dataclasses import dataclass, field
 from typing import Literal
@@ -547,11 +547,16 @@ class Compiler:
             [acc(c, weight=half) for c in self.letter_codes] + [acc(c) for c in self.underlying_codes if c in plain]
         ).closure()
         stems = pynini.compose(lemma_to_stem(self, klass, lemmas), weigh.optimize())
-        tags = klass.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == klass.name}) or self.g.pos_tags
+        tags = self.guess_tags(klass)
         priors = priors or {}
         tail = union(acc(s.code(f"pos:{t}"), weight=priors.get((klass.name, t), 0.0)) for t in tags) + acc(mark)
         after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""
         return stems + cross(tail, after) + pynini.accep("", weight=GUESS_OFFSET)
+
+    def guess_tags(self, klass: m.StemClass) -> list[str]:
+        """The parts of speech a word guessed into ``klass`` may have: the class's own list, else those of
+        its lexicon entries, else every part of speech."""
+        return klass.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == klass.name}) or self.g.pos_tags
 
     def guess_priors(self) -> dict[tuple[str, str], float]:
         """A prior for each (class, part of speech) a word may be guessed as, :data:`GUESS_PRIOR_SCALE`
@@ -566,10 +571,8 @@ class Compiler:
         Without it, guesses that differed only by part of speech tied and were ranked by their text
         (ADJ before N). The classes of one part of speech keep the order their weights give (the
         grammar's choice among inflection types: Finnish *tortikun* is the gradating *tortikku*)."""
-        guess = [k for k in self.g.classes.values() if k.guess is not None]
-
-        def tags_of(k: m.StemClass) -> list[str]:
-            return k.pos_allowed or sorted({e.pos_tag for e in self.g.lexicon if e.klass == k.name}) or self.g.pos_tags
+        tags_of = {k.name: self.guess_tags(k) for k in self.g.classes.values() if k.guess is not None}
+        per_tag = Counter(e.pos_tag for e in self.g.lexicon)
 
         def scaled(counts: dict[str, int]) -> dict[str, float]:
             total = sum(counts.values())
@@ -577,15 +580,14 @@ class Compiler:
             low = min(raw.values(), default=0.0)
             return {tag: GUESS_PRIOR_SCALE * (value - low) for tag, value in raw.items()}
 
-        single = {tags_of(k)[0] for k in guess if len(tags_of(k)) == 1}
-        overall = scaled({tag: sum(1 for e in self.g.lexicon if e.pos_tag == tag) for tag in single})
+        overall = scaled({tags[0]: per_tag[tags[0]] for tags in tags_of.values() if len(tags) == 1})
         priors: dict[tuple[str, str], float] = {}
-        for k in guess:
-            tags = tags_of(k)
+        for name, tags in tags_of.items():
             if len(tags) == 1:
-                priors[(k.name, tags[0])] = overall[tags[0]]
+                priors[(name, tags[0])] = overall[tags[0]]
                 continue
-            mine = {c.name for c in self.g.classes.values() if c.name == k.name or (k.stems and c.stems == k.stems)}
+            k = self.g.classes[name]
+            mine = {c.name for c in self.g.classes.values() if c.name == name or (k.stems and c.stems == k.stems)}
             counts = dict.fromkeys(tags, 0)
             for e in self.g.lexicon:
                 if e.klass in mine and e.pos_tag in counts:

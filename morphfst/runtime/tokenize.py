@@ -152,8 +152,14 @@ class Tokenizer:
         after an ordinal's period (:data:`ORDINAL`), which sees white space and a lower-case letter:
         on a line with a period before those, a piece ending with a period is read with the first
         letter of the next piece (:meth:`_ordinal_units`)."""
+        self._add_piece_tokens(self._line_units(line), out)
+
+    @classmethod
+    def _line_units(cls, line: str) -> list[str]:
+        """The white-space-separated pieces of one line, through :meth:`_ordinal_units` on a line with a
+        period before white space and a lower-case letter."""
         pieces = line.split()
-        self._add_piece_tokens(self._ordinal_units(pieces) if _DOT_BEFORE_LOWER.search(line) else pieces, out)
+        return cls._ordinal_units(pieces) if _DOT_BEFORE_LOWER.search(line) else pieces
 
     @staticmethod
     def _ordinal_units(pieces: list[str]) -> list[str]:
@@ -179,8 +185,7 @@ class Tokenizer:
             # a piece's tokens may depend on the next piece of its line (an ordinal's period)
             units: dict[str, None] = {}
             for line in text.split("\n"):
-                pieces = line.split()
-                units.update(dict.fromkeys(self._ordinal_units(pieces) if _DOT_BEFORE_LOWER.search(line) else pieces))
+                units.update(dict.fromkeys(self._line_units(line)))
             self._add_piece_tokens(units, out)
         else:
             self._add_piece_tokens(dict.fromkeys(text.split()), out)
