@@ -52,7 +52,8 @@ noisy, so only ratios measured in the same run are worth comparing.
    with ``-j 1``, ``-j 2``, ``--dask -j 2`` (a local Dask cluster started by the command; output
    to a directory; its partitions are the command's default unless --partition-mb is given) and
    ``--dask ADDRESS`` (a local cluster of 2 single-thread workers started once before the runs and
-   kept running, as a cluster is in real use: the figure without the cluster's start).
+   kept running, as a cluster is in real use: the figure without the cluster's start; its workers keep
+   the grammar loaded from one run to the next, and each run starts with an empty cache of word types).
    The CPU seconds of each command (with the processes it waited for) are printed beside its wall
    time: CPU/wall tells how much ran in parallel. Targets: -j 2 at least 1.7 x faster than -j 1;
    Dask within 15 % of -j 2 (Dask time at most 1.15 x the -j 2 time); the share of word types

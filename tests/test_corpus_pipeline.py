@@ -260,6 +260,37 @@ def test_dask_local_cluster_keeps_every_token(
     assert [e["first_line"] for e in manifest["outputs"]][0] == 1
 
 
+def test_dask_running_cluster_keeps_the_grammar_loaded_but_not_the_cache(
+    tur: morphfst.Language, corpus: Path, tmp_path: Path
+) -> None:
+    # A cluster kept running between runs loads a grammar once (by the digest of its compiled bytes);
+    # each run still gets a new cache of word types, so each run analyzes its own types and counts them.
+    pytest.importorskip("distributed")
+    import logging
+
+    from distributed import Client, LocalCluster
+
+    from morphfst.corpus import dask_worker
+
+    options = Options(mode="terms", term="morphs")
+    one = run_corpus(tur, [str(corpus)], str(tmp_path / "one.txt"), options, jobs=1)
+    with LocalCluster(
+        n_workers=2, threads_per_worker=1, processes=True, dashboard_address=":0", silence_logs=logging.ERROR
+    ) as lc:
+        runs = [
+            run_corpus(tur, [str(corpus)], str(tmp_path / f"run{i}"), options, dask=lc.scheduler_address, partition_bytes=40_000)
+            for i in range(2)
+        ]
+        with Client(lc.scheduler_address) as client:
+            loaded = client.run(lambda: sorted(dask_worker._loaded))
+    for i, run in enumerate(runs):
+        assert run.coverage.analyzed == one.coverage.analyzed > 0
+        manifest = json.loads((tmp_path / f"run{i}" / "manifest.json").read_text(encoding="utf-8"))
+        joined = b"".join((tmp_path / f"run{i}" / e["output"]).read_bytes() for e in manifest["outputs"])
+        assert joined == (tmp_path / "one.txt").read_bytes()
+    assert len(loaded) == 2 and all(len(digests) == 1 for digests in loaded.values())
+
+
 def test_dask_analyzes_each_type_once_when_a_batch_outgrows_the_cache(tur: morphfst.Language, tmp_path: Path) -> None:
     # A batch's word types far outnumber a cache generation, and the partitions are read in many
     # chunks (so the cache turns over many times): the owners' answers must still serve every

@@ -10,6 +10,7 @@ word types of a partition), :func:`answer_types` (the owner of some word types a
 
 from __future__ import annotations
 
+import hashlib
 import pickle
 from pathlib import Path
 from typing import Any
@@ -17,6 +18,8 @@ from typing import Any
 from distributed import get_worker
 from distributed.diagnostics.plugin import WorkerPlugin
 
+from ..atomic import write_bytes_atomic
+from ..runtime.compiled_language import Language
 from .coverage import Coverage
 from .local import owner
 from .outputs import AtomicFile
@@ -25,6 +28,9 @@ from .records import ChunkProcessor, Options, Tally
 
 PLUGIN_NAME = "morphfst-grammar"
 KEPT_BATCHES = 2  # batches whose owners' answers a worker keeps
+KEPT_GRAMMARS = 2  # compiled grammars a worker keeps loaded between runs (by their bytes' digest)
+# digest of a compiled file's bytes -> the language loaded from it, on this worker (see GrammarPlugin.setup)
+_loaded: dict[str, Language] = {}
 Answers = dict[str, tuple[Any, tuple[str, int, int]]]  # word type -> (formatted output, type information)
 
 
@@ -37,16 +43,29 @@ class GrammarPlugin(WorkerPlugin):
         self.data = data
         self.filename = filename
         self.options = options
+        self.digest = hashlib.sha256(data).hexdigest()
         self.processor: ChunkProcessor | None = None
         self.answers: dict[int, Answers] = {}  # batch -> its owners' answers (the last two batches)
 
     def setup(self, worker: Any) -> None:
+        """Load the grammar on this worker, or take the language a run before loaded from the same
+        bytes (a cluster kept running between runs loads each grammar once). The processor, and so
+        the cache of word types, is new for every run: a run's figures count its own analyses."""
+        self.processor = ChunkProcessor(self._language(worker), self.options)
+
+    def _language(self, worker: Any) -> Language:
         from .sources import load_compiled
 
-        directory = Path(getattr(worker, "local_directory", None) or ".")
-        path = directory / f"morphfst-{self.filename}"
-        path.write_bytes(self.data)
-        self.processor = ChunkProcessor(load_compiled(str(path)), self.options)
+        lang = _loaded.get(self.digest)
+        if lang is None:
+            directory = Path(getattr(worker, "local_directory", None) or ".")
+            path = directory / f"morphfst-{self.digest[:16]}-{self.filename}"
+            if not path.exists() or path.stat().st_size != len(self.data):
+                write_bytes_atomic(path, self.data)  # the name holds the digest: a whole file is the right one
+            lang = _loaded[self.digest] = load_compiled(str(path))
+            while len(_loaded) > KEPT_GRAMMARS:
+                del _loaded[next(iter(_loaded))]
+        return lang
 
 
 def _plugin() -> GrammarPlugin:
