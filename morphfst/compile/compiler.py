@@ -31,6 +31,7 @@ from ..language import model as m
 from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 from ..language.validate import BOUNDARIES
 from .fstutil import NO_STATE_ID, Arc, Weight, acc, chars, cross, empty, union
+from .guessweights import GUESS_MORPH_WEIGHT, GUESS_OFFSET, GUESS_PRIOR_SCALE, GUESS_STEM_WEIGHT
 from .stemrules import derive_stems, lemma_to_stem
 
 SETLIKE = (m.SetRef, m.Klass)
@@ -629,19 +630,6 @@ class Compiler:
         return guesser
 
 
-GUESS_OFFSET = 100.0  # weight added to every guessed analysis
-# Weight per letter of a guessed stem. An affix then pays for itself when the stem letters it explains
-# weigh more than its features (their weights are frequency estimates) and GUESS_MORPH_WEIGHT: chosen
-# on the development words (wordfreq ranks 1-20,000) the lexicon knows, guessed as if it did not, by
-# how often the first guess has the lexicon's segmentation: Turkish 0.3: 29.6 %, 1.0: 54.5 %, 1.2: 58.3 %,
-# 1.5: 58.5 %, 2.0: 54.1 %; Finnish 46.1 % at 0.3 and 47.3-47.4 % from 1.5 (same lemma and part of speech:
-# Turkish 9.5 % at 0.3, 31.3 % at 1.5; Finnish 25.0 %, 25.8 %).
-GUESS_STEM_WEIGHT = 1.5
-GUESS_MORPH_WEIGHT = 0.15  # weight per guessed-word affix with a surface form
-# Scale of the part-of-speech prior (Compiler.guess_priors), chosen as GUESS_STEM_WEIGHT was (bench/guess_report.py,
-# first guess with the lexicon's lemma and part of speech / segmentation): Turkish 46.3 / 71.4 % without,
-# 55.8 / 71.4 % at 0.05, 55.9 / 71.5 % at 0.15, 55.7 / 71.2 % at 0.3, 54.2 / 70.2 % at 0.5, 53.3 / 68.7 % at 1.
-GUESS_PRIOR_SCALE = 0.15
 SEAM_BASE_WEIGHT = 1.0  # added to every seam besides the block's weight and the heaviest lexicon entry's
 
 

@@ -25,6 +25,7 @@ import pynini
 
 from ..compile.arctable import Arcs, FstArcs
 from ..compile.fstutil import NO_STATE_ID
+from ..compile.guessweights import GUESS_COMPOUND_WEIGHT, GUESS_OFFSET, GUESS_STEM_WEIGHT
 from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 from .hyphenated import HYPHEN, hyphenated
 from .native import native_walker
@@ -78,6 +79,7 @@ MAX_SETS = 200_000  # sets of states remembered before the subset automaton is s
 MAX_GUESSES = 10  # guessed analyses kept per word
 MAX_PATHS = 200  # paths read from one walk
 MAX_GUESS_LENGTH = 60  # longer words get no guess (they are rarely words, and guessing grows with length)
+GUESS_HEAD_MIN = 3  # letters of the shortest last part of a guessed compound (osa, työ, maa)
 # A word written without capitals is a proper name rarely: an analysis whose lemma is capitalized
 # (a name, Kivi) weighs ln 10 more for it than for the same word capitalized (the estimate that a
 # lower-case token spelt like a name is the name about one time in ten is from memory), so that
@@ -552,6 +554,11 @@ class FastAnalyzer:
         self.lemma_parts = [
             (set(c.get("first", ())), set(c.get("last", ()))) for c in lang.meta.get("compounds") or () if c.get("agree")
         ]
+        # guessed compounds (compound_guesses): what the compound blocks with a noun first part take as
+        # their last part (parts of speech and derivations: N, ADJ, V.MSDR, ...), and their shortest first part
+        blocks = [c for c in lang.meta.get("compounds") or () if "N" in c.get("first", ()) and not c.get("agree")]
+        self.guess_heads = frozenset(name for c in blocks for name in c.get("last", ()))
+        self.guess_first_min = min((int(c.get("min", 1)) for c in blocks), default=1)
 
     @property
     def guesser(self) -> ArcWalker | None:
@@ -595,9 +602,49 @@ class FastAnalyzer:
         if guesser is None or len(surface) > MAX_GUESS_LENGTH or limit < 1:
             return []
         walked = guesser.walk(surface, MAX_PATHS, best=limit == 1)
-        if not walked:
+        guesses = self._best_guesses(surface, walked, limit) if walked else []
+        compounds = self.compound_guesses(surface, limit)
+        if not compounds:
+            return guesses
+        # ranked as decode_all ranks: by rounded weight, then text and segmentation; each (text,
+        # segmentation) once at its lowest weight
+        best: dict[Key, Analysis] = {}
+        for analysis in sorted(compounds + guesses, key=lambda a: round(a.weight, 5)):
+            best.setdefault((analysis.text, analysis.segmentation), analysis)
+        return sorted(best.values(), key=lambda a: (round(a.weight, 5), a.text, a.segmentation))[:limit]
+
+    def compound_guesses(self, surface: str, limit: int = MAX_GUESSES) -> list[Analysis]:
+        """Guessed compounds of a word the lexicon lacks: a first part the lexicon does not know (at
+        least as long as the compound blocks' shortest first part) before a word of the lexicon that a
+        compound block with a noun first part takes as its last part (*zorbataloissa*: zorba + talo-i-ssa,
+        lemma *zorbatalo*; *blorpikaupungin*: lemma *blorpikaupunki*, its gradation the last part's).
+
+        The last part is the longest such word that ends the word (its analyses, best first): a longer
+        known last part explains more of the word. The lemma is the first part as written and the last
+        part's lemma, as in a compound of lexicon words; the first part is one stem morph, glossed by
+        itself. Each weighs :data:`GUESS_OFFSET`, :data:`GUESS_STEM_WEIGHT` per letter of the first part,
+        :data:`GUESS_COMPOUND_WEIGHT` and the last part's weight. Grammars without compound blocks
+        (Turkish) have none."""
+        heads = self.guess_heads
+        if not heads:
             return []
-        return self._best_guesses(surface, walked, limit)
+        for i in range(max(self.guess_first_min, 1), len(surface) - GUESS_HEAD_MIN + 1):
+            tail = surface[i:]
+            walked = self.bounded.walk(tail, MAX_PATHS)
+            if not walked:
+                continue
+            found = [a for a in self.decode_all(tail, walked) if a.pos in heads or heads.intersection(a.features)]
+            if not found:
+                continue
+            first = surface[:i]
+            stem = _new_morph(first, first, (), "stem", first, None, None, None)
+            base = GUESS_OFFSET + GUESS_STEM_WEIGHT * i + GUESS_COMPOUND_WEIGHT
+            ud = self.lang.ud
+            return [
+                _new_analysis(surface, first + a.lemma, a.pos, a.features, (stem, *a.morphs), base + a.weight, ud, True)
+                for a in found[:limit]
+            ]
+        return []
 
     def _best_guesses(self, surface: str, walked: list[tuple[str, str, float]], limit: int) -> list[Analysis]:
         """``decode_all(surface, walked, True)[:limit]``, building only the analyses kept.
