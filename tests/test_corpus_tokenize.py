@@ -111,7 +111,7 @@ FAST_PATH_ALPHABET = (
     + EDGE_PUNCTUATION
     + ZERO_WIDTH_JOINERS
     + INVISIBLE
-    + "\u02bc\u0301\u093f\u0915\n\r\x0b\x0c\x1c\x85\u2028\u200b\u3000²½٣"
+    + "\u02bc\u0301\u093f\u0915\n\r\x0b\x0c\x1c\x85\u2028\u200b\u3000²½٣%€§:"
 )
 
 
@@ -185,3 +185,29 @@ def test_ordinal_periods_fast_and_regular_expression_agree(parts: list[str]) -> 
     assert TOK.tokens_and_newlines(text) == TOK.word_or_newline_re.findall(text)
     every = TOK.word_or_newline_re.findall(text)
     assert TOK.distinct_tokens(text) == [t for t in dict.fromkeys(every) if t != "\n"]
+
+
+def test_a_signs_ending_after_a_colon_is_one_token_with_the_sign() -> None:
+    # Finnish spelling (common practice): an ending after a sign is joined with a colon, the sign read
+    # as the word it stands for (5 %:n 'of 5 percent', 20 €:lla, 3 §:ssä); a bare sign is a separator
+    line = "kasvu oli 5 %:n luokkaa, 20 €:lla ja 3 §:ssä; 5% ja 5%:n, %: ja :n"
+    assert TOK.tokens(line) == [
+        "kasvu",
+        "oli",
+        "5",
+        "%:n",
+        "luokkaa",
+        "20",
+        "€:lla",
+        "ja",
+        "3",
+        "§:ssä",
+        "5",
+        "ja",
+        "5",
+        "%:n",
+        "ja",
+        "n",
+    ]
+    assert TOK.tokens(line) == TOK.word_re.findall(line)
+    assert [p.text for p in TOK.pieces("5 %:n")] == ["5", " ", "%:n"]

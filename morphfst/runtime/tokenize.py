@@ -11,6 +11,8 @@ space: ``lasten\u00adtarhassa`` is one token) inside a word, joined into one tok
 - a colon after an upper-case letter or a digit, before more letters: ``TRT:nin``, ``10:30``
   (a colon after a lower-case letter is a separator: ``not:bu`` is three pieces);
 - a period or a comma between digits: ``3.5``, ``1,000``;
+- the ending after a sign, joined by a colon: ``5 %:n``, ``%:lla``, ``€:oon``, ``§:ssä`` (a sign is a
+  word of its own before its ending in Finnish writing; a sign without a colon stays a separator);
 - the period of an ordinal: after a digit string or a Roman numeral I-XXXIX written as a token of its
   own, before white space (not a line end) and a lower-case letter: ``23. madde``, ``3. luokka``,
   ``XX. yüzyıl`` (a period before an upper-case letter or at the line's end stays a piece of its own,
@@ -68,6 +70,8 @@ _LOWER_SET = frozenset(_LOWER_CHARS)
 # an ordinal with its period: a digit string or a well-formed Roman numeral I-XXXIX, then the period,
 # then white space within the line and a lower-case letter (read by the look-ahead only)
 ORDINAL = rf"(?:\d+|(?=[IVX])X{{0,3}}(?:IX|IV|V?I{{0,3}}))\.(?=[^\S\n]+[{re.escape(_LOWER_CHARS)}])"
+# a sign with its ending after a colon (5 %:n, €:oon, §:ssä): the sign is read as the word it stands for
+SIGN_ENDING = r"[%‰€$£¥§]:[^\W_]+"
 # a period, white space within the line and a lower-case letter: where a piece's tokens may depend on
 # the next piece (the fast path looks at the next piece only on a line that has one)
 _DOT_BEFORE_LOWER = re.compile(rf"\.[^\S\n]+[{re.escape(_LOWER_CHARS)}]")
@@ -105,8 +109,9 @@ class Tokenizer:
             rf"|(?<=[{_UPPER}\d]):(?=[^\W_])"  # colon after an abbreviation or a number
             r"|(?<=\d)[.,](?=\d)"  # decimal point or digit group separator
         )
-        # the ordinal is tried first, at a token's start: it must end at its period
-        word = rf"{ORDINAL}|[^\W_]+(?:(?:{joiner})[^\W_]*)*"
+        # the ordinal is tried first, at a token's start: it must end at its period; a sign starts a
+        # token only before a colon and an ending
+        word = rf"{ORDINAL}|{SIGN_ENDING}|[^\W_]+(?:(?:{joiner})[^\W_]*)*"
         self.word_re = re.compile(word)
         self.word_or_newline_re = re.compile(rf"{word}|\n")
         self.sep_re = re.compile(r"\s+|(.)\1*", re.DOTALL)
