@@ -673,9 +673,21 @@ class FastAnalyzer:
                 low[parts[5]] = (weight, parts)
                 if bound is None and len(low) >= limit:
                     bound = round(weight, 5)
-        ranked = sorted(low.items(), key=lambda item: (round(item[1][0], 5), item[0]))[:limit]
-        stems: dict[tuple[str, str, str], Morph] = {}  # this word's guessed stems, kept for it alone
-        return [self._build(surface, parts, weight, True, stems) for _, (weight, parts) in ranked]
+        ranked = sorted([(round(weight, 5), key, weight, parts) for key, (weight, parts) in low.items()])[:limit]
+        # each analysis as _build makes it, the analyses of one stem sharing its morph (this word's
+        # guessed stems are kept for it alone); inlined: a guess builds about eight analyses
+        stems: dict[tuple[str, str, str], Morph] = {}
+        gloss = self.lang.glosses.get
+        ud = self.lang.ud
+        out = []
+        for _, _, weight, (lemma, pos, features, stem_form, affixes, _) in ranked:
+            stem = stems.get((stem_form, lemma, pos))
+            if stem is None:
+                stem = stems[(stem_form, lemma, pos)] = _new_morph(
+                    stem_form, gloss((lemma, pos), lemma), (pos,), "stem", lemma, None, None, None
+                )
+            out.append(_new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, ud, True))
+        return out
 
     def decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool = False) -> Analysis:
         """One :class:`Analysis` from a walked or composed path, through precomputed tables."""
