@@ -69,3 +69,17 @@ def test_grammars_without_compound_blocks_guess_no_compounds(tur: morphfst.Langu
     # Turkish has no compound blocks: ev 'house', evlerde 'in the houses' (common practice)
     assert not tur.fast.guess_heads
     assert tur.fast.compound_guesses(FIRST + "evlerde") == []
+
+
+def test_a_capitalized_unknown_word_is_guessed_as_a_name_first(tur: morphfst.Language) -> None:
+    # Turkish spelling (common practice): proper names are capitalized and their endings follow an
+    # apostrophe. Karadenizspor is a made-up club name (mechanism test data).
+    best = tur.guess("Karadenizspor")[0]
+    assert (best.lemma, best.pos) == ("Karadenizspor", "PROPN") and best.guessed
+    assert tur.fast.guess("Karadenizspor", 1)[0].text == best.text  # the corpus asks for the best only
+    best = tur.analyze("Karadenizspor'un", guess=True)[0]
+    assert (best.lemma, best.pos, best.features) == ("Karadenizspor", "PROPN", ("SG", "GEN"))
+    # written in lower case, the same letters are a common noun first, as before
+    assert tur.guess("karadenizspor")[0].pos == "N"
+    # İ keeps its dot when the lemma is written with the word's capital
+    assert tur.guess("İzmirspor")[0].lemma == "İzmirspor"

@@ -26,6 +26,7 @@ import pynini
 from ..compile.arctable import Arcs, FstArcs
 from ..compile.fstutil import NO_STATE_ID
 from ..compile.guessweights import GUESS_COMPOUND_WEIGHT, GUESS_OFFSET, GUESS_STEM_WEIGHT
+from ..language.normalize import restore_case
 from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 from .hyphenated import HYPHEN, hyphenated
 from .native import native_walker
@@ -85,6 +86,7 @@ GUESS_HEAD_MIN = 3  # letters of the shortest last part of a guessed compound (o
 # lower-case token spelt like a name is the name about one time in ten is from memory), so that
 # kiveä reads as the noun kivi first and Kiveä as either; words without another reading keep theirs.
 LOWER_CASE_NAME_WEIGHT = math.log(10)
+NAME_POS = "PROPN"  # the part of speech of proper names (Universal Dependencies), preferred in guesses of capitalized words
 
 
 class ArcWalker:
@@ -580,7 +582,7 @@ class FastAnalyzer:
         if not found and HYPHEN in surface:
             found = hyphenated(surface, word, self._analyze_part)
         if not found and guess:
-            return self.guess_normalized(surface)
+            return self.guess(word) if cased else self.guess_normalized(surface)
         return found
 
     def _analyze_part(self, part: str) -> list[Analysis]:
@@ -590,11 +592,36 @@ class FastAnalyzer:
         return self.decode_all(part, self.bounded.walk(part, MAX_PATHS), False)
 
     def guess(self, word: str, limit: int = MAX_GUESSES) -> list[Analysis]:
-        """Guessed analyses of ``word`` (a stem the lexicon may not have), best first, marked ``guessed``."""
+        """Guessed analyses of ``word`` (a stem the lexicon may not have), best first, marked ``guessed``.
+
+        A word written with a capital is a proper name more often than not when the lexicon lacks it:
+        its guesses as a name (part of speech ``PROPN``) weigh :data:`LOWER_CASE_NAME_WEIGHT` less, the
+        weight a name's reading costs when it is written in lower case, and their lemma is written with
+        the word's capitals (*Karadenizspor'un*: *Karadenizspor* PROPN)."""
         surface = self.lang.normalize(word)
         if not self.lang.acceptable(surface):
             return []
-        return self.guess_normalized(surface, limit)
+        if not word[:1].isupper():
+            return self.guess_normalized(surface, limit)
+        found = self.guess_normalized(surface, max(limit, MAX_GUESSES))
+        if not any(a.pos == NAME_POS for a in found):
+            return found[:limit]
+        fold = self.lang.normalize
+        best: dict[Key, Analysis] = {}
+        for a in found:
+            if a.pos == NAME_POS:
+                a = _new_analysis(
+                    a.word,
+                    restore_case(word, a.lemma, fold),
+                    a.pos,
+                    a.features,
+                    a.morphs,
+                    a.weight - LOWER_CASE_NAME_WEIGHT,
+                    a.ud,
+                    True,
+                )
+            best.setdefault((a.text, a.segmentation), a)
+        return sorted(best.values(), key=lambda a: (round(a.weight, 5), a.text, a.segmentation))[:limit]
 
     def guess_normalized(self, surface: str, limit: int = MAX_GUESSES) -> list[Analysis]:
         """Guesses of a normalized word: the ``limit`` best (only the paths that can be among them are decoded)."""
