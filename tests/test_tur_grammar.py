@@ -1845,3 +1845,30 @@ def test_a_rare_noun_spelt_like_a_participle_keeps_the_floor_count(tur: morphfst
     assert tur.analyze("doğanın")[0].text == "doğa N;SG;GEN"
     assert tur.analyze("doğan")[0].lemma == "doğmak"
     assert any(a.text == "doğan N;SG;NOM" for a in tur.analyze("doğan"))
+
+
+def test_words_and_rankings_from_a_round_33_running_text_probe(tur: morphfst.Language) -> None:
+    # TDK Güncel Türkçe Sözlük headwords (from memory): satın as in satın almak 'buy', the
+    # postposition sürece 'as long as' after -DIğI (yıkandığı sürece), buralı and oralı beside
+    # nereli, oyçokluğu 'majority vote' beside oybirliği
+    assert tur.analyze("satın")[0].text == "satın ADV"
+    assert "satmak V;IMP;2;PL" in [a.text for a in tur.analyze("satın")]
+    assert tur.analyze("sürece")[0].text == "sürece ADP"
+    assert "süreç N;SG;DAT" in [a.text for a in tur.analyze("sürece")]
+    assert tur.analyze("buralı")[0].text == "buralı ADJ;SG;NOM"
+    assert tur.analyze("oralılar")[0].text == "oralı ADJ;PL;NOM"
+    assert tur.analyze("oyçokluğuyla")[0].text == "oyçokluğu N;SG;INS"
+    # peş heads a postpositional phrase like the other spatial nouns (kelebeklerin peşinden 'after
+    # the butterflies', peşine düşmek, peşinde koşmak; G&K on spatial nouns, from memory), not
+    # peşin 'cash' in a case; the bare peşin stays the adjective
+    assert tur.analyze("peşinden")[0].text == "peş N;SG;PSS3S;ABL"
+    assert tur.analyze("peşinde")[0].text == "peş N;SG;PSS3S;LOC"
+    assert tur.analyze("peşine")[0].text == "peş N;SG;PSS3S;DAT"
+    assert tur.analyze("peşin")[0].text == "peşin ADJ;SG;NOM"
+    # bazı, hiçbir, hangi written bare are determiners before a noun (bazı iç kesimlerde, hiçbir yere,
+    # hangi sözü; common practice); with a possessive they are pronouns (bazıları, hangisini)
+    for word in ["bazı", "hiçbir", "hangi"]:
+        assert tur.analyze(word)[0].text == f"{word} DET", word
+    assert tur.analyze("bazıları")[0].lemma == "bazı" and tur.analyze("bazıları")[0].pos == "PRO"
+    assert tur.analyze("hangisini")[0].text == "hangi PRO;SG;PSS3S;ACC"
+    assert tur.analyze("bazında")[0].text == "baz N;SG;PSS3S;LOC"
