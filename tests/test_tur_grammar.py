@@ -1872,3 +1872,18 @@ def test_words_and_rankings_from_a_round_33_running_text_probe(tur: morphfst.Lan
     assert tur.analyze("bazıları")[0].lemma == "bazı" and tur.analyze("bazıları")[0].pos == "PRO"
     assert tur.analyze("hangisini")[0].text == "hangi PRO;SG;PSS3S;ACC"
     assert tur.analyze("bazında")[0].text == "baz N;SG;PSS3S;LOC"
+
+
+def test_the_aorists_evidential_copula_ranks_below_a_lexicon_verbs_evidential(tur: morphfst.Language) -> None:
+    # the aorist's evidential copula (yaparmış) is the narrative of tales: a lexicon verb's -mIş spelt
+    # like it comes first (çıkarmış 'has taken out', kızarmış 'has reddened'; G&K on the aorist, from
+    # memory), while a tale's yaşarmış, sorarmış, olurmuş keep the aorist
+    assert tur.analyze("çıkarmış")[0].text == "çıkarmak V;NFH;3;SG"
+    assert tur.analyze("kızarmış")[0].text == "kızarmak V;NFH;3;SG"
+    assert "çıkmak V;HAB;NFH;3;SG" in [a.text for a in tur.analyze("çıkarmış")]
+    for word, lemma in [("yaşarmış", "yaşamak"), ("sorarmış", "sormak"), ("olurmuş", "olmak")]:
+        assert tur.analyze(word)[0].text == f"{lemma} V;HAB;NFH;3;SG", word
+    assert [f.form for f in tur.generate("yapmak", "V;HAB;NFH;3;SG")] == ["yaparmış"]
+    # the aorist's past, conditional and -ken keep their place (yapardı, yaparsa, yaparken)
+    assert tur.analyze("yapardı")[0].text == "yapmak V;HAB;PST;3;SG"
+    assert tur.analyze("yaparsa")[0].text == "yapmak V;HAB;COND;3;SG"
