@@ -1887,3 +1887,19 @@ def test_the_aorists_evidential_copula_ranks_below_a_lexicon_verbs_evidential(tu
     # the aorist's past, conditional and -ken keep their place (yapardı, yaparsa, yaparken)
     assert tur.analyze("yapardı")[0].text == "yapmak V;HAB;PST;3;SG"
     assert tur.analyze("yaparsa")[0].text == "yapmak V;HAB;COND;3;SG"
+
+
+def test_a_capitalized_personal_name_before_an_inflected_word_spelt_alike(tur: morphfst.Language) -> None:
+    # personal names and places whose spelling is an inflected form of another word (Emre: emir +
+    # dative, Kerem: kere + 'my', Selin: sel + genitive, Burcu, Arda, Emine, Fethi, Rahmi, Halime,
+    # Piri, Bolu, Zile) carry the list's count of the spelling, which is mostly theirs (from memory):
+    # written with a capital they are the name (Kerem kaleciyle karşı karşıya kaldı; Sevgili Selin
+    # Hanım), without one the other word comes first (common practice: the name is read last)
+    for name in ["Emre", "Kerem", "Selin", "Burcu", "Arda", "Emine", "Fethi", "Rahmi", "Halime", "Bolu"]:
+        assert tur.analyze(name)[0].text == f"{name} PROPN;SG;NOM", name
+    assert tur.analyze("emre")[0].text == "emir N;SG;DAT"
+    assert tur.analyze("kerem")[0].text == "kere N;SG;PSS1S;NOM"
+    assert tur.analyze("selin")[0].text == "sel N;SG;GEN"
+    assert tur.analyze("Emre'nin")[0].text == "Emre PROPN;SG;GEN"
+    # a name spelt like a bare common word keeps the word first (Denizde, Barışın: see above)
+    assert tur.analyze("Yıldız")[0].text == "yıldız N;SG;NOM"
