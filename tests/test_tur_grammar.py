@@ -1903,3 +1903,13 @@ def test_a_capitalized_personal_name_before_an_inflected_word_spelt_alike(tur: m
     assert tur.analyze("Emre'nin")[0].text == "Emre PROPN;SG;GEN"
     # a name spelt like a bare common word keeps the word first (Denizde, Barışın: see above)
     assert tur.analyze("Yıldız")[0].text == "yıldız N;SG;NOM"
+
+
+def test_anlasilmak_before_the_passive_of_anlasmak(tur: morphfst.Language) -> None:
+    # anlaşılmak 'be understood' (anlaşılan 'apparently', anlaşılır 'understandable') is a verb of its
+    # own, far more frequent than the passive of anlaşmak 'agree' (TDK headword, from memory): its
+    # count is the list's count of its forms; the passive stays second
+    for word in ["anlaşıldı", "anlaşılabilir", "anlaşılması", "anlaşılan"]:
+        readings = [a.text for a in tur.analyze(word)]
+        assert readings[0].startswith("anlaşılmak V;"), word
+        assert any(r.startswith("anlaşmak V;PASS;") for r in readings), word
