@@ -1316,6 +1316,48 @@ def test_verbs_of_adjectives_in_inen(fin: morphfst.Language) -> None:
     assert not fin.analyze("virtasistua")  # not on names
 
 
+def test_the_action_nouns_us_nti_lu(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, deverbal nouns (from memory): the action noun of a verb
+    # of type 73 in -Us on the strong vowel stem (pakata: pakkaus, pakkauksen; hypätä: hyppäys; tavata:
+    # tapaus), of a longer verb in -ttAA, -stAA, -ntAA in -Us on the weak stem without the a (opettaa:
+    # opetus; valmistaa: valmistus; vähentää: vähennys), of a -dA verb with a long vowel or diphthong
+    # in -ntI (arvioida: arviointi; myydä: myynti; uida: uinti), of a frequentative in -ellA, -illA
+    # in -lU on the strong stem (ajatella: ajattelu; ommella: ompelu; hymyillä: hymyily)
+    cells = [
+        ("pakata", "V;ACTN;N;SG;NOM", ["pakkaus"]),
+        ("pakata", "V;ACTN;N;PL;PRT", ["pakkauksia"]),
+        ("hypätä", "V;ACTN;N;SG;NOM", ["hyppäys"]),
+        ("tavata", "V;ACTN;N;SG;IN+ALL", ["tapaukseen"]),
+        ("opettaa", "V;ACTN;N;SG;GEN", ["opetuksen"]),
+        ("valmistaa", "V;ACTN;N;SG;NOM", ["valmistus"]),
+        ("vähentää", "V;ACTN;N;SG;NOM", ["vähennys"]),
+        ("esittää", "V;ACTN;N;PL;IN+ESS", ["esityksissä"]),
+        ("arvioida", "V;ACTN;N;SG;GEN", ["arvioinnin"]),
+        ("arvioida", "V;ACTN;N;PL;PRT", ["arviointeja"]),
+        ("myydä", "V;ACTN;N;SG;NOM", ["myynti"]),
+        ("uida", "V;ACTN;N;SG;NOM", ["uinti"]),
+        ("ajatella", "V;ACTN;N;SG;NOM", ["ajattelu"]),
+        ("ajatella", "V;ACTN;N;SG;PRT", ["ajattelua"]),
+        ("ajatella", "V;ACTN;N;PL;GEN", ["ajattelujen", "ajatteluiden", "ajatteluitten"]),
+        ("ommella", "V;ACTN;N;SG;NOM", ["ompelu"]),
+        ("hymyillä", "V;ACTN;N;SG;NOM", ["hymyily"]),
+        ("kysellä", "V;ACTN;N;SG;IN+ESS;PSS3S", ["kyselyssään", "kyselyssänsä"]),
+    ]
+    for lemma, features, forms in cells:
+        assert [f.form for f in fin.generate(lemma, features)] == forms, (lemma, features)
+    # a listed noun spelt alike keeps its own lemma first (common practice: the lexicon word wins)
+    assert fin.analyze("pakkauksen")[0].text == "pakkaus N;SG;GEN"
+    assert fin.analyze("arvioinnin")[0].text == "arviointi N;SG;GEN"
+    assert fin.analyze("ajattelua")[0].text == "ajattelu N;SG;PRT"
+    # not on the two-syllable roots in -ttAA, -stAA (ottaa, muistaa), on other types (sanoa, tulla,
+    # katketa), nor on a verb whose -el- is its root (niellä: nielu is the noun 'pharynx' only);
+    # invented test data: the words below are no Finnish action nouns
+    for lemma in ("ottaa", "muistaa", "kääntää", "sanoa", "tulla", "katketa", "niellä"):
+        assert not fin.generate(lemma, "V;ACTN;N;SG;NOM"), lemma
+    assert all("ACTN" not in a.text for a in fin.analyze("otus"))
+    assert all("ACTN" not in a.text for a in fin.analyze("nielu"))
+
+
 def test_a_derived_minen_noun_declines_as_the_listed_ones(fin: morphfst.Language) -> None:
     # the -minen noun of any verb is declined as type 38, as the listed -minen nouns are (common
     # practice, from memory): the plural genitive -sten first (ajamisten, then ajamisien)
