@@ -1358,6 +1358,32 @@ def test_the_action_nouns_us_nti_lu(fin: morphfst.Language) -> None:
     assert all("ACTN" not in a.text for a in fin.analyze("nielu"))
 
 
+def test_the_adjective_inen_of_nouns(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, derivation of adjectives (from memory): -inen 'having,
+    # of' on a noun's vowel stem, its last i or e gone (tyyli: tyylinen; vuosi: vuotinen; kieli:
+    # kielinen; aloite: aloitteinen; maanantai: maanantainen), the stem in the strong grade (ikä:
+    # ikäisten; vuosi: vuotisten), declined as type 38, with the -sti adverb (oma-aloitteisesti)
+    cells = [
+        ("tyyli", "N;PROPR;ADJ;SG;NOM", ["tyylinen"]),
+        ("litra", "N;PROPR;ADJ;SG;NOM", ["litrainen"]),
+        ("vuosi", "N;PROPR;ADJ;SG;GEN", ["vuotisen"]),
+        ("vuosi", "N;PROPR;ADJ;PL;GEN", ["vuotisten", "vuotisien"]),
+        ("kieli", "N;PROPR;ADJ;SG;PRT", ["kielistä"]),
+        ("ikä", "N;PROPR;ADJ;PL;GEN", ["ikäisten", "ikäisien"]),
+        ("aloite", "N;PROPR;ADJ;STI;ADV", ["aloitteisesti"]),
+        ("maanantai", "N;PROPR;ADJ;SG;NOM", ["maanantainen"]),
+    ]
+    for lemma, features, forms in cells:
+        assert [f.form for f in fin.generate(lemma, features)] == forms, (lemma, features)
+    # a listed adjective or a surname spelt alike ranks first (vetinen, Suominen; common practice);
+    # none on a one-syllable stem (pää), a consonant-final type (sisar) or a name (invented test data)
+    assert fin.analyze("vetinen")[0].text == "vetinen ADJ;SG;NOM"
+    assert fin.analyze("suominen")[0].text == "Suominen PROPN;SG;NOM"
+    assert not fin.generate("pää", "N;PROPR;ADJ;SG;NOM")
+    assert not fin.generate("sisar", "N;PROPR;ADJ;SG;NOM")
+    assert not fin.generate("Helsinki", "PROPN;PROPR;ADJ;SG;NOM")
+
+
 def test_a_derived_minen_noun_declines_as_the_listed_ones(fin: morphfst.Language) -> None:
     # the -minen noun of any verb is declined as type 38, as the listed -minen nouns are (common
     # practice, from memory): the plural genitive -sten first (ajamisten, then ajamisien)
