@@ -36,3 +36,15 @@ def test_geminate_voiced_stops_written_voiced(tur: morphfst.Language) -> None:
     assert not any(a.lemma in ("rab", "Rab") for a in tur.analyze("rap"))
     assert best(tur, "ret") == "ret N;SG;NOM" and forms(tur, "ret", "N;SG;ACC")[:1] == ["reddi"]
     assert best(tur, "zıt") == "zıt ADJ;SG;NOM"
+
+
+def test_a_roman_numeral_without_its_period(tur: morphfst.Language) -> None:
+    # II. Dünya Savaşı, IV. Murat, XX. yüzyıl: the ordinal's period stands apart before a capital in
+    # the corpus tokenizer's output, and a numeral after a name has none (Elizabeth II) (common
+    # practice): read at a cost, never generated
+    assert best(tur, "II") == "II NUM;ORD;ADJ"
+    assert best(tur, "XIX") == "XIX NUM;ORD;ADJ"
+    assert tur.analyze("IV")[0].weight > tur.analyze("IV.")[0].weight
+    assert forms(tur, "II", "NUM;ORD;ADJ") == ["II."]
+    # the letters keep their own reading first
+    assert best(tur, "v") == "v N;SG;NOM" and best(tur, "x") == "x N;SG;NOM"
