@@ -48,3 +48,44 @@ def test_a_roman_numeral_without_its_period(tur: morphfst.Language) -> None:
     assert forms(tur, "II", "NUM;ORD;ADJ") == ["II."]
     # the letters keep their own reading first
     assert best(tur, "v") == "v N;SG;NOM" and best(tur, "x") == "x N;SG;NOM"
+
+
+def test_the_fellow_noun_dash(tur: morphfst.Language) -> None:
+    # -DAş 'one who shares X' on any noun (G&K 7.1 on -DAş, from memory): new words keep its a after
+    # a front vowel too (ülküdaş, görevdaş, like the listed meslektaş) and its D devoices (sınıftaş)
+    assert best(tur, "ülküdaş") == "ülkü N;FELLOW;N;SG;NOM"
+    assert best(tur, "görevdaşları").startswith("görev N;FELLOW;N;PL;")
+    assert best(tur, "sınıftaşım") == "sınıf N;FELLOW;N;SG;PSS1S;NOM"
+    assert forms(tur, "kan", "N;FELLOW;N;PL;NOM") == ["kandaşlar"]
+    # listed words come first (meslektaş, vatandaş, kardeş, özdeş)
+    for word, lemma in [("meslektaş", "meslektaş"), ("vatandaş", "vatandaş"), ("kardeş", "kardeş"), ("özdeş", "özdeş")]:
+        assert tur.analyze(word)[0].lemma == lemma, word
+    # no *evdeş, *sınıfdaş (test data invented: misspellings)
+    for word in ["evdeş", "sınıfdaş"]:
+        assert not any("FELLOW" in a.text for a in tur.analyze(word)), word
+
+
+def test_the_diminutive_cik_on_adjectives(tur: morphfst.Language) -> None:
+    # -CIk on an adjective 'nice and, rather' (G&K 7.1 on -CIk, from memory): güzelcik, yalnızcık,
+    # tatlıcık; the listed küçücük, kısacık, incecik come first
+    assert best(tur, "güzelcik") == "güzel ADJ;DIM;ADJ;SG;NOM"
+    assert best(tur, "yalnızcık") == "yalnız ADJ;DIM;ADJ;SG;NOM"
+    assert forms(tur, "tatlı", "ADJ;DIM;ADJ;SG;NOM") == ["tatlıcık"]
+    for word in ["küçücük", "kısacık", "incecik"]:
+        assert tur.analyze(word)[0].lemma == word, word
+
+
+def test_deverbal_nouns_in_im_and_inti(tur: morphfst.Language) -> None:
+    # -(I)m 'the act or its result' and -(I)ntI 'what is left or comes of it' on a verb's root or voice
+    # (G&K 7.2, from memory): kazıntı 'scrapings', çözüm, kullanım; listed words come first
+    assert "kazmak V;REMN;N;SG;NOM" in [a.text for a in tur.analyze("kazıntı")]
+    assert forms(tur, "dökmek", "V;REMN;N;SG;NOM") == ["döküntü"]
+    assert forms(tur, "ölçmek", "V;ACTN;N;SG;NOM") == ["ölçüm"]
+    assert forms(tur, "yazmak", "V;PASS;ACTN;N;SG;NOM") == ["yazılım"]
+    for word in ["kullanım", "çözüm", "anlam", "kavram", "akıntı", "beklenti", "seçim", "ölüm"]:
+        assert tur.analyze(word)[0].lemma == word, word
+    # not after the abilitative, a descriptive auxiliary, the negative or a verb made with -lA
+    # (test data invented: impossible forms)
+    for word in ["gelebilim", "yapıverim", "sellem"]:
+        assert not any("ACTN" in a.text for a in tur.analyze(word)), word
+    assert forms(tur, "gelmek", "V;NEG;ACTN;N;SG;NOM") == []
