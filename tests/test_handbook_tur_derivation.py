@@ -89,3 +89,37 @@ def test_deverbal_nouns_in_im_and_inti(tur: morphfst.Language) -> None:
     for word in ["gelebilim", "yapıverim", "sellem"]:
         assert not any("ACTN" in a.text for a in tur.analyze(word)), word
     assert forms(tur, "gelmek", "V;NEG;ACTN;N;SG;NOM") == []
+
+
+def test_words_added_from_the_unanalyzed_development_list(tur: morphfst.Language) -> None:
+    # abbreviations of the spelling rules' list, said as letters or as the word (TDK Yazım Kılavuzu,
+    # abbreviations, from memory): HES'te (said hes), TOKİ'nin, AÖF'te (said aöf), CEO'su, T.C., A.Ş.,
+    # M.Ö., Yrd. (said yardımcı), Bkz., Örn., No'lu (written as spelt, common practice)
+    assert best(tur, "HES'te") == "HES N;SG;LOC"
+    assert best(tur, "TOKİ'nin") == "TOKİ PROPN;SG;GEN"
+    assert best(tur, "AÖF'te") == "AÖF PROPN;SG;LOC"
+    assert best(tur, "CEO'su") == "CEO N;SG;PSS3S;NOM"
+    assert best(tur, "STK'lerin").startswith("STK N;PL;")  # said se-te-ke
+    assert best(tur, "T.C") == "T.C. PROPN;SG;NOM"
+    assert best(tur, "M.Ö") == "M.Ö. ADV"
+    assert best(tur, "a.s") == "a.s. N;SG;NOM"
+    assert best(tur, "No'lu") == "No N;PROPR;ADJ;SG;NOM"
+    assert forms(tur, "Yrd", "N;SG;DAT") == ["Yrd'ya"]  # yardımcıya
+    # names of the Arabic tradition and their particles (common practice): Ebu Bekir, İbn Haldun,
+    # İbni Sina, Abdülhamid, Davud, Suudi Arabistan
+    for word, lemma in [("Ebu", "Ebu"), ("İbn", "İbn"), ("İbni", "İbni"), ("Abdülhamid", "Abdülhamid"),
+                        ("Davud'un", "Davud"), ("Suudi", "Suudi"), ("Resulullah", "Resulullah")]:
+        assert tur.analyze(word)[0].lemma == lemma, word
+    # loans in everyday use (common practice): web sitesi, webde; euro (beside avro), euroya; online
+    assert best(tur, "webde") == "web N;SG;LOC"
+    assert best(tur, "euroya") == "euro N;SG;DAT"
+    assert best(tur, "online") == "online ADJ;SG;NOM"
+    # gibisi 'the like of it' (onun gibisi yok, senin gibisini; TDK, 'gibi', from memory), beraber as
+    # an adjective 'equal' and in beraberinde 'with it' (TDK, 'beraber', from memory); Allah teâlâ,
+    # aleyküm selam
+    assert best(tur, "gibisi") == "gibisi N;SG;NOM"
+    assert best(tur, "gibisini") == "gibisi N;SG;ACC"
+    assert best(tur, "beraberinde") == "beraber ADJ;SG;PSS3S;LOC"
+    assert best(tur, "beraber") == "beraber ADV"
+    assert best(tur, "teâlâ") == "teâlâ ADJ;SG;NOM"
+    assert best(tur, "aleyküm") == "aleyküm INTJ"
