@@ -38,18 +38,6 @@ def test_geminate_voiced_stops_written_voiced(tur: morphfst.Language) -> None:
     assert best(tur, "zıt") == "zıt ADJ;SG;NOM"
 
 
-def test_a_roman_numeral_without_its_period(tur: morphfst.Language) -> None:
-    # II. Dünya Savaşı, IV. Murat, XX. yüzyıl: the ordinal's period stands apart before a capital in
-    # the corpus tokenizer's output, and a numeral after a name has none (Elizabeth II) (common
-    # practice): read at a cost, never generated
-    assert best(tur, "II") == "II NUM;ORD;ADJ"
-    assert best(tur, "XIX") == "XIX NUM;ORD;ADJ"
-    assert tur.analyze("IV")[0].weight > tur.analyze("IV.")[0].weight
-    assert forms(tur, "II", "NUM;ORD;ADJ") == ["II."]
-    # the letters keep their own reading first
-    assert best(tur, "v") == "v N;SG;NOM" and best(tur, "x") == "x N;SG;NOM"
-
-
 def test_the_fellow_noun_dash(tur: morphfst.Language) -> None:
     # -DAş 'one who shares X' on any noun (G&K 7.1 on -DAş, from memory): new words keep its a after
     # a front vowel too (ülküdaş, görevdaş, like the listed meslektaş) and its D devoices (sınıftaş)
