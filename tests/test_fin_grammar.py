@@ -731,12 +731,9 @@ BEST = [
     # paljain (jaloin, käsin) is paljas's plural instructive; paljas has no comparison in use
     ("paljain", "paljas ADJ;PL;INS"),
     ("ruuan", "ruoka N;SG;GEN"),
-    # common practice, from memory: vanhemmat is 'parents' far more often than 'older ones';
-    # leijona has the plural stem leijoni- (leijonien, leijonia); the short potential lie of olla
+    # common practice, from memory: leijona has the plural stem leijoni- (leijonien, leijonia); the short potential lie of olla
     # (ei lie, liekö); -s on the 2sg imperative and on an adverb (katsos, kuinkas); a name before an
     # abbreviation with a clitic (Kokko, not kok + -kO); abbreviations of units and letters
-    ("vanhemmat", "vanhempi N;PL;NOM"),
-    ("vanhemmille", "vanhempi N;PL;AT+ALL"),
     ("leijonien", "leijona N;PL;GEN"),
     ("lie", "olla V;POT;NEG"),
     ("liekö", "olla V;POT;NEG;KO"),
