@@ -95,8 +95,15 @@ def test_words_added_from_the_unanalyzed_development_list(tur: morphfst.Language
     assert forms(tur, "Yrd", "N;SG;DAT") == ["Yrd'ya"]  # yardımcıya
     # names of the Arabic tradition and their particles (common practice): Ebu Bekir, İbn Haldun,
     # İbni Sina, Abdülhamid, Davud, Suudi Arabistan
-    for word, lemma in [("Ebu", "Ebu"), ("İbn", "İbn"), ("İbni", "İbni"), ("Abdülhamid", "Abdülhamid"),
-                        ("Davud'un", "Davud"), ("Suudi", "Suudi"), ("Resulullah", "Resulullah")]:
+    for word, lemma in [
+        ("Ebu", "Ebu"),
+        ("İbn", "İbn"),
+        ("İbni", "İbni"),
+        ("Abdülhamid", "Abdülhamid"),
+        ("Davud'un", "Davud"),
+        ("Suudi", "Suudi"),
+        ("Resulullah", "Resulullah"),
+    ]:
         assert tur.analyze(word)[0].lemma == lemma, word
     # loans in everyday use (common practice): web sitesi, webde; euro (beside avro), euroya; online
     assert best(tur, "webde") == "web N;SG;LOC"
