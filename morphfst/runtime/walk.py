@@ -468,6 +468,17 @@ def _breadth_back(trail: list[Back], partial: tuple[Path, ...], best: bool) -> l
     return [(side, out, weight) for _, side, out, weight in live]
 
 
+def _ranked_analyses(analyses: Iterable[Analysis], limit: int) -> list[Analysis]:
+    """The first ``limit`` analyses ranked as :meth:`FastAnalyzer.decode_all` ranks them: each (text,
+    segmentation) once at its lowest weight, by rounded weight, then text and segmentation."""
+    best: dict[Key, Analysis] = {}
+    for a in analyses:
+        kept = best.get((a.text, a.segmentation))
+        if kept is None or a.weight < kept.weight:
+            best[(a.text, a.segmentation)] = a
+    return sorted(best.values(), key=lambda a: (round(a.weight, 5), a.text, a.segmentation))[:limit]
+
+
 def _builder(cls: type) -> Callable[..., Any]:
     """A fast constructor for a frozen dataclass: the same object as ``cls(...)`` with every field given.
 
@@ -607,21 +618,21 @@ class FastAnalyzer:
         if not any(a.pos == NAME_POS for a in found):
             return found[:limit]
         fold = self.lang.normalize
-        best: dict[Key, Analysis] = {}
-        for a in found:
-            if a.pos == NAME_POS:
-                a = _new_analysis(
-                    a.word,
-                    restore_case(word, a.lemma, fold),
-                    a.pos,
-                    a.features,
-                    a.morphs,
-                    a.weight - LOWER_CASE_NAME_WEIGHT,
-                    a.ud,
-                    True,
-                )
-            best.setdefault((a.text, a.segmentation), a)
-        return sorted(best.values(), key=lambda a: (round(a.weight, 5), a.text, a.segmentation))[:limit]
+        names = [
+            _new_analysis(
+                a.word,
+                restore_case(word, a.lemma, fold),
+                a.pos,
+                a.features,
+                a.morphs,
+                a.weight - LOWER_CASE_NAME_WEIGHT,
+                a.ud,
+                True,
+            )
+            for a in found
+            if a.pos == NAME_POS
+        ]
+        return _ranked_analyses([a for a in found if a.pos != NAME_POS] + names, limit)
 
     def guess_normalized(self, surface: str, limit: int = MAX_GUESSES) -> list[Analysis]:
         """Guesses of a normalized word: the ``limit`` best (only the paths that can be among them are decoded)."""
@@ -633,12 +644,7 @@ class FastAnalyzer:
         compounds = self.compound_guesses(surface, limit)
         if not compounds:
             return guesses
-        # ranked as decode_all ranks: by rounded weight, then text and segmentation; each (text,
-        # segmentation) once at its lowest weight
-        best: dict[Key, Analysis] = {}
-        for analysis in sorted(compounds + guesses, key=lambda a: round(a.weight, 5)):
-            best.setdefault((analysis.text, analysis.segmentation), analysis)
-        return sorted(best.values(), key=lambda a: (round(a.weight, 5), a.text, a.segmentation))[:limit]
+        return _ranked_analyses(compounds + guesses, limit)
 
     def compound_guesses(self, surface: str, limit: int = MAX_GUESSES) -> list[Analysis]:
         """Guessed compounds of a word the lexicon lacks: a first part the lexicon does not know (at
@@ -701,20 +707,8 @@ class FastAnalyzer:
                 if bound is None and len(low) >= limit:
                     bound = round(weight, 5)
         ranked = sorted([(round(weight, 5), key, weight, parts) for key, (weight, parts) in low.items()])[:limit]
-        # each analysis as _build makes it, the analyses of one stem sharing its morph (this word's
-        # guessed stems are kept for it alone); inlined: a guess builds about eight analyses
-        stems: dict[tuple[str, str, str], Morph] = {}
-        gloss = self.lang.glosses.get
-        ud = self.lang.ud
-        out = []
-        for _, _, weight, (lemma, pos, features, stem_form, affixes, _) in ranked:
-            stem = stems.get((stem_form, lemma, pos))
-            if stem is None:
-                stem = stems[(stem_form, lemma, pos)] = _new_morph(
-                    stem_form, gloss((lemma, pos), lemma), (pos,), "stem", lemma, None, None, None
-                )
-            out.append(_new_analysis(surface, lemma, pos, features, (stem, *affixes), weight, ud, True))
-        return out
+        stems: dict[tuple[str, str, str], Morph] = {}  # this word's guessed stems, kept for it alone
+        return [self._build(surface, parts, weight, True, stems) for _, _, weight, parts in ranked]
 
     def decode(self, surface: str, internal: str, bounded: str, weight: float, guessed: bool = False) -> Analysis:
         """One :class:`Analysis` from a walked or composed path, through precomputed tables."""
