@@ -128,8 +128,8 @@ def test_any_string_of_the_alphabet_walks_alike(tur: morphfst.Language, data: st
     assert _same(fast.walk(word), plain.walk(word))
 
 
-def _packed(fst: pynini.Fst, skip: str = "") -> walk.ArcWalker:
-    walker = walk.ArcWalker(PackedArcs(pack(fst)), skip=skip)
+def _packed(fst: pynini.Fst, skip: str = "", future: bool = False) -> walk.ArcWalker:
+    walker = walk.ArcWalker(PackedArcs(pack(fst)), skip=skip, future=future)
     assert walker._native is not None
     return walker
 
@@ -171,6 +171,33 @@ def test_skipped_labels_are_written_to_the_side_tape() -> None:
     fast, plain = _pair(_packed(fst, skip="+"))
     assert fast.walk("ab") == plain.walk("ab") == [("a+b", "AB", 0.5)]
     assert fast.walk("a+b") == plain.walk("a+b") == []  # a skipped label is never read from the word
+
+
+def test_a_walker_with_future_leaves_out_states_that_cannot_read_the_rest_of_the_word() -> None:
+    # from 0, "ab" leads to three states: 2 goes on with c to a final state; 5 only with d; 8 with c to a
+    # state that is not final and has no arcs. For "abc" only the pairs on the way to 3 are built (4,
+    # besides the start): 5 cannot read the c still to come, 8 reaches no final state, 11 (reached by
+    # "ac") can read b and c but must end with b.
+    fst = pynini.Fst()
+    s = [fst.add_state() for _ in range(14)]
+    fst.set_start(s[0])
+    for final in (3, 6, 13):
+        fst.set_final(s[final])
+    for src, letter, dst in [(0, "a", 1), (1, "b", 2), (2, "c", 3), (0, "a", 4), (4, "b", 5), (5, "d", 6)]:
+        fst.add_arc(s[src], Arc(ord(letter), ord(letter.upper()), 0.0, s[dst]))
+    for src, letter, dst in [(0, "a", 7), (7, "b", 8), (8, "c", 9), (0, "a", 10), (10, "b", 11), (11, "c", 12)]:
+        fst.add_arc(s[src], Arc(ord(letter), ord(letter.upper()), 0.0, s[dst]))
+    fst.add_arc(s[12], Arc(ord("b"), ord("B"), 0.0, s[13]))
+    fast, plain = _pair(_packed(fst, future=True))
+    lookahead_only = _packed(fst)
+    for word in ["abc", "abd", "abcb", "ab", "abcc", "a"]:
+        assert _same(fast.walk(word), plain.walk(word)), word
+        assert lookahead_only.walk(word) == fast.walk(word), word
+        assert fast.accepts(word) == plain.accepts(word), word
+    assert fast.walk("abc") == lookahead_only.walk("abc") == [("abc", "ABC", 0.0)]
+    assert fast._native.last[0] == 4  # type: ignore[union-attr]  # (position, state) pairs built for "abc"
+    # the one-letter look-ahead alone also builds 4, 7 and 10 after "a" and 8 and 11 after "ab"
+    assert lookahead_only._native.last[0] == 9  # type: ignore[union-attr]
 
 
 def test_more_paths_than_kept_live_are_left_to_the_python_walk() -> None:

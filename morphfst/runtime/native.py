@@ -27,10 +27,12 @@ def available() -> bool:
     return _cwalk is not None and os.environ.get(PURE_PYTHON_ENV, "") in ("", "0")
 
 
-def native_walker(table: Arcs, skip: Iterable[int]) -> Any | None:
+def native_walker(table: Arcs, skip: Iterable[int], future: bool = False) -> Any | None:
     """A C walker over ``table`` (``skip``: the input labels a path may take without reading input),
-    or ``None`` when the extension is not available or the table is not a packed one."""
+    or ``None`` when the extension is not available or the table is not a packed one. With ``future``
+    it also leaves out the states that cannot read the rest of the word (see :file:`_cwalk.c`)."""
     if not available() or not isinstance(table, PackedArcs):
         return None
     first, ilabel, olabel, weight, nxt, final = table.arrays()
-    return _cwalk.Walker(first, ilabel, olabel, weight, nxt, final, table.start, "".join(chr(code) for code in sorted(skip)))
+    skipped = "".join(chr(code) for code in sorted(skip))
+    return _cwalk.Walker(first, ilabel, olabel, weight, nxt, final, table.start, skipped, future=future)

@@ -112,7 +112,7 @@ class ArcWalker:
     about a third of a corpus run).
     """
 
-    def __init__(self, fst: pynini.Fst | Arcs, skip: Iterable[str] = ()) -> None:
+    def __init__(self, fst: pynini.Fst | Arcs, skip: Iterable[str] = (), future: bool = False) -> None:
         self.table: Arcs = FstArcs(fst) if isinstance(fst, pynini.Fst) else fst
         self.start = self.table.start
         self._skip = {ord(c) for c in skip}
@@ -127,8 +127,9 @@ class ArcWalker:
         self._active_firsts: set[int] = set()
         self._reset_sets()
         # the same walk in C over a packed table, when the extension is built: a word it gives up on
-        # (too many paths, a cycle of arcs that read nothing) is walked here
-        self._native = native_walker(self.table, self._skip)
+        # (too many paths, a cycle of arcs that read nothing) is walked here; with ``future`` it also
+        # skips the states that cannot read the rest of the word (worth its start-up cost on the guesser)
+        self._native = native_walker(self.table, self._skip, future)
 
     # ---- one state: its arcs, closure and folded table (built on first use) ---------------------------
     def _arcs(self, state: int) -> Raw:
@@ -578,7 +579,7 @@ class FastAnalyzer:
         """The guesser's walker (``None`` when the grammar has no guesser); its transducer is read on first use."""
         if self._guesser is False:
             has = "guesser" in self.lang.fsts
-            self._guesser = ArcWalker(self.lang.arcs("guesser"), skip=[self.lang.plus]) if has else None
+            self._guesser = ArcWalker(self.lang.arcs("guesser"), skip=[self.lang.plus], future=True) if has else None
         return self._guesser  # type: ignore[return-value]
 
     def analyze(self, word: str, guess: bool = False, limit: int = MAX_PATHS, cased: bool = True) -> list[Analysis]:
