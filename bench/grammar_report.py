@@ -3,7 +3,8 @@
 For the wordfreq list of the language, ranks 1 to 20,000 only (the development range; higher ranks are
 kept for evaluation and are never read here), prints:
 
-  * type coverage and frequency-weighted coverage without the guesser,
+  * type coverage and frequency-weighted coverage without the guesser (with and without the
+    foreign words of lexicons/LANG/foreign.tsv),
   * the average number of analyses per analyzed word,
   * the most frequent unanalyzed words,
   * compile time, compiled file size, load time, and analysis throughput on the list.
@@ -24,6 +25,7 @@ import time
 from pathlib import Path
 
 ROOT = Path(__file__).resolve().parent.parent
+FOREIGN_POS = "X"  # the part of speech of foreign words (bench/foreign_words.py)
 sys.path.insert(0, str(ROOT))
 
 import morphfst  # noqa: E402
@@ -70,6 +72,8 @@ def main(argv: list[str] | None = None) -> int:
     total_f = sum(f for _, f in words) or 1.0
     covered_types = 0
     covered_f = 0.0
+    foreign_types = 0  # read only as foreign words (part of speech X: lexicons/LANG/foreign.tsv)
+    foreign_f = 0.0
     readings: list[int] = []
     missing: list[tuple[str, float]] = []
     analyzed: list[tuple[str, str]] = []
@@ -83,6 +87,9 @@ def main(argv: list[str] | None = None) -> int:
         if all(results):
             covered_types += 1
             covered_f += freq
+            if all(a.pos == FOREIGN_POS for r in results for a in r):
+                foreign_types += 1
+                foreign_f += freq
             readings.append(sum(len(r) for r in results) // len(results))
             analyzed.append((word, results[0][0].text if len(results) == 1 else " + ".join(r[0].text for r in results)))
         else:
@@ -98,6 +105,11 @@ def main(argv: list[str] | None = None) -> int:
     print(f"word list           wordfreq ranks 1-{n:,} ({n:,} types)")
     print(f"type coverage       {covered_types / n:.1%} ({covered_types:,} of {n:,}) without the guesser")
     print(f"weighted coverage   {covered_f / total_f:.1%} of the list's frequency mass without the guesser")
+    native_types, native_f = covered_types - foreign_types, covered_f - foreign_f
+    print(
+        f"without foreign     {native_types / n:.1%} of the types, {native_f / total_f:.1%} of the mass "
+        f"({foreign_types:,} types read only as foreign words, part of speech {FOREIGN_POS})"
+    )
     if readings:
         print(f"analyses per word   {statistics.mean(readings):.2f} (mean over analyzed words)")
     print(f"throughput          {n / analyze_s:,.0f} words/s (analyze(), cold, one process)")
