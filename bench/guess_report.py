@@ -5,7 +5,8 @@ for evaluation and are never read here), that the shipped grammar analyzes (prop
 of fewer than four letters and hyphenated words left out), guesses each as if the lexicon did not know
 it, and compares the first guess with the lexicon's best analysis. Prints the share of words with a
 guess at all, with the lexicon's segmentation, and with its lemma and part of speech, overall and by
-the lexicon's part of speech. A word with no guess counts as a miss. This is what the guesser's
+the lexicon's part of speech; and, for the names among the words, written with a capital as in text,
+the share whose first guess is a name of the lexicon's lemma. A word with no guess counts as a miss. This is what the guesser's
 weights (``compile/compiler.py``: ``GUESS_STEM_WEIGHT``) and the grammars' guess classes were
 chosen by.
 
@@ -32,7 +33,8 @@ DEV_RANKS = 20_000  # wordfreq ranks past this are evaluation data: never read h
 WORDFREQ_CODES = {"tur": "tr", "fin": "fi"}
 # left out: proper names, and foreign words (part of speech X, lexicons/LANG/foreign.tsv), which no
 # guess class reads
-LEFT_OUT = {"PROPN", "X"}
+NAME_POS = "PROPN"
+LEFT_OUT = {NAME_POS, "X"}
 
 
 def main(argv: list[str] | None = None) -> int:
@@ -50,11 +52,19 @@ def main(argv: list[str] | None = None) -> int:
     words = top_n_list(code, DEV_RANKS)
     random.Random(args.seed).shuffle(words)
     tried = guessed = same_seg = same_lemma = 0
+    names = names_right = 0  # names of the lexicon, written with a capital, guessed as unknown
     by_pos: Counter[str] = Counter()
     right_by_pos: Counter[str] = Counter()
     wrong: list[str] = []
     for word in words[: args.words]:
         known = lang.analyze(word)
+        if known and known[0].pos == NAME_POS and len(word) >= 4 and "-" not in word:
+            # the list is lower-cased: the name as written in text, its guesses against the lexicon's
+            names += 1
+            written = word[:1].upper() + word[1:]
+            named = lang.guess(written)
+            lemma = next((a.lemma for a in lang.analyze(written) if a.pos == NAME_POS), "")
+            names_right += bool(named) and (named[0].pos, named[0].lemma) == (NAME_POS, lemma)
         if not known or known[0].pos in LEFT_OUT or len(word) < 4 or "-" in word:
             continue
         tried += 1
@@ -78,6 +88,8 @@ def main(argv: list[str] | None = None) -> int:
     print(f"  with a guess                      {guessed / tried:6.1%}")
     print(f"  first guess, same segmentation    {same_seg / tried:6.1%}")
     print(f"  first guess, same lemma and POS   {same_lemma / tried:6.1%}")
+    if names:
+        print(f"  names written with a capital      {names:,}: first guess a name of the lexicon's lemma {names_right / names:6.1%}")
     print("  same segmentation by the lexicon's part of speech:")
     for pos, n in by_pos.most_common(8):
         print(f"    {pos:<6} {right_by_pos[pos]:>5} of {n:>5}  {right_by_pos[pos] / n:6.1%}")

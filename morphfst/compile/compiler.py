@@ -31,7 +31,7 @@ from ..language import model as m
 from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 from ..language.validate import BOUNDARIES
 from .fstutil import NO_STATE_ID, Arc, Weight, acc, chars, cross, empty, union
-from .guessweights import GUESS_MORPH_WEIGHT, GUESS_OFFSET, GUESS_PRIOR_SCALE, GUESS_STEM_WEIGHT
+from .guessweights import GUESS_MORPH_WEIGHT, GUESS_NAME_WEIGHT, GUESS_OFFSET, GUESS_PRIOR_SCALE, GUESS_STEM_WEIGHT, NAME_POS
 from .stemrules import derive_stems, lemma_to_stem
 
 SETLIKE = (m.SetRef, m.Klass)
@@ -531,7 +531,8 @@ class Compiler:
         :data:`GUESS_OFFSET` (so it always ranks below an analysis with a lexicon stem) plus
         :data:`GUESS_STEM_WEIGHT` per stem letter (shorter stems, i.e. longer affix chains, rank first), half
         of it counted on the lemma and half on the stem the class's stem rules make of it, plus the
-        prior of each part of speech (``priors``, see :meth:`guess_priors`).
+        prior of each part of speech (``priors``, see :meth:`guess_priors`), and a name (``NAME_POS``)
+        :data:`GUESS_NAME_WEIGHT` more.
         """
         if klass.guess is None:
             return None
@@ -550,7 +551,10 @@ class Compiler:
         stems = pynini.compose(lemma_to_stem(self, klass, lemmas), weigh.optimize())
         tags = self.guess_tags(klass)
         priors = priors or {}
-        tail = union(acc(s.code(f"pos:{t}"), weight=priors.get((klass.name, t), 0.0)) for t in tags) + acc(mark)
+        name = {NAME_POS: GUESS_NAME_WEIGHT}  # a guessed name weighs as a lexicon name in lower case (see guessweights)
+        tail = union(acc(s.code(f"pos:{t}"), weight=priors.get((klass.name, t), 0.0) + name.get(t, 0.0)) for t in tags) + acc(
+            mark
+        )
         after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""
         return stems + cross(tail, after) + pynini.accep("", weight=GUESS_OFFSET)
 

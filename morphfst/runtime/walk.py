@@ -25,7 +25,7 @@ import pynini
 
 from ..compile.arctable import Arcs, FstArcs
 from ..compile.fstutil import NO_STATE_ID
-from ..compile.guessweights import GUESS_COMPOUND_WEIGHT, GUESS_OFFSET, GUESS_STEM_WEIGHT
+from ..compile.guessweights import GUESS_COMPOUND_WEIGHT, GUESS_NAME_WEIGHT, GUESS_OFFSET, GUESS_STEM_WEIGHT, NAME_POS
 from ..language.normalize import restore_case
 from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 from .hyphenated import HYPHEN, hyphenated
@@ -86,7 +86,6 @@ GUESS_HEAD_MIN = 3  # letters of the shortest last part of a guessed compound (o
 # lower-case token spelt like a name is the name about one time in ten is from memory), so that
 # kiveä reads as the noun kivi first and Kiveä as either; words without another reading keep theirs.
 LOWER_CASE_NAME_WEIGHT = math.log(10)
-NAME_POS = "PROPN"  # the part of speech of proper names (Universal Dependencies), preferred in guesses of capitalized words
 
 
 class ArcWalker:
@@ -480,6 +479,19 @@ def _ranked_analyses(analyses: Iterable[Analysis], limit: int) -> list[Analysis]
     return sorted(best.values(), key=lambda a: (round(a.weight, 5), a.text, a.segmentation))[:limit]
 
 
+def _merged(first: list[Analysis], second: list[Analysis], limit: int) -> list[Analysis]:
+    """The first ``limit`` analyses of two ranked lists with no (text, segmentation) in common, ranked as
+    :meth:`FastAnalyzer.decode_all` ranks: by weight rounded to 5 places, then text and segmentation
+    (built only when two weights tie: a guess's text is not free)."""
+    both = first + second
+    rounded = [round(a.weight, 5) for a in both]
+    if len(set(rounded)) == len(rounded):
+        order = sorted(range(len(both)), key=rounded.__getitem__)
+    else:
+        order = sorted(range(len(both)), key=lambda i: (rounded[i], both[i].text, both[i].segmentation))
+    return [both[i] for i in order[:limit]]
+
+
 def _builder(cls: type) -> Callable[..., Any]:
     """A fast constructor for a frozen dataclass: the same object as ``cls(...)`` with every field given.
 
@@ -594,7 +606,7 @@ class FastAnalyzer:
         if not found and HYPHEN in surface:
             found = hyphenated(surface, word, self._analyze_part)
         if not found and guess:
-            return self.guess(word) if cased else self.guess_normalized(surface)
+            return self.guess(word, cased=cased)
         return found
 
     def _analyze_part(self, part: str) -> list[Analysis]:
@@ -603,40 +615,45 @@ class FastAnalyzer:
             return []
         return self.decode_all(part, self.bounded.walk(part, MAX_PATHS), False)
 
-    def guess(self, word: str, limit: int = MAX_GUESSES) -> list[Analysis]:
+    def guess(self, word: str, limit: int = MAX_GUESSES, cased: bool = True) -> list[Analysis]:
         """Guessed analyses of ``word`` (a stem the lexicon may not have), best first, marked ``guessed``.
 
-        A word written with a capital is a proper name more often than not when the lexicon lacks it:
-        its guesses as a name (part of speech ``PROPN``) weigh :data:`LOWER_CASE_NAME_WEIGHT` less, the
-        weight a name's reading costs when it is written in lower case, and their lemma is written with
-        the word's capitals (*Karadenizspor'un*: *Karadenizspor* PROPN)."""
+        The guesser weighs a guessed name (part of speech ``PROPN``) as a lexicon name read in lower
+        case (:data:`GUESS_NAME_WEIGHT`). A word written with a capital is a proper name more often
+        than not when the lexicon lacks it: its name guesses take that weight back and weigh
+        :data:`LOWER_CASE_NAME_WEIGHT` less besides, and their lemma is written with the word's
+        capitals (*Karadenizspor'un*: *Karadenizspor* PROPN). ``cased=False`` (the word's capitals
+        are not known) takes the weight back only."""
         surface = self.lang.normalize(word)
         if not self.lang.acceptable(surface):
             return []
-        if not word[:1].isupper():
+        capital = cased and word[:1].isupper()
+        if cased and not capital:
             return self.guess_normalized(surface, limit)
         found = self.guess_normalized(surface, max(limit, MAX_GUESSES))
         if not any(a.pos == NAME_POS for a in found):
             return found[:limit]
         fold = self.lang.normalize
+        back = GUESS_NAME_WEIGHT + (LOWER_CASE_NAME_WEIGHT if capital else 0.0)
         names = [
             _new_analysis(
                 a.word,
-                restore_case(word, a.lemma, fold),
+                restore_case(word, a.lemma, fold) if capital else a.lemma,
                 a.pos,
                 a.features,
                 a.morphs,
-                a.weight - LOWER_CASE_NAME_WEIGHT,
+                a.weight - back,
                 a.ud,
                 True,
             )
             for a in found
             if a.pos == NAME_POS
         ]
-        return _ranked_analyses([a for a in found if a.pos != NAME_POS] + names, limit)
+        return _merged([a for a in found if a.pos != NAME_POS], names, limit)
 
     def guess_normalized(self, surface: str, limit: int = MAX_GUESSES) -> list[Analysis]:
-        """Guesses of a normalized word: the ``limit`` best (only the paths that can be among them are decoded)."""
+        """Guesses of a normalized word: the ``limit`` best (only the paths that can be among them are decoded),
+        as for a word written in lower case (a guessed name weighs :data:`GUESS_NAME_WEIGHT` more)."""
         guesser = self.guesser
         if guesser is None or len(surface) > MAX_GUESS_LENGTH or limit < 1:
             return []
