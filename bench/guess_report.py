@@ -89,7 +89,9 @@ def main(argv: list[str] | None = None) -> int:
     print(f"  first guess, same segmentation    {same_seg / tried:6.1%}")
     print(f"  first guess, same lemma and POS   {same_lemma / tried:6.1%}")
     if names:
-        print(f"  names written with a capital      {names:,}: first guess a name of the lexicon's lemma {names_right / names:6.1%}")
+        print(
+            f"  names written with a capital      {names:,}: first guess a name of the lexicon's lemma {names_right / names:6.1%}"
+        )
     print("  same segmentation by the lexicon's part of speech:")
     for pos, n in by_pos.most_common(8):
         print(f"    {pos:<6} {right_by_pos[pos]:>5} of {n:>5}  {right_by_pos[pos] / n:6.1%}")
