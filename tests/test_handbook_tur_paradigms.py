@@ -134,3 +134,23 @@ def test_round_34_dictionary_words(tur: morphfst.Language) -> None:
     assert tur.analyze("binaen")[0].text == "binaen ADP"
     assert tur.analyze("istinaden")[0].text == "istinaden ADP"
     assert tur.analyze("velakin")[0].text == "velakin CONJ"
+
+
+def test_lexical_causatives_block_the_rule(tur: morphfst.Language) -> None:
+    # a closed set of one-syllable roots makes its causative with -Ir, -Ar or -It (G&K 8.2.1, L XII
+    # on the causative; from memory): düşürmek, pişirmek, bitirmek, geçirmek, koparmak, korkutmak,
+    # akıtmak, and kalkmak's kaldırmak; flag causative_lexical: no -DIr by rule
+    for root, causative in [("düşmek", "düşürdü"), ("pişmek", "pişirdi"), ("bitmek", "bitirdi"), ("geçmek", "geçirdi"),
+                            ("kopmak", "kopardı"), ("korkmak", "korkuttu"), ("akmak", "akıttı"), ("kalkmak", "kaldırdı")]:
+        assert first(tur, root, "V;CAUS;PST;3;SG") == "-", root
+        assert any(a.text.endswith(" V;PST;3;SG") and a.lemma != root for a in tur.analyze(causative)), causative
+    # *düştürdü, *piştirdi, *kalktırdı (test data invented: the rule's old outputs)
+    for word in ["düştürdü", "piştirdi", "kalktırdı", "korktırdı"]:
+        assert not tur.analyze(word), word
+    # the lexical causative takes a causative of its own (düşürttü 'had dropped'; common practice),
+    # and the roots keep their passive and reciprocal (geçildi, bitişti)
+    assert first(tur, "düşürmek", "V;CAUS;PST;3;SG") == "düşürttü"
+    assert first(tur, "geçmek", "V;PASS;PST;3;SG") == "geçildi"
+    # roots whose -DIr causative is a word of its own are not flagged (kaçtırdı, içtirdi, yattırdı)
+    for root, causative in [("kaçmak", "kaçtırdı"), ("içmek", "içtirdi"), ("yatmak", "yattırdı")]:
+        assert first(tur, root, "V;CAUS;PST;3;SG") == causative, root
