@@ -1951,3 +1951,37 @@ def test_action_nouns_and_moderatives_of_listed_words(fin: morphfst.Language) ->
     assert "vartiointissa" not in [f.form for f in fin.generate("vartiointi", "N;SG;IN+ESS")]
     assert "kesytelee" not in [f.form for f in fin.generate("kesytellä", "V;IND;PRS;3;SG")]
     assert fin.analyze("vartioinnissa")[0].text == "vartiointi N;SG;IN+ESS"
+
+
+def test_a_compound_whose_last_part_has_only_y_takes_front_endings(fin: morphfst.Language) -> None:
+    # Karlsson, Finnish: An Essential Grammar, vowel harmony (from memory): a compound takes the
+    # harmony of its last part, so kyky, hylly, syy, kymmen keep front endings after a back first part
+    # (kilpailukykyä, kirjahyllyssä, tekosyitä, vuosikymmenellä); only a loan like analyysi takes
+    # either (test_loans_with_y_after_a_back_vowel_take_either_harmony)
+    for lemma, feats, form in [
+        ("kilpailukyky", "N;SG;PRT", "kilpailukykyä"),
+        ("kirjahylly", "N;SG;IN+ESS", "kirjahyllyssä"),
+        ("tekosyy", "N;PL;PRT", "tekosyitä"),
+        ("vuosikymmen", "N;SG;AT+ESS", "vuosikymmenellä"),
+        ("kilpailukykyinen", "ADJ;SG;PRT", "kilpailukykyistä"),
+    ]:
+        assert [f.form for f in fin.generate(lemma, feats)] == [form], (lemma, feats)
+    assert not fin.analyze("kilpailukykya")
+
+
+def test_added_abstract_and_action_nouns_inflect_by_their_type(fin: morphfst.Language) -> None:
+    # Kotus word list, from memory: the abstract nouns in -(U)Us are type 40 (voimakkuus:
+    # voimakkuuden, voimakkuuksia; hirveys: hirveyttä), the nouns in -Us of verbs type 39 (ällistys:
+    # ällistyksen), levyke 48A (levykkeen), käräjät the plural of type 10 käräjä (käräjissä)
+    for lemma, feats, form in [
+        ("voimakkuus", "N;SG;GEN", "voimakkuuden"),
+        ("voimakkuus", "N;PL;PRT", "voimakkuuksia"),
+        ("hirveys", "N;SG;PRT", "hirveyttä"),
+        ("juhlavuus", "N;SG;IN+ALL", "juhlavuuteen"),
+        ("ällistys", "N;SG;GEN", "ällistyksen"),
+        ("levyke", "N;SG;GEN", "levykkeen"),
+        ("käräjä", "N;PL;IN+ESS", "käräjissä"),
+    ]:
+        assert form in [f.form for f in fin.generate(lemma, feats)], (lemma, feats)
+    # the noun ranks before the verb's imperative with the clitic -s (ällistyä: ällisty-s)
+    assert fin.analyze("ällistys")[0].text == "ällistys N;SG;NOM"
