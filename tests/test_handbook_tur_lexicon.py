@@ -1,0 +1,120 @@
+"""Nouns and adjectives added to the Turkish lexicon from a general dictionary, one check per flag class.
+
+Sources named beside each check:
+  TDK  Türk Dil Kurumu, Güncel Türkçe Sözlük: the headword and the suffix hint after it ('ayrıt, -tı')
+  G&K  Göksel, A. & Kerslake, C., Turkish: A Comprehensive Grammar (Routledge, 2005)
+  L    Lewis, G., Turkish Grammar, 2nd ed. (Oxford University Press, 2000)
+The forms are written from memory of those works ("from memory").
+"""
+
+from __future__ import annotations
+
+import pytest
+
+import morphfst
+
+
+def best(tur: morphfst.Language, word: str) -> str:
+    readings = tur.analyze(word)
+    return readings[0].text if readings else "-"
+
+
+def form(tur: morphfst.Language, lemma: str, features: str) -> str:
+    generated = tur.generate(lemma, features)
+    return generated[0].form if generated else "-"
+
+
+# A stem of two or more syllables voices its final stop before a vowel (G&K 2.2.2.1, L II.9; from
+# memory), with no flag: TDK 'mabut, -du', 'cenup, -bu', 'keşik, -ği',
+# 'aminoasit, -di', 'ızbandut, -du' (from memory).
+@pytest.mark.parametrize(
+    "lemma, pos, accusative, locative",
+    [
+        ("mabut", "ADJ", "mabudu", "mabutta"),
+        ("cenup", "N", "cenubu", "cenupta"),
+        ("keşik", "N", "keşiği", "keşikte"),
+        ("aminoasit", "N", "aminoasidi", "aminoasitte"),
+        ("ızbandut", "N", "ızbandudu", "ızbandutta"),
+        ("özek", "N", "özeği", "özekte"),
+    ],
+)
+def test_new_stems_that_voice(tur: morphfst.Language, lemma: str, pos: str, accusative: str, locative: str) -> None:
+    assert form(tur, lemma, f"{pos};SG;ACC") == accusative
+    assert best(tur, accusative).startswith(f"{lemma} {pos};SG;")
+    # before a consonant the stop stays voiceless (G&K 2.2.2.1, from memory)
+    assert form(tur, lemma, f"{pos};SG;LOC") == locative
+
+
+# flag no_voicing: the stop stays voiceless before a vowel (TDK 'ayrıt, -tı', 'kayşat, -tı',
+# 'dölüt, -tü', 'büvet, -ti', 'zevat, -tı', 'rüsumat, -tı', 'safahat, -tı'; from memory)
+@pytest.mark.parametrize(
+    "lemma, accusative",
+    [
+        ("ayrıt", "ayrıtı"),
+        ("kayşat", "kayşatı"),
+        ("dölüt", "dölütü"),
+        ("büvet", "büveti"),
+        ("zevat", "zevatı"),
+        ("rüsumat", "rüsumatı"),
+        ("safahat", "safahatı"),
+        ("çipset", "çipseti"),
+    ],
+)
+def test_new_stems_that_keep_the_stop(tur: morphfst.Language, lemma: str, accusative: str) -> None:
+    assert form(tur, lemma, "N;SG;ACC") == accusative
+    assert best(tur, accusative) in (f"{lemma} N;SG;ACC", f"{lemma} N;SG;PSS3S;NOM")
+
+
+# flag front_harmony: Arabic loans with a long a or a final l said palatal take front suffixes
+# (TDK 'rical, -li', 'şimal, -li', 'minval, -li', 'meful, -lü', 'şamil, -li'; G&K 2.3 on
+# exceptions to vowel harmony; from memory)
+@pytest.mark.parametrize(
+    "lemma, pos, dative",
+    [
+        ("rical", "N", "ricale"),
+        ("şimal", "N", "şimale"),
+        ("minval", "N", "minvale"),
+        ("meful", "N", "mefule"),
+        ("şamil", "ADJ", "şamile"),
+    ],
+)
+def test_new_front_harmony_loans(tur: morphfst.Language, lemma: str, pos: str, dative: str) -> None:
+    assert form(tur, lemma, f"{pos};SG;DAT") == dative
+    assert best(tur, dative) == f"{lemma} {pos};SG;DAT"
+
+
+def test_new_ayn_possessives(tur: morphfst.Language) -> None:
+    # the Arabic final ayn the spelling lost comes back as the possessive -I without s: TDK 'vuku, -uu'
+    # ('vukuu', as in 'vukuu halinde'), 'menafi, -ii' (from memory)
+    assert form(tur, "vuku", "N;SG;PSS3S;NOM") == "vukuu"
+    assert best(tur, "vukuu") == "vuku N;SG;PSS3S;NOM"
+    assert form(tur, "menafi", "N;SG;PSS3S;NOM") == "menafii"
+    # the other cases take the buffer y as after any vowel (vukuya, vukudan; from memory)
+    assert form(tur, "vuku", "N;SG;DAT") == "vukuya"
+
+
+def test_new_plain_nouns_and_adjectives(tur: morphfst.Language) -> None:
+    # words with no flag, inflected as their spelling says (TDK headwords; from memory)
+    assert best(tur, "faciası") == "facia N;SG;PSS3S;NOM"
+    assert best(tur, "facialar") == "facia N;PL;NOM"
+    assert best(tur, "yöneyler") == "yöney N;PL;NOM"
+    assert best(tur, "becayişi").startswith("becayiş N;SG;")
+    assert best(tur, "koordinatörü").startswith("koordinatör N;SG;")
+    assert best(tur, "lokasyonda") == "lokasyon N;SG;LOC"
+    assert best(tur, "ibresi") == "ibre N;SG;PSS3S;NOM"
+    assert best(tur, "türdeş") == "türdeş ADJ;SG;NOM"
+    assert best(tur, "seksüel") == "seksüel ADJ;SG;NOM"
+
+
+def test_weights_of_new_words_spelt_like_frequent_forms(tur: morphfst.Language) -> None:
+    # askeriye 'the military' is read before askeri's dative (TDK headword, from memory) ...
+    assert best(tur, "askeriye") == "askeriye N;SG;NOM"
+    assert best(tur, "askeriyede") == "askeriye N;SG;LOC"
+    # ... while a rare noun spelt like a frequent word's form stays behind it: ulama 'liaison' after
+    # ulam's dative, dahi 'genius' after the adverb dahi, gözde 'favourite' after göz's locative
+    # (test data invented: the rankings are the lexicon's weights)
+    assert best(tur, "dahi") == "dahi ADV"
+    assert any(a.text == "dahi N;SG;NOM" for a in tur.analyze("dahi"))
+    assert best(tur, "dahiler") == "dahi N;PL;NOM"
+    assert best(tur, "gözde") == "göz N;SG;LOC"
+    assert best(tur, "gözdesi") == "gözde N;SG;PSS3S;NOM"
