@@ -118,3 +118,18 @@ def test_weights_of_new_words_spelt_like_frequent_forms(tur: morphfst.Language) 
     assert best(tur, "dahiler") == "dahi N;PL;NOM"
     assert best(tur, "gözde") == "göz N;SG;LOC"
     assert best(tur, "gözdesi") == "gözde N;SG;PSS3S;NOM"
+
+
+def test_new_vowel_loss_and_one_syllable_voicing(tur: morphfst.Language) -> None:
+    # flag vowel_loss: the last stem vowel drops before a vowel (TDK 'vitir, -tri', 'hayız, -yzı';
+    # G&K 2.2.2.3 on vowel loss, from memory)
+    assert form(tur, "vitir", "N;SG;ACC") == "vitri"
+    assert form(tur, "vitir", "N;SG;LOC") == "vitirde"
+    assert form(tur, "hayız", "N;SG;PSS3S;NOM") == "hayzı"
+    assert best(tur, "hayzı").startswith("hayız N;SG;")
+    # vitir's genitive is spelt like vitrin 'shop window', which stays first (test data invented: the
+    # ranking is the lexicon's weight)
+    assert best(tur, "vitrin") == "vitrin N;SG;NOM"
+    # flag voicing on a one-syllable stem: TDK 'derç, -rci' (from memory)
+    assert form(tur, "derç", "N;SG;ACC") == "derci"
+    assert form(tur, "derç", "N;SG;LOC") == "derçte"
