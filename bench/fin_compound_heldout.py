@@ -16,6 +16,7 @@ usage (from the root of the checkout, with MORPHFST_CACHE set):
 prints the share of forms and of lemmas read and the failures by class of first part (SG NOM, SG
 GEN, CPD form, PL GEN, adjective, other case form or word, -nen word, -minen) and of last part.
 """
+
 from __future__ import annotations
 
 import argparse
@@ -26,8 +27,9 @@ import sys
 from pathlib import Path
 
 sys.path.insert(0, os.getcwd())
-import morphfst  # noqa: E402
 import pynini  # noqa: E402
+
+import morphfst  # noqa: E402
 from morphfst.runtime import compiled_language as cl  # noqa: E402
 
 FORMS = ("SG;NOM", "SG;GEN", "PL;PRT", "SG;IN+ESS")
@@ -125,7 +127,6 @@ def main() -> None:
     fails = collections.defaultdict(list)
     for lemma, pos, (left, right, fc) in cands:
         rpos = sorted(p for c, p in lex[right] if p in ("N", "ADJ"))
-        deriv = right.endswith(("minen", "ja", "jä", "us", "ys", "nti", "nen"))
         klass = fc + (" +ADJ" if rpos == ["ADJ"] else "")
         ok_all = True
         for tags in FORMS:
@@ -149,11 +150,13 @@ def main() -> None:
                 if len(fails[klass]) < 10000:
                     fails[klass].append(f"{form} ({left}+{right})")
         lem_read += ok_all
-    print(f"candidate compound lemmas: {len(cands)}; read in all four forms: {lem_read} ({lem_read/len(cands):.1%})")
-    print(f"forms: {forms_read}/{forms_total} read ({forms_read/forms_total:.1%}), "
-          f"{forms_first} read first ({forms_first/forms_total:.1%})")
+    print(f"candidate compound lemmas: {len(cands)}; read in all four forms: {lem_read} ({lem_read / len(cands):.1%})")
+    print(
+        f"forms: {forms_read}/{forms_total} read ({forms_read / forms_total:.1%}), "
+        f"{forms_first} read first ({forms_first / forms_total:.1%})"
+    )
     for k, (t, r, f) in sorted(by_class.items(), key=lambda x: -x[1][0] + x[1][1]):
-        print(f"  {k:32s} {r:5d}/{t:<5d} read {r/t:6.1%}  first {f/t:6.1%}  failed {t-r}")
+        print(f"  {k:32s} {r:5d}/{t:<5d} read {r / t:6.1%}  first {f / t:6.1%}  failed {t - r}")
         if args.fail:
             print("     ", " ".join(fails[k][: args.fail]))
 
