@@ -40,6 +40,23 @@ def test_analyze_tsv_one_record_per_token_in_order(
     assert rows[2][1] == "0"  # no analysis: rank 0, empty fields
 
 
+def test_analyze_guess_marks_guessed_readings(capsys: pytest.CaptureFixture[str], tur: morphfst.Language) -> None:
+    # "blorpkayada" is a made-up word (test data): the lexicon has no reading, the guesser splits off
+    # the locative -da; a lexicon word keeps its lexicon readings, unmarked.
+    code, out, _ = run(capsys, "analyze", "--guess", "blorpkayada", "evlerde", "--best", "1")
+    lines = out.splitlines()
+    assert code == 0
+    assert "(guess) blorpkaya N;SG;LOC" in lines[2] and "blorpkaya-da" in lines[2]
+    assert "ev N;PL;LOC" in lines[3] and "(guess)" not in lines[3]
+    code, out, _ = run(capsys, "analyze", "--guess", "blorpkayada", "evlerde", "-f", "tsv", "--best", "1")
+    rows = [line.split("\t") for line in out.splitlines()]
+    assert rows[0][-1] == "guessed" and rows[1][-1] == "yes" and rows[2][-1] == ""
+    code, out, _ = run(capsys, "analyze", "--guess", "blorpkayada", "-f", "jsonl", "--best", "1")
+    assert json.loads(out)["analyses"][0]["guessed"] is True
+    code, out, _ = run(capsys, "analyze", "blorpkayada", "-f", "tsv")
+    assert out.splitlines()[1].split("\t")[:2] == ["blorpkayada", "0"]  # without --guess: no analysis
+
+
 def test_analyze_jsonl(capsys: pytest.CaptureFixture[str], tur: morphfst.Language) -> None:
     code, out, _ = run(capsys, "analyze", "kitabı", "-f", "jsonl")
     record = json.loads(out)

@@ -25,9 +25,11 @@ EXAMPLES = """examples:
   morphfst analyze -l fin talossa -f jsonl        Finnish, one JSON object per word
   morphfst analyze -i words.txt -f tsv --best 1   a word list, best analysis only, as TSV
   echo "Ankara'da" | morphfst analyze             words from standard input
+  morphfst analyze --guess blorpkayada            a word the lexicon lacks: the guesser's readings, marked
 """
 
 TSV_HEADER = ["word", "rank", "lemma", "pos", "features", "segmentation", "gloss", "weight"]
+GUESS_MARK = "(guess) "  # before a guessed analysis in the table format
 
 
 def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
@@ -44,6 +46,12 @@ def register(sub: argparse._SubParsersAction) -> None:  # type: ignore[type-arg]
     add_input(p)
     add_format(p)
     p.add_argument("--best", type=int, default=0, metavar="N", help="keep only the N best analyses of each word (0: all)")
+    p.add_argument(
+        "--guess",
+        action="store_true",
+        help="a word the lexicon does not analyze gets the guesser's analyses, marked as guessed "
+        "(table: '(guess)' before the analysis; tsv: a 'guessed' column; jsonl: \"guessed\": true)",
+    )
     p.set_defaults(func=run)
 
 
@@ -54,11 +62,12 @@ def run(args: argparse.Namespace) -> int:
     stats = ReadStats()
     out = sys.stdout
     table = Aligned(["word", "analysis", "segmentation", "gloss", "weight"], out) if args.format == "table" else None
+    header = TSV_HEADER + (["guessed"] if args.guess else [])
     if args.format == "tsv":
-        out.write("\t".join(TSV_HEADER) + "\n")
+        out.write("\t".join(header) + "\n")
     unknown = 0
     for word in words_from(args, stats):
-        analyses = lang.analyze(word)
+        analyses = lang.analyze(word, guess=args.guess)
         if args.best > 0:
             analyses = analyses[: args.best]
         if not analyses:
@@ -67,9 +76,11 @@ def run(args: argparse.Namespace) -> int:
             write_json({"word": word, "analyses": [a.to_dict() for a in analyses]}, out)
         elif args.format == "tsv":
             if not analyses:
-                out.write("\t".join([tsv_field(word), "0", "", "", "", "", "", ""]) + "\n")
+                out.write("\t".join([tsv_field(word), "0"] + [""] * (len(header) - 2)) + "\n")
             for rank, a in enumerate(analyses, start=1):
                 row = [word, str(rank), a.lemma, a.pos, ";".join(a.features), a.segmentation, a.gloss, f"{a.weight:.4f}"]
+                if args.guess:
+                    row.append("yes" if a.guessed else "")
                 out.write("\t".join(tsv_field(c) for c in row) + "\n")
         else:
             assert table is not None
@@ -77,7 +88,8 @@ def run(args: argparse.Namespace) -> int:
             if not analyses:
                 table.add([shown, "(no analysis)", "", "", ""])
             for rank, a in enumerate(analyses):
-                table.add([shown if rank == 0 else "", a.text, a.segmentation, a.gloss, f"{a.weight:.2f}"])
+                text = GUESS_MARK + a.text if a.guessed else a.text
+                table.add([shown if rank == 0 else "", text, a.segmentation, a.gloss, f"{a.weight:.2f}"])
     if table:
         table.flush()
     report_stats(stats)
