@@ -213,6 +213,14 @@ def test_turkish_copulas_in_another_order_are_two_tables(tur: morphfst.Language)
     # the stacked evidential and past + past are not generated: their cells are left empty
     stacked = grid_of(a, "NFH+NFH")
     assert all(c is None or not c.forms for row in stacked.cells for c in row)
+    # the viewing formats leave such a sub-table out and name it under the table; the records keep it
+    text = render_text([a], 80)
+    assert "NFH+NFH\n" not in text and "NFH+NFH  " not in text
+    assert "with no form at all not shown" in " ".join(text.split()) and "NFH+NFH" in text
+    markdown = render([a], "markdown", "tur", "gelmek")
+    assert "| positive | negative |" in markdown and "### NFH+NFH" not in markdown
+    assert "<caption>NFH+NFH</caption>" not in render([a], "html", "tur", "gelmek")
+    assert any(line.split("\t")[4] == "NFH+NFH" for line in render([a], "tsv", "tur", "gelmek").splitlines()[1:])
 
 
 def test_word_not_in_the_lexicon_with_its_class(tur: morphfst.Language) -> None:

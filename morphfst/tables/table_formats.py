@@ -3,7 +3,8 @@
 Every format shows all forms of a cell, preferred first. In the text, Markdown and HTML views,
 forms tied for the lowest weight are joined with `` / `` and less preferred forms follow in
 parentheses; a cell the grammar leaves unfilled shows an em dash; a crossing the paradigm does not
-have at all stays blank. CSV/TSV have one record per form (one per unfilled cell, with an empty
+have at all stays blank; a sub-table none of whose cells has a form is left out and named under the
+table (see :func:`shown_grids`). CSV/TSV have one record per form (one per unfilled cell, with an empty
 form), so they read back into a list of (cell, rank, form) records; JSON holds everything, as plain
 data.
 """
@@ -20,7 +21,7 @@ import unicodedata
 from collections.abc import Sequence
 from typing import Any
 
-from .layout import Arranged, Grid
+from .layout import Arranged, Grid, Section
 from .paradigm import Cell
 
 EMPTY = "—"
@@ -83,8 +84,20 @@ def _uses_variants(items: Sequence[Arranged]) -> tuple[bool, bool]:
     return variants, empties
 
 
+def _has_form(grid: Grid) -> bool:
+    return any(cell is not None and cell.forms for row in grid.cells for cell in row)
+
+
+def shown_grids(section: Section) -> list[Grid]:
+    """The grids the viewing formats (text, Markdown, HTML) show: a grid with no form in any cell is
+    left out (a combination the morphotactics allows and the rules or constraints leave empty, such
+    as Turkish -mIş twice); :func:`unfilled_summary` names them. The record formats keep every cell."""
+    return [g for g in section.grids if _has_form(g)]
+
+
 def unfilled_summary(a: Arranged) -> str:
-    """A line saying how many cells have no form and which constraints of the grammar empty them."""
+    """A line saying how many cells have no form and which constraints of the grammar empty them, and
+    which sub-tables the viewing formats leave out because none of their cells has a form."""
     empty = [c for c in a.paradigm.cells if not c.forms]
     if not empty:
         return ""
@@ -93,7 +106,13 @@ def unfilled_summary(a: Arranged) -> str:
         for name in c.template.blocked_by or ("no rule path",):
             by[name] = by.get(name, 0) + 1
     reasons = ", ".join(f"{name}: {n}" if name == "no rule path" else f"constraint {name}: {n}" for name, n in by.items())
-    return f"{len(empty)} of {len(a.paradigm.cells)} cells have no form ({reasons})"
+    line = f"{len(empty)} of {len(a.paradigm.cells)} cells have no form ({reasons})"
+    hidden = [g.title or "(untitled)" for section in a.sections for g in section.grids if not _has_form(g)]
+    if hidden:
+        line += f"; {len(hidden)} sub-table{'s' if len(hidden) > 1 else ''} with no form at all not shown: " + "; ".join(
+            dict.fromkeys(hidden)
+        )
+    return line
 
 
 # ---------------------------------------------------------------------------------------------
@@ -203,7 +222,7 @@ def render_text(items: Sequence[Arranged], width: int = 80) -> str:
                     out.extend(_side_by_side(band))
                 band, band_rows, band_width = [], None, 0
 
-            for grid in section.grids:
+            for grid in shown_grids(section):
                 if grid.single:
                     flush()
                     out.append("")
@@ -256,7 +275,7 @@ def render_markdown(items: Sequence[Arranged]) -> str:
                 out += [f"## {_md(section.title)}", ""]
             if section.fixed_note:
                 out += [f"*{_md(section.fixed_note)}*", ""]
-            for grid in section.grids:
+            for grid in shown_grids(section):
                 if grid.title:
                     out += [f"### {_md(grid.title)}", ""]
                 out.append("| " + " | ".join(_md(x) for x in [grid.row_header or " ", *grid.columns]) + " |")
@@ -264,6 +283,9 @@ def render_markdown(items: Sequence[Arranged]) -> str:
                 for label, row in zip(grid.rows, grid.cells):
                     out.append("| " + " | ".join([f"**{_md(label)}**"] + [_md(cell_text(c)) for c in row]) + " |")
                 out.append("")
+        summary = unfilled_summary(a)
+        if summary:
+            out += [f"*{_md(summary)}*", ""]
     variants, empties = _uses_variants(items)
     if variants or empties:
         out += [_md(LEGEND), ""]
@@ -414,7 +436,7 @@ def render_html(items: Sequence[Arranged], page_title: str, subtitle: str = "") 
             if section.fixed_note:
                 out.append(f'<p class="note">{_e(section.fixed_note)}</p>')
             out.append('<div class="grids">')
-            for grid in section.grids:
+            for grid in shown_grids(section):
                 out.append("<table>")
                 if grid.title:
                     out.append(f"<caption>{_e(grid.title)}</caption>")
@@ -427,6 +449,9 @@ def render_html(items: Sequence[Arranged], page_title: str, subtitle: str = "") 
                 out.append("</table>")
             out.append("</div>")
             out.append("</section>")
+        summary = unfilled_summary(a)
+        if summary:
+            out.append(f'<p class="note">{_e(summary)}</p>')
         out.append("</article>")
     variants, empties = _uses_variants(items)
     if variants or empties:
