@@ -118,3 +118,38 @@ def test_words_added_from_the_unanalyzed_development_list(tur: morphfst.Language
     assert best(tur, "beraber") == "beraber ADV"
     assert best(tur, "teâlâ") == "teâlâ ADJ;SG;NOM"
     assert best(tur, "aleyküm") == "aleyküm INTJ"
+
+
+def test_adjectives_take_the_nouns_derivations(tur: morphfst.Language) -> None:
+    # an adjective used as a noun takes -lI, -sIz, -CI, -sAl (G&K 7.1, from memory): siyahlı 'the one
+    # in black', beyazlılar, eksiksiz, antikacı, doğrusal; the listed words come first
+    assert best(tur, "siyahlı") == "siyah ADJ;PROPR;ADJ;SG;NOM"
+    assert best(tur, "beyazlılar") == "beyaz ADJ;PROPR;ADJ;PL;NOM"
+    assert forms(tur, "eksik", "ADJ;PRIV;ADJ;SG;NOM") == ["eksiksiz"]
+    assert forms(tur, "mavi", "ADJ;PROPR;ADJ;PL;NOM") == ["mavililer"]
+    assert forms(tur, "doğru", "ADJ;RELADJ;ADJ;SG;NOM") == ["doğrusal"]
+    assert "antika ADJ;AGT;N;PL;NOM" in [a.text for a in tur.analyze("antikacılar")]
+    assert best(tur, "uygunsuzluk") == "uygunsuz ADJ;ABSTR;N;SG;NOM"
+    for word in ["eksiksiz", "rahatsız", "eskici", "doğrusal", "ilerici", "sarılı", "kurucu"]:
+        assert tur.analyze(word)[0].lemma == word, word
+    # a noun's possessive stays first where it spells the same (pahalısı is pahalı + 3SG.POSS, not
+    # paha-lı + -sI; kötüsü, iyisi)
+    assert best(tur, "pahalısı") == "pahalı ADJ;SG;PSS3S;NOM"
+    assert best(tur, "iyisi") == "iyi ADJ;SG;PSS3S;NOM"
+
+
+def test_the_similative_si_after_a_consonant(tur: morphfst.Language) -> None:
+    # -sI 'X-like' after a consonant (G&K 7.1 on -sI, from memory): taşsı 'stony-looking', kitapsı;
+    # after a vowel the similative is -(I)msI (kırmızımsı), so kırmızısı, arabası are possessives only
+    assert best(tur, "taşsı") == "taş N;SIMIL;ADJ;SG;NOM"
+    assert best(tur, "kitapsı") == "kitap N;SIMIL;ADJ;SG;NOM"
+    assert forms(tur, "bebek", "N;SIMIL;ADJ;SG;NOM")[:1] == ["bebeksi"]
+    assert forms(tur, "kırmızı", "ADJ;SIMIL;ADJ;SG;NOM") == ["kırmızımsı"]
+    # the listed words come first (masalsı, camsı, bebeksi, kumsu)
+    for word in ["masalsı", "camsı", "bebeksi", "kumsu"]:
+        assert tur.analyze(word)[0].lemma == word, word
+    # not after a vowel, and not before a noun's own possessive (test data: forms of listed words)
+    for word in ["kırmızısı", "arabası", "hastası"]:
+        assert not any("SIMIL" in a.text for a in tur.analyze(word)), word
+    assert best(tur, "tersi") == "ters ADJ;SG;PSS3S;NOM"
+    assert best(tur, "cinsi") == "cins N;SG;PSS3S;NOM"
