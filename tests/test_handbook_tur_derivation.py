@@ -153,3 +153,20 @@ def test_the_similative_si_after_a_consonant(tur: morphfst.Language) -> None:
         assert not any("SIMIL" in a.text for a in tur.analyze(word)), word
     assert best(tur, "tersi") == "ters ADJ;SG;PSS3S;NOM"
     assert best(tur, "cinsi") == "cins N;SG;PSS3S;NOM"
+
+
+def test_the_resultative_adjective_ik_of_verbs(tur: morphfst.Language) -> None:
+    # -(I)k after a verb's consonant, the adjective of the resulting state (G&K 7.2 on -(I)k, from
+    # memory): kırık 'broken', yıkık, bükük; on a voice too (yapışık: yap-ış-ık); inflected and
+    # derived like an adjective (kırıklar, bozukluk)
+    assert forms(tur, "kırmak", "V;RESULT;ADJ;SG;NOM") == ["kırık"]
+    assert forms(tur, "gitmek", "V;RESULT;ADJ;PL;NOM") == ["gidikler"]
+    assert "sökmek V;RESULT;ADJ;SG;NOM" in [a.text for a in tur.analyze("sökük")]
+    assert "yapmak V;RECP;RESULT;ADJ;SG;NOM" in [a.text for a in tur.analyze("yapışık")]
+    # the listed words come first (kırık, yazık, sanık, bozuk, açık, balık is no verb's)
+    for word in ["kırık", "yazık", "sanık", "bozuk", "açık", "yıkık", "balık"]:
+        assert tur.analyze(word)[0].lemma == word, word
+    # not after a vowel, the abilitative or the negative (test data invented: impossible forms)
+    for word in ["okuk", "gelebilik", "yapmık"]:
+        assert tur.analyze(word) == [], word
+    assert forms(tur, "okumak", "V;RESULT;ADJ;SG;NOM") == []
