@@ -8,7 +8,7 @@ y or a dropped link vowel after a vowel, and a verb root's final stop voiced bef
 the root is flagged voicing (git-: gidiş). Nominal suffixes: -lIk, -CI, -lI, -sIz, -sAl, -CIk,
 -(I)msI, -DAş on a listed noun or adjective, and -CA on an adjective giving a listed adverb; verbs
 from nominals: -lA-, -lAş-, -lAn-, -Al-; verbs from verbs: -(I)n-, -(I)ş-, -(I)l-, -DIr-/-t-;
-nouns from verbs: -mA, -(y)Iş, -(y)IcI, -(I)m, -(I)ntI, and the adjective -(I)k. For each derived entry four forms are
+nouns from verbs: -mA, -(y)Iş, -(y)IcI, -(I)m, -(I)ntI, and the adjectives -(I)k and -GAn. For each derived entry four forms are
 generated from the entry itself (nouns: accusative, plural, locative, third person possessive +
 dative; adjectives: bare, accusative, plural, locative; verbs: past 3sg, progressive 3sg, verbal
 noun -mA, negative aorist 3sg; an adverb: the word alone), and every analysis of each form is
@@ -76,6 +76,7 @@ VERBAL = {
     "-(I)m": ("ACTN;N",),
     "-(I)ntI": ("REMN;N",),
     "-(I)k": ("RESULT;ADJ",),
+    "-GAn": ("INCL;ADJ",),
 }
 
 
@@ -198,6 +199,7 @@ def candidates(lex) -> list[tuple[str, str, str, str]]:
                 ("-(I)m", spell(vroot, "(I)m"), "N", False),
                 ("-(I)ntI", spell(vroot, "(I)ntI"), "N", False),
                 ("-(I)k", None if vowel_end else spell(vroot, "Ik"), "ADJ", False),
+                ("-GAn", spell(root, ("kAn" if root[-1] in VOICELESS else "gAn")), "ADJ", False),
             ]
             for name, d, dpos, is_verb in tries:
                 if d is None:

@@ -170,3 +170,22 @@ def test_the_resultative_adjective_ik_of_verbs(tur: morphfst.Language) -> None:
     for word in ["okuk", "gelebilik", "yapmık"]:
         assert tur.analyze(word) == [], word
     assert forms(tur, "okumak", "V;RESULT;ADJ;SG;NOM") == []
+
+
+def test_the_inclination_adjective_gan_of_verbs(tur: morphfst.Language) -> None:
+    # -GAn 'inclined to, apt to' after a verb's consonant (G&K 7.2 on -GAn, from memory): k after a
+    # voiceless consonant (çalışkan, iletken, yansıtkan), else g (kırılgan, saldırgan, soğurgan)
+    assert best(tur, "soğurgan") == "soğurmak V;INCL;ADJ;SG;NOM"
+    assert best(tur, "yansıtkan") == "yansıtmak V;INCL;ADJ;SG;NOM"
+    assert forms(tur, "çalışmak", "V;INCL;ADJ;SG;NOM") == ["çalışkan"]
+    assert forms(tur, "kırmak", "V;PASS;INCL;ADJ;SG;NOM") == ["kırılgan"]
+    assert forms(tur, "yansımak", "V;CAUS;INCL;ADJ;SG;NOM") == ["yansıtkan"]
+    # the listed words come first (çalışkan, kırılgan, saldırgan, yorgan 'quilt', kaygan)
+    for word in ["çalışkan", "kırılgan", "saldırgan", "yorgan", "kaygan"]:
+        assert tur.analyze(word)[0].lemma == word, word
+    # not after a vowel, no g after a voiceless consonant nor k after a voiced one (test data
+    # invented: impossible forms)
+    for word in ["okugan", "kırılkan", "çalışgan"]:
+        assert tur.analyze(word) == [], word
+    # the copula's -(y)ken on a noun keeps its reading (çocukken 'as a child', sıkken)
+    assert best(tur, "çocukken") == "çocuk N;SG;NOM;V.CVB;WHILE"
