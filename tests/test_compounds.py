@@ -323,3 +323,17 @@ def test_order_of_groups(tmp_path: Path) -> None:
 def test_order_and_lastmin_errors(tmp_path: Path, block: str, message: str) -> None:
     err = error_of(tmp_path, block)
     assert message in err.message
+
+
+def test_a_bare_bundle_takes_an_uninflected_first_part(tmp_path: Path) -> None:
+    """``forms -``: a first part with no feature at all, an uninflected word (an indeclinable adjective
+    here; Finnish eri+kokoinen, jälleen+rakennus); an inflecting word's forms do not match it."""
+    grammar = GRAMMAR.replace("  adj pos ADJ -> number\n", "  adj pos ADJ -> number\n  bare pos ADJ -> bare\n")
+    grammar = grammar.replace("COMPOUND", 'slot bare {\n  ""\n}\n\ncompound {\n  first ADJ\n  forms -\n  last N\n}\n')
+    lexicon = LEXICON + "eri\tbare\tADJ\tother\n"
+    lang = morphfst.load(write_toy(tmp_path, grammar, lexicon))
+    assert lang.meta["compounds"][0]["forms"] == [[]]
+    assert [(a.text, a.segmentation) for a in lang.analyze("erikalassa")] == [("erikala N;SG;LOC", "eri-kala-ssa")]
+    assert lang.analyze("isokala") == []  # iso is in SG NOM, not bare
+    (c,) = parse_grammar_text("compound {\n  first ADJ\n  forms - | SG NOM\n  last N\n}\n").compounds
+    assert c.forms == [[], ["SG", "NOM"]]
