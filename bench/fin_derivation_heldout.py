@@ -32,8 +32,9 @@ from pathlib import Path
 sys.path.insert(0, os.getcwd())
 sys.path.insert(0, str(Path(__file__).resolve().parent))
 
-import morphfst  # noqa: E402
 from fin_compound_heldout import all_paths, is_compound, load_lexicon  # noqa: E402
+
+import morphfst  # noqa: E402
 
 NOMINAL_FORMS = ("SG;NOM", "SG;GEN", "PL;PRT", "SG;IN+ESS")
 VERB_FORMS = ("NFIN", "IND;PRS;3;SG", "IND;PST;3;SG", "PASS;IND;PRS")
