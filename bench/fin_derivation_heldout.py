@@ -87,9 +87,7 @@ def main() -> None:
             if len(stem) < 3:
                 continue
             prefix = stem[: max(3, len(stem) - 2)]
-            bases = {
-                b for b in by_pos.get(bpos, []) if b.startswith(prefix) and b != lemma and len(b) <= len(stem) + 3
-            }
+            bases = {b for b in by_pos.get(bpos, []) if b.startswith(prefix) and b != lemma and len(b) <= len(stem) + 3}
             if bases:
                 entries.append((lemma, bases))
         forms_total = forms_read = lem_read = 0
