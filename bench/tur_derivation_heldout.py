@@ -37,6 +37,9 @@ import sys
 from pathlib import Path
 
 sys.path.insert(0, os.getcwd())
+sys.path.insert(0, str(Path(__file__).resolve().parent))
+from fin_compound_heldout import is_compound  # noqa: E402  (a reading with two stems)
+
 import morphfst  # noqa: E402
 
 FILES = ("nouns", "adjectives", "adverbs", "verbs", "compounds", "core")
@@ -247,10 +250,6 @@ def forms_of(lang, lemma: str, pos: str) -> list[tuple[str, str]]:
         if g:
             out.append((c, g[0].form))
     return out
-
-
-def is_compound(a) -> bool:
-    return sum(1 for m in a.morphs if m.kind == "stem") >= 2
 
 
 def main() -> None:
