@@ -9,6 +9,7 @@ from toygrammar import TOY_GRAMMAR, TOY_LEXICON, write_toy
 
 import morphfst
 from morphfst.errors import UserError
+from morphfst.language.syntax import parse_grammar_text
 
 
 def test_analysis_object(tur: morphfst.Language) -> None:
@@ -189,3 +190,23 @@ def test_a_word_without_capitals_reads_as_a_name_last(fin: morphfst.Language) ->
     # a word list that is lower-cased throughout (the lexicon counts' source) says nothing of capitals
     blind = fin.fast.analyze("kiveä", cased=False)
     assert next(a for a in blind if a.lemma == "Kivi").weight == pytest.approx(name_upper.weight)
+
+
+def test_an_open_class_weight_ranks_its_stems_below_the_lexicon(tmp_path: Path) -> None:
+    # a class's `weight` is added to every stem its open pattern accepts; a lexicon word spelt alike
+    # keeps its own weight (the two readings are one: the cheaper is kept)
+    grammar = TOY_GRAMMAR.replace(
+        "  noun pos N -> number\n", "  noun pos N -> number\n  open3 pos N -> number weight 20 open @cons @vowel @cons\n"
+    )
+    lexicon = "lemma\tclass\tpos\tgloss\nkam\tnoun\tN\tfield\n"
+    lang = morphfst.load(write_toy(tmp_path, grammar, lexicon))
+    assert [(a.text, round(a.weight, 3)) for a in lang.analyze("pesne")] == [("pes N;SG;LOC", 20.0)]
+    assert [(a.text, round(a.weight, 3)) for a in lang.analyze("kamna")] == [("kam N;SG;LOC", 0.0)]
+    assert lang.analyze("peksa") == []
+
+
+def test_a_weight_on_a_class_without_an_open_pattern_is_a_user_error() -> None:
+    grammar = TOY_GRAMMAR.replace("  noun pos N -> number\n", "  noun pos N -> number weight 3\n")
+    with pytest.raises(UserError) as err:
+        parse_grammar_text(grammar, "toy.mfg")
+    assert "open class" in str(err.value) and err.value.position is not None and err.value.position.line > 0

@@ -28,6 +28,7 @@ import pynini
 
 from ..errors import UserError
 from ..language import model as m
+from ..language.normalize import make_normalizer
 from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 from ..language.validate import BOUNDARIES
 from .fstutil import NO_STATE_ID, Arc, Weight, acc, chars, cross, empty, union
@@ -299,7 +300,8 @@ class Compiler:
                 by_class[tuple(self.g.classes[e.klass].next)].append(e)
             parts = [self.stem_fst(es) + self.slot_graph(list(starts)) for starts, es in by_class.items()]
             if not blocked:
-                parts += [self.open_stem_fst(c) + self.slot_graph(list(c.next)) for c in open_classes]
+                listed = self.listed_lemmas(entries)
+                parts += [self.open_stem_fst(c, listed) + self.slot_graph(list(c.next)) for c in open_classes]
             fst = union(parts).optimize()
             if filt is not None:
                 fst = pynini.compose(filt, fst)
@@ -495,15 +497,34 @@ class Compiler:
             heads.extend(acc(lemma + s.code(f"pos:{tag}")) for lemma, tag in sorted(pairs))
         return union(heads).optimize()
 
-    def open_stem_fst(self, klass: m.StemClass) -> pynini.Fst:
+    def listed_lemmas(self, entries: list[m.LexEntry]) -> pynini.Fst | None:
+        """The lemmas of the lexicon's classes that write an apostrophe (names, abbreviations), in folded
+        case (as the analyzer reads a word) and written with the grammar's letters only, as one
+        deterministic acceptor (``None`` when there are none)."""
+        fold = make_normalizer(self.g.normalization)
+        letters = set(self.letter_codes)
+        classes = self.g.classes
+        lemmas = (fold(e.lemma) for e in entries if classes[e.klass].apostrophe)
+        folded = sorted({f for f in lemmas if f and set(f) <= letters})
+        if not folded:
+            return None
+        return union(acc(f) for f in folded).optimize()
+
+    def open_stem_fst(self, klass: m.StemClass, listed: pynini.Fst | None = None) -> pynini.Fst:
         """The stems of an open class: every string of letters its ``open`` pattern accepts is a lemma
-        (numbers written in digits), through the class's stem rules, like a lexicon stem."""
+        (numbers written in digits), through the class's stem rules, like a lexicon stem, but for the
+        ``listed`` lemmas of names and abbreviations: the lexicon says how one it lists is said and
+        inflected (*kg'da*, not the letters' *kg'de*), so an open stem never repeats one."""
         assert klass.open is not None
         s = self.space
         stem = self.pattern_stems(klass, klass.open, "open", chars(self.letter_codes).closure())
+        if listed is not None:
+            stem = pynini.difference(stem, listed).optimize()
         tags = klass.pos_allowed or self.g.pos_tags
         after = s.code("'") if klass.apostrophe and "'" in s.to_char else ""
         tail = cross(union(acc(s.code(f"pos:{t}")) for t in tags), after)
+        if klass.weight:
+            tail = tail + pynini.accep("", weight=klass.weight)
         return lemma_to_stem(self, klass, stem) + tail
 
     def pattern_stems(self, klass: m.StemClass, pattern: m.Expr, kind: str, letters: pynini.Fst) -> pynini.Fst:

@@ -38,6 +38,7 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
                 "apostrophe": c.apostrophe,
                 "line": c.pos.line,
                 "guess": expr_text(c.guess),
+                "open": expr_text(c.open),
             }
             for c in g.classes.values()
         },

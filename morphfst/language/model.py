@@ -121,6 +121,7 @@ class StemClass:
     pos: Position
     stems: list[str] = field(default_factory=list)  # stem-rule groups that turn a lemma into its stem
     open: Expr | None = None  # an open class: every string of letters this pattern accepts is a stem
+    weight: float = 0.0  # added to every stem of an open class (a lexicon entry has its own weight)
 
 
 @dataclass

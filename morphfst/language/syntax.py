@@ -343,6 +343,7 @@ class _Builder:
             guess: m.Expr | None = None
             stems: list[str] = []
             open_pattern: m.Expr | None = None
+            weight: float | None = None
             for part in d.children[1:]:
                 if isinstance(part, Token):
                     nexts.append(str(part))
@@ -356,10 +357,18 @@ class _Builder:
                     stems.extend(str(t) for t in part.children)
                 elif part.data == "opt_open":
                     open_pattern = self.expr(part.children[0])
+                elif part.data == "opt_weight":
+                    weight = float(str(part.children[0]))
             if name in self.grammar.classes:
                 raise UserError(f"class {name} declared twice", self.pos_of(d))
+            if weight is not None and open_pattern is None:
+                raise UserError(
+                    f"class {name}: a weight is given to an open class's stems only",
+                    self.pos_of(d),
+                    hint="a lexicon entry's weight comes from its count or weight column; add `open PATTERN` or drop the weight",
+                )
             self.grammar.classes[name] = m.StemClass(
-                name, nexts, pos_allowed, apostrophe, guess, self.pos_of(d), stems, open_pattern
+                name, nexts, pos_allowed, apostrophe, guess, self.pos_of(d), stems, open_pattern, weight or 0.0
             )
 
     def do_slot(self, node: Tree) -> None:

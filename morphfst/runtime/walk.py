@@ -468,6 +468,20 @@ def _breadth_back(trail: list[Back], partial: tuple[Path, ...], best: bool) -> l
     return [(side, out, weight) for _, side, out, weight in live]
 
 
+def _open_names(found: list[Analysis], written: str | None, fold: Callable[[str], str]) -> list[Analysis]:
+    """``found`` with the readings of an open class of names (part of speech :data:`NAME_POS`, a lemma
+    with no capital letter: the compiler keeps lexicon lemmas out of open classes) written with the
+    word's capitals when it has one (*Zorbuldak'ta*: *Zorbuldak*)."""
+    if written is None or not written[:1].isupper():
+        return found
+    return [
+        _new_analysis(a.word, restore_case(written, a.lemma, fold), a.pos, a.features, a.morphs, a.weight, a.ud, a.guessed)
+        if a.pos == NAME_POS and a.lemma.islower()
+        else a
+        for a in found
+    ]
+
+
 def _ranked_analyses(analyses: Iterable[Analysis], limit: int) -> list[Analysis]:
     """The first ``limit`` analyses ranked as :meth:`FastAnalyzer.decode_all` ranks them: each (text,
     segmentation) once at its lowest weight, by rounded weight, then text and segmentation."""
@@ -585,6 +599,9 @@ class FastAnalyzer:
         blocks = [c for c in lang.meta.get("compounds") or () if "N" in c.get("first", ()) and not c.get("agree")]
         self.guess_heads = frozenset(name for c in blocks for name in c.get("last", ()))
         self.guess_first_min = min((int(c.get("min", 1)) for c in blocks), default=1)
+        # an open class of names (a name the lexicon lacks, read from its written apostrophe): its
+        # lemmas are the word's letters in folded case (see _open_names)
+        self.open_names = any(c.get("open") and NAME_POS in c.get("pos", ()) for c in lang.meta["classes"].values())
 
     @property
     def guesser(self) -> ArcWalker | None:
@@ -903,13 +920,17 @@ class FastAnalyzer:
         decode = self._decode
         if len(walked) == 1:
             bounded, internal, weight = walked[0]
-            return [decode(surface, internal, bounded, weight, guessed)[0]]
-        best: dict[Key, Analysis] = {}
-        for bounded, internal, weight in walked:
-            analysis, key = decode(surface, internal, bounded, weight, guessed)
-            if key is None:
-                key = (analysis.text, analysis.segmentation)
-            if key not in best or weight < best[key].weight:
-                best[key] = analysis
-        ranked = sorted((round(a.weight, 5), key, a) for key, a in best.items())
-        return [a for _, _, a in ranked]
+            found = [decode(surface, internal, bounded, weight, guessed)[0]]
+        else:
+            best: dict[Key, Analysis] = {}
+            for bounded, internal, weight in walked:
+                analysis, key = decode(surface, internal, bounded, weight, guessed)
+                if key is None:
+                    key = (analysis.text, analysis.segmentation)
+                if key not in best or weight < best[key].weight:
+                    best[key] = analysis
+            ranked = sorted((round(a.weight, 5), key, a) for key, a in best.items())
+            found = [a for _, _, a in ranked]
+        if self.open_names and not guessed:
+            return _open_names(found, written, self.lang.normalize)
+        return found
