@@ -210,3 +210,17 @@ def test_a_weight_on_a_class_without_an_open_pattern_is_a_user_error() -> None:
     with pytest.raises(UserError) as err:
         parse_grammar_text(grammar, "toy.mfg")
     assert "open class" in str(err.value) and err.value.position is not None and err.value.position.line > 0
+
+
+def test_an_enclitic_slot_follows_any_whole_word_once(tmp_path: Path) -> None:
+    # `slot NAME enclitic`: reached from the end of every word (no class or slot lists it), once
+    grammar = TOY_GRAMMAR.replace("rules {", 'slot question enclitic {\n  "ko" Q weight 2\n}\n\nrules {').replace(
+        "  Case: NOM LOC\n", "  Case: NOM LOC\n  Clitic: Q\n"
+    )
+    lang = morphfst.load(write_toy(tmp_path, grammar))
+    assert [(a.text, a.segmentation, round(a.weight, 3)) for a in lang.analyze("kalarko")] == [
+        ("ka N;PL;NOM;Q", "ka-lar-ko", 2.0)
+    ]
+    assert [a.text for a in lang.analyze("kanako")] == ["ka N;SG;LOC;Q"]
+    assert lang.analyze("kakoko") == []
+    assert [f.form for f in lang.generate("ka", "N;SG;NOM;Q")] == ["kako"]

@@ -152,6 +152,7 @@ class Slot:
     next: list[str]  # follower slots; "end" ends the word
     affixes: list[Affix]
     pos: Position
+    enclitic: bool = False  # may follow any whole word (see Grammar.word_final_slots)
 
 
 @dataclass
@@ -300,6 +301,22 @@ class Grammar:
         for slot in self.slots.values():
             out.extend(slot.affixes)
         return out
+
+    def enclitic_tail(self) -> set[str]:
+        """The enclitic slots and every slot reachable from them: the word ends for good after any of
+        them (one enclitic per word), while the other slots' ``end`` may go on into an enclitic."""
+        todo = [s.name for s in self.slots.values() if s.enclitic]
+        seen: set[str] = set()
+        while todo:
+            name = todo.pop()
+            if name in seen or name not in self.slots:
+                continue
+            seen.add(name)
+            slot = self.slots[name]
+            todo.extend(slot.next)
+            for affix in slot.affixes:
+                todo.extend(affix.next or ())
+        return seen
 
     def dimension_of(self, label: str) -> str | None:
         for dim in self.dimensions.values():

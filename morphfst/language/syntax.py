@@ -375,14 +375,17 @@ class _Builder:
         name = str(node.children[0])
         nexts: list[str] = [m.END_SLOT]
         affix_nodes: list[Tree] = []
+        enclitic = False
         for part in node.children[1:]:
-            if isinstance(part, Tree) and part.data == "slot_next":
+            if isinstance(part, Token) and part.type == "ENCLITIC":
+                enclitic = True
+            elif isinstance(part, Tree) and part.data == "slot_next":
                 nexts = [str(t) for t in part.children]
             elif isinstance(part, Tree):
                 affix_nodes.append(part)
         if name in self.grammar.slots:
             raise UserError(f"slot {name} declared twice", self.pos_of(node), hint="merge the two slots")
-        slot = m.Slot(name, nexts, [], self.pos_of(node))
+        slot = m.Slot(name, nexts, [], self.pos_of(node), enclitic)
         for a in affix_nodes:
             slot.affixes.append(self.affix(a, name))
         self.grammar.slots[name] = slot

@@ -163,7 +163,8 @@ def _check_slots(g: m.Grammar) -> None:
 
 def _check_reachability(g: m.Grammar) -> None:
     reached: set[str] = set()
-    todo = [n for c in g.classes.values() for n in c.next]
+    # an enclitic slot is reached from the end of any word
+    todo = [n for c in g.classes.values() for n in c.next] + [s.name for s in g.slots.values() if s.enclitic]
     while todo:
         name = todo.pop()
         if name == m.END_SLOT or name in reached:
