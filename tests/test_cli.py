@@ -20,11 +20,11 @@ def run(capsys: pytest.CaptureFixture[str], *args: str) -> tuple[int, str, str]:
 
 
 def test_analyze_table(capsys: pytest.CaptureFixture[str], tur: morphfst.Language) -> None:
-    code, out, _ = run(capsys, "analyze", "evlerde", "xyz")
+    code, out, _ = run(capsys, "analyze", "evlerden", "xyz")
     assert code == 0
     lines = out.splitlines()
     assert lines[0].split() == ["word", "analysis", "segmentation", "gloss", "weight"]
-    assert "ev N;PL;LOC" in lines[2] and "ev-ler-de" in lines[2] and "house-PL-LOC" in lines[2]
+    assert "ev N;PL;ABL" in lines[2] and "ev-ler-den" in lines[2] and "house-PL-ABL" in lines[2]
     assert "(no analysis)" in lines[3]
 
 

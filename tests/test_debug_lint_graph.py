@@ -201,7 +201,7 @@ def test_lint_names_the_included_file(tmp_path: Path) -> None:
 
 def test_lint_ambiguity_report(tur_small: morphfst.Language) -> None:
     # the shipped grammar with a few dozen entries: lint's cascade checks walk the whole lexicon
-    words = ["evleri", "kitabı", "ev", "evleri", "evlerde"]
+    words = ["evleri", "kitabı", "ev", "evleri", "evlerden"]
     report = lint(tur_small, words, top=2)
     assert report.words_checked == 5
     assert [a.word for a in report.ambiguous] == ["evleri", "kitabı"]

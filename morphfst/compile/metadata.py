@@ -11,8 +11,10 @@ from pathlib import Path
 from typing import Any
 
 from ..language import model as m
+from ..language.normalize import make_normalizer
 from ..language.symbols import SymbolSpace
 from ..version import FORMAT_VERSION, __version__
+from .guessweights import NAME_POS
 from .sourcehash import COMPILER_MODULES, compiler_digest, file_hash, sources_digest
 
 __all__ = ["COMPILER_MODULES", "build_metadata", "compiler_digest", "file_hash", "sources_digest"]
@@ -45,6 +47,7 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
         "slots": {
             s.name: {
                 "next": s.next,
+                "enclitic": s.enclitic,
                 "line": s.pos.line,
                 "affixes": [
                     {
@@ -107,6 +110,9 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
             }
             for lay in g.layouts
         ],
+        # the folded lemmas of the names and abbreviations the lexicon lists (its classes that write an
+        # apostrophe), when an open class may read a name: the runtime drops an open reading of one
+        "listed_names": listed_names(g),
         "lexicon": [
             {
                 "lemma": e.lemma,
@@ -122,6 +128,15 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
             for e in g.lexicon
         ],
     }
+
+
+def listed_names(g: m.Grammar) -> list[str]:
+    """The lexicon's lemmas of classes with an apostrophe (names, abbreviations), folded as the
+    analyzer reads a word; empty unless an open class has the part of speech PROPN."""
+    if not any(c.open is not None and NAME_POS in c.pos_allowed for c in g.classes.values()):
+        return []
+    fold = make_normalizer(g.normalization)
+    return sorted({fold(e.lemma) for e in g.lexicon if g.classes[e.klass].apostrophe})
 
 
 def expr_text(e: m.Expr | None) -> str | None:

@@ -468,20 +468,6 @@ def _breadth_back(trail: list[Back], partial: tuple[Path, ...], best: bool) -> l
     return [(side, out, weight) for _, side, out, weight in live]
 
 
-def _open_names(found: list[Analysis], written: str | None, fold: Callable[[str], str]) -> list[Analysis]:
-    """``found`` with the readings of an open class of names (part of speech :data:`NAME_POS`, a lemma
-    with no capital letter: the compiler keeps lexicon lemmas out of open classes) written with the
-    word's capitals when it has one (*Zorbuldak'ta*: *Zorbuldak*)."""
-    if written is None or not written[:1].isupper():
-        return found
-    return [
-        _new_analysis(a.word, restore_case(written, a.lemma, fold), a.pos, a.features, a.morphs, a.weight, a.ud, a.guessed)
-        if a.pos == NAME_POS and a.lemma.islower()
-        else a
-        for a in found
-    ]
-
-
 def _ranked_analyses(analyses: Iterable[Analysis], limit: int) -> list[Analysis]:
     """The first ``limit`` analyses ranked as :meth:`FastAnalyzer.decode_all` ranks them: each (text,
     segmentation) once at its lowest weight, by rounded weight, then text and segmentation."""
@@ -602,6 +588,7 @@ class FastAnalyzer:
         # an open class of names (a name the lexicon lacks, read from its written apostrophe): its
         # lemmas are the word's letters in folded case (see _open_names)
         self.open_names = any(c.get("open") and NAME_POS in c.get("pos", ()) for c in lang.meta["classes"].values())
+        self._listed_names: frozenset[str] | None = None  # read on the first open reading
 
     @property
     def guesser(self) -> ArcWalker | None:
@@ -932,5 +919,28 @@ class FastAnalyzer:
             ranked = sorted((round(a.weight, 5), key, a) for key, a in best.items())
             found = [a for _, _, a in ranked]
         if self.open_names and not guessed:
-            return _open_names(found, written, self.lang.normalize)
+            return self._open_names(found, written)
         return found
+
+    def _open_names(self, found: list[Analysis], written: str | None) -> list[Analysis]:
+        """``found`` without the readings of an open class of names (part of speech :data:`NAME_POS`,
+        a lemma with no capital letter) whose lemma the lexicon lists as a name or abbreviation (it
+        says how that one is said: *kg'da*, never the letters' *kg'de*; *TMMOB'nin* once), the others
+        written with the word's capitals when it has one (*Zorbuldak'ta*: *Zorbuldak*)."""
+        if not any(a.pos == NAME_POS and a.lemma.islower() for a in found):
+            return found
+        if self._listed_names is None:
+            self._listed_names = frozenset(self.lang.meta.get("listed_names") or ())
+        listed = self._listed_names
+        fold = self.lang.normalize
+        capital = written is not None and written[:1].isupper()
+        kept = []
+        for a in found:
+            if a.pos == NAME_POS and a.lemma.islower():
+                if a.lemma in listed:
+                    continue
+                if capital:
+                    lemma = restore_case(written or "", a.lemma, fold)
+                    a = _new_analysis(a.word, lemma, a.pos, a.features, a.morphs, a.weight, a.ud, a.guessed)
+            kept.append(a)
+        return kept
