@@ -1985,3 +1985,21 @@ def test_added_abstract_and_action_nouns_inflect_by_their_type(fin: morphfst.Lan
         assert form in [f.form for f in fin.generate(lemma, feats)], (lemma, feats)
     # the noun ranks before the verb's imperative with the clitic -s (ällistyä: ällisty-s)
     assert fin.analyze("ällistys")[0].text == "ällistys N;SG;NOM"
+
+
+@pytest.mark.parametrize(
+    ("lemma", "bundle", "form"),
+    [
+        # UniMorph 4.0 bundles spell out the active and the positive of finite forms and the present
+        # of the conditional and imperative, which the grammar leaves unwritten (the schema's labels;
+        # forms: Karlsson, Finnish: An Essential Grammar, the verb paradigms, from memory)
+        ("puhua", "V;IND;PRS;ACT;POS;1;SG", "puhun"),
+        ("puhua", "V;IND;PST;ACT;3;PL", "puhuivat"),
+        ("puhua", "V;COND;PRS;ACT;1;SG", "puhuisin"),
+        ("puhua", "V;IMP;PRS;ACT;POS;3;SG", "puhukoon"),
+        ("puhua", "V;IND;PRS;PASS;POS", "puhutaan"),
+        ("talo", "N;IN+ESS;PL", "taloissa"),
+    ],
+)
+def test_unimorph_bundles_with_unmarked_values_generate(fin: morphfst.Language, lemma: str, bundle: str, form: str) -> None:
+    assert [f.form for f in fin.generate(lemma, bundle)][:1] == [form]

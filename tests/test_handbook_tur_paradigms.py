@@ -331,3 +331,18 @@ def test_lexical_causatives_block_the_rule(tur: morphfst.Language) -> None:
     # roots whose -DIr causative is a word of its own are not flagged (kaçtırdı, içtirdi, yattırdı)
     for root, causative in [("kaçmak", "kaçtırdı"), ("içmek", "içtirdi"), ("yatmak", "yattırdı")]:
         assert first(tur, root, "V;CAUS;PST;3;SG") == causative, root
+
+
+@pytest.mark.parametrize(
+    ("lemma", "bundle", "form"),
+    [
+        # UniMorph 4.0 bundles spell out the indicative, the positive and the declarative, which the
+        # grammar leaves unwritten (the schema's labels; forms G&K 8.2, from memory)
+        ("gelmek", "V;IND;PST;3;SG;POS;DECL", "geldi"),
+        ("gelmek", "V;IND;FUT;1;PL;POS", "geleceğiz"),
+        ("gelmek", "V;IND;PST;2;SG;NEG", "gelmedin"),
+        ("ev", "N;LOC;PL", "evlerde"),
+    ],
+)
+def test_unimorph_bundles_with_unmarked_values_generate(tur: morphfst.Language, lemma: str, bundle: str, form: str) -> None:
+    assert [f.form for f in tur.generate(lemma, bundle)][:1] == [form]

@@ -224,3 +224,17 @@ def test_an_enclitic_slot_follows_any_whole_word_once(tmp_path: Path) -> None:
     assert [a.text for a in lang.analyze("kanako")] == ["ka N;SG;LOC;Q"]
     assert lang.analyze("kakoko") == []
     assert [f.form for f in lang.generate("ka", "N;SG;NOM;Q")] == ["kako"]
+
+
+def test_unmarked_labels_are_left_out_where_no_form_has_them(tmp_path: Path) -> None:
+    # `unmarked { ... }`: labels a bundle may spell out (UniMorph's POS for the positive) that the
+    # grammar leaves unwritten; an unmarked label the grammar has a feature for is dropped only when
+    # the bundle has no form with it
+    grammar = TOY_GRAMMAR.replace("rules {", "unmarked {\n  POS NOM\n}\n\nrules {")
+    lang = morphfst.load(write_toy(tmp_path, grammar))
+    assert [f.form for f in lang.generate("ka", "N;PL;LOC;POS")] == ["kalarna"]
+    assert [f.form for f in lang.generate("ka", "N;PL;LOC;NOM")] == ["kalarna"]  # NOM: no LOC form has it
+    assert [f.form for f in lang.generate("ka", "N;PL;NOM")] == ["kalar"]
+    assert [a.text for a in lang.analyze("kalarna")] == ["ka N;PL;LOC"]
+    with pytest.raises(UserError):
+        lang.generate("ka", "N;PL;LOC;XYZ")  # any other unknown label stays an error

@@ -97,6 +97,7 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
             "apostrophes": g.normalization.apostrophes,
         },
         "tests": [{"kind": t.kind, "word": t.word, "expected": t.expected, "line": t.pos.line} for t in g.tests],
+        "unmarked": g.unmarked,
         "layouts": [
             {
                 "pos": lay.pos_tag,

@@ -292,6 +292,9 @@ class Grammar:
     tests: list[TestCase] = field(default_factory=list)
     layouts: list[Layout] = field(default_factory=list)
     compounds: list[Compound] = field(default_factory=list)
+    # labels of unmarked values a bundle to generate may spell out (UniMorph's IND, POS, ACT), dropped
+    # where no form carries them
+    unmarked: list[str] = field(default_factory=list)
     lexicon: list[LexEntry] = field(default_factory=list)
     sources: list[str] = field(default_factory=list)  # every file read, for the source hash
 

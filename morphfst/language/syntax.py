@@ -231,6 +231,12 @@ class _Builder:
             self.filename, self.lines = saved
             self._chain = chain
 
+    def do_unmarked_block(self, node: Tree) -> None:
+        for line in node.children:
+            for tok in line.children:
+                if str(tok) not in self.grammar.unmarked:
+                    self.grammar.unmarked.append(str(tok))
+
     def do_labels_block(self, node: Tree) -> None:
         for d in node.children:
             self.grammar.labels[str(d.children[0])] = self.unquote(d.children[1])

@@ -8,6 +8,7 @@ and the bounded analyzer. Ties are broken by the analysis text, so the order is 
 
 from __future__ import annotations
 
+import itertools
 import re
 from collections.abc import Mapping, Sequence
 from functools import lru_cache
@@ -28,6 +29,7 @@ from .walk import FastAnalyzer
 _UNREADABLE = re.compile(f"[\\x00{chr(PRIVATE_START)}-\\U0010ffff]")  # NUL cuts pynini strings; the rest is ours
 MAX_PATHS = 200
 MAX_WORD = 1000  # longer tokens are not words; they get no analysis
+MAX_UNMARKED = 4  # at most this many unmarked labels of a bundle are tried left out (15 more generations)
 
 
 class Language:
@@ -181,6 +183,24 @@ class Language:
         same slots and rules (see :meth:`generate_guessed`).
         """
         labels, codes = self._labels(features)
+        forms = self._generate_bundle(lemma, labels, codes, guess)
+        if forms:
+            return forms
+        # the grammar's unmarked labels that the bundle spells out (UniMorph's V;IND;PRS;ACT;1;SG where
+        # the active is unwritten): left out, fewest first, until a form is found
+        unmarked = set(self.meta.get("unmarked") or ())
+        optional = [i for i, label in enumerate(labels) if label in unmarked]
+        for size in range(1, min(len(optional), MAX_UNMARKED) + 1):
+            for left_out in itertools.combinations(optional, size):
+                kept = [i for i in range(len(labels)) if i not in left_out]
+                forms = self._generate_bundle(lemma, [labels[i] for i in kept], [codes[i] for i in kept], guess)
+                if forms:
+                    return forms
+        return []
+
+    def _generate_bundle(self, lemma: str, labels: list[str], codes: list[str], guess: bool) -> list[Form]:
+        """:meth:`generate` for exactly these labels: the lexicon's forms, else a compound's, else (with
+        ``guess``) the guesser's."""
         forms = self._generate_with(self.fsts["generator"], lemma, labels, codes)
         if not forms:
             forms = self._generate_compound(lemma, labels)
@@ -189,9 +209,17 @@ class Language:
         return forms
 
     def _labels(self, features: str | Sequence[str]) -> tuple[list[str], list[str]]:
-        """The labels of a feature bundle (``"N;PL;LOC"`` or a list) and their codes."""
+        """The labels of a feature bundle (``"N;PL;LOC"`` or a list) and their codes; an unmarked label
+        the grammar has no feature for (Turkish ``IND``, ``POS``) is left out, any other unknown label
+        is a user error."""
         labels = [f.strip() for f in (features.split(";") if isinstance(features, str) else features) if f.strip()]
+        unmarked = self.meta.get("unmarked") or ()
+        if unmarked:
+            labels = [f for f in labels if f not in unmarked or self._has_label(f)]
         return labels, [self._label_code(f) for f in labels]
+
+    def _has_label(self, label: str) -> bool:
+        return f"pos:{label}" in self.space.to_char or f"feature:{label}" in self.space.to_char
 
     def generate_guessed(self, lemma: str, features: str | Sequence[str]) -> list[Form]:
         """Forms of ``lemma`` as a guessed stem (marked ``guessed``, weighing what a guessed analysis
