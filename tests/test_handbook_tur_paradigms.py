@@ -341,6 +341,7 @@ def test_lexical_causatives_block_the_rule(tur: morphfst.Language) -> None:
         ("gelmek", "V;IND;PST;3;SG;POS;DECL", "geldi"),
         ("gelmek", "V;IND;FUT;1;PL;POS", "geleceğiz"),
         ("gelmek", "V;IND;PST;2;SG;NEG", "gelmedin"),
+        ("gelmek", "V;IND;PRS;PROG;1;SG;POS", "geliyorum"),
         ("ev", "N;LOC;PL", "evlerde"),
     ],
 )
