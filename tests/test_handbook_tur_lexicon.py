@@ -1,4 +1,4 @@
-"""Nouns and adjectives added to the Turkish lexicon from a general dictionary, one check per flag class.
+"""Nouns, adjectives and verbs added to the Turkish lexicon from a general dictionary, one check per flag class.
 
 Sources named beside each check:
   TDK  Türk Dil Kurumu, Güncel Türkçe Sözlük: the headword and the suffix hint after it ('ayrıt, -tı')
@@ -36,6 +36,10 @@ def form(tur: morphfst.Language, lemma: str, features: str) -> str:
         ("aminoasit", "N", "aminoasidi", "aminoasitte"),
         ("ızbandut", "N", "ızbandudu", "ızbandutta"),
         ("özek", "N", "özeği", "özekte"),
+        # TDK 'mezahip, -bi', 'müfret, -di', 'istidraç, -cı' (from memory)
+        ("mezahip", "N", "mezahibi", "mezahipte"),
+        ("müfret", "N", "müfredi", "müfrette"),
+        ("istidraç", "N", "istidracı", "istidraçta"),
     ],
 )
 def test_new_stems_that_voice(tur: morphfst.Language, lemma: str, pos: str, accusative: str, locative: str) -> None:
@@ -58,6 +62,9 @@ def test_new_stems_that_voice(tur: morphfst.Language, lemma: str, pos: str, accu
         ("rüsumat", "rüsumatı"),
         ("safahat", "safahatı"),
         ("çipset", "çipseti"),
+        # TDK 'iştikak, -kı', 'cemadat, -tı' (from memory)
+        ("iştikak", "iştikakı"),
+        ("cemadat", "cemadatı"),
     ],
 )
 def test_new_stems_that_keep_the_stop(tur: morphfst.Language, lemma: str, accusative: str) -> None:
@@ -76,6 +83,8 @@ def test_new_stems_that_keep_the_stop(tur: morphfst.Language, lemma: str, accusa
         ("minval", "N", "minvale"),
         ("meful", "N", "mefule"),
         ("şamil", "ADJ", "şamile"),
+        # TDK 'etfal, -li' (from memory)
+        ("etfal", "N", "etfale"),
     ],
 )
 def test_new_front_harmony_loans(tur: morphfst.Language, lemma: str, pos: str, dative: str) -> None:
@@ -133,3 +142,25 @@ def test_new_vowel_loss_and_one_syllable_voicing(tur: morphfst.Language) -> None
     # flag voicing on a one-syllable stem: TDK 'derç, -rci' (from memory)
     assert form(tur, "derç", "N;SG;ACC") == "derci"
     assert form(tur, "derç", "N;SG;LOC") == "derçte"
+
+
+def test_new_verbs_are_their_own_lemma(tur: morphfst.Language) -> None:
+    # -lAş verbs a dictionary lists as headwords (TDK 'örgütleşmek', 'sembolleşmek', 'gelenekleşmek',
+    # 'şişmanlaşmak'; from memory) are read as themselves, not as the noun or adjective + -lAş
+    assert best(tur, "örgütleşti") == "örgütleşmek V;PST;3;SG"
+    assert best(tur, "şişmanlaşıyor") == "şişmanlaşmak V;PROG;3;SG"
+    # their causative is the listed verb's (G&K on the causative -DIr after -lAş, from memory)
+    assert best(tur, "gelenekleştirdi") == "gelenekleşmek V;CAUS;PST;3;SG"
+    # the aorist: -Ar after a one-syllable root, -Ir after a longer one (TDK 'çimmek, -er',
+    # 'domalmak, -ır'; G&K on the aorist, from memory)
+    assert form(tur, "çimmek", "V;HAB;3;SG") == "çimer"
+    assert form(tur, "domalmak", "V;HAB;3;SG") == "domalır"
+
+
+def test_weights_of_new_words_spelt_like_names_and_cases(tur: morphfst.Language) -> None:
+    # yücel is the name Yücel before yücelmek's imperative, and erke is erk's dative before erke
+    # 'energy' (test data invented: the rankings are the lexicon's weights)
+    assert best(tur, "yücel") == "Yücel PROPN;SG;NOM"
+    assert best(tur, "yüceldi") == "yücelmek V;PST;3;SG"
+    assert best(tur, "erke") == "erk N;SG;DAT"
+    assert best(tur, "erkesi") == "erke N;SG;PSS3S;NOM"
