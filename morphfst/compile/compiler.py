@@ -347,7 +347,7 @@ class Compiler:
         bounded = self.bounded(entries, progress)
         strict = self.bounded(entries, progress, lenient=False) if any(r.lenient for r in self.g.rules) else None
         t1 = time.perf_counter()
-        compounds = self.compound_fst(bounded, entries)
+        compounds = self.compound_fst(bounded, entries, strict)
         t2 = time.perf_counter()
         fsts = self.derive(bounded, strict, compounds)
         if timings is not None:
@@ -393,7 +393,9 @@ class Compiler:
         return {"analyzer": analyzer, "generator": generator, "segmenter": segmenter, "bounded": bounded_analyzer}
 
     # ---- compounds (analysis only) --------------------------------------------------------------------
-    def compound_fst(self, bounded: pynini.Fst, entries: list[m.LexEntry]) -> pynini.Fst | None:
+    def compound_fst(
+        self, bounded: pynini.Fst, entries: list[m.LexEntry], strict: pynini.Fst | None = None
+    ) -> pynini.Fst | None:
         """The compound words of the grammar's ``compound`` blocks, on the tapes of the bounded machine
         (``None`` when there is no block).
 
@@ -403,7 +405,11 @@ class Compiler:
         boundaries and gets the seam symbol appended, and parts of fewer than ``min`` letters are
         dropped. A compound is one to ``parts - 1`` parts followed by a path of ``bounded`` of a
         ``last`` part of speech (or class); with ``agree``, every part, the last one too, is in the same
-        bundle of ``forms`` (one compound machine per bundle). Every seam weighs the block's weight, plus the weight of the
+        bundle of ``forms`` (one compound machine per bundle); with ``lastforms``, the last part's features
+        begin with one of its bundles; with ``lemmaform``, the last part's lemma on the analysis side is
+        its form in that bundle as written (from ``strict``, the machine without lenient rules, when
+        given: :meth:`_lemma_forms`), and the features of ``hide`` are left out of its analysis (Turkish
+        dil + bilgi-si-ni: ``dil N seam bilgisi N SG ACC``). Every seam weighs the block's weight, plus the weight of the
         heaviest entry of ``entries``, plus :data:`SEAM_BASE_WEIGHT`, so a lexicon word always ranks above
         a compound reading of itself with the same endings (when no lexicon weight is negative, as with
         counts; see README.md).
@@ -431,6 +437,14 @@ class Compiler:
             surface = (drop_plus.closure() + letter).closure(c.min_letters, c.min_letters) + keep.closure()
             surface = (surface + cross("", seam) + pynini.accep("", weight=base + c.weight)).optimize()
             bundles = [_bundle_tail([s.code(f"feature:{f}") for f in b], affix_codes) for b in c.forms]
+            free_tail = chars(tail_codes).closure()
+            if c.last_forms:  # the last part's features begin with one of these bundles
+                starts = [_bundle_tail([s.code(f"feature:{f}") for f in b], affix_codes) for b in c.last_forms]
+                free_tail = (union(starts) + free_tail).optimize()
+            shown = None
+            if c.lemma_form:  # the last part's lemma is shown as its form in this bundle (bilgi: bilgisi)
+                machine = strict if strict is not None else bounded
+                shown = self._lemma_forms(last_head, machine, c.lemma_form, c.hide, lemma_codes)
             # the sequences of groups that the order accepts, two to 'parts' parts (none: any order)
             sequences: list[tuple[str, ...]] = []
             if c.order:
@@ -448,10 +462,10 @@ class Compiler:
             # with agree, one machine per bundle, shared by every part; else one for them all
             for group in [[b] for b in bundles] if c.agree else [bundles]:
                 tails = union(group).optimize()
-                last_tail = tails if c.agree else chars(tail_codes).closure()
+                last_tail = tails if c.agree else free_tail
 
                 part_of = functools.partial(_compound_part, bounded=bounded, surface=surface, seam=seam, tails=tails)
-                last_of = functools.partial(_compound_last, bounded=bounded, tail=last_tail)
+                last_of = functools.partial(_compound_last, bounded=bounded, tail=last_tail, shown=shown)
                 if not c.order:
                     part, last = part_of(head), last_of(last_head)
                     if part is not None and last is not None:
@@ -475,6 +489,30 @@ class Compiler:
         if not found:
             return None
         return union(found)  # optimized together with the lexicon words in derive
+
+    def _lemma_forms(
+        self, head: pynini.Fst, machine: pynini.Fst, bundle: list[str], hide: list[str], lemma_codes: list[str]
+    ) -> pynini.Fst:
+        """Shown analysis → analysis of the bounded machine, for a compound's last part whose lemma
+        is shown as its form in ``bundle`` (a block's ``lemmaform``): the form's letters (as
+        ``machine`` writes the words of ``head`` in exactly that bundle, morph boundaries dropped,
+        unweighted) stand for the lemma's, and the features of ``hide`` are put back wherever they
+        stand (the last part's own paths say where). Turkish: ``bilgisi N SG ACC`` → ``bilgi N SG
+        PSS3S ACC``."""
+        s = self.space
+        affix_codes = [c for c, k in s.kinds.items() if k == "affix"]
+        tail_codes = [c for c, k in s.kinds.items() if k in {"feature", "pos", "affix"}]
+        exact = (head + _bundle_tail([s.code(f"feature:{f}") for f in bundle], affix_codes)).optimize()
+        spelt = pynini.compose(exact, machine)  # lemma, part of speech, the bundle → its bounded form
+        # lemma → form: the analysis after the lemma deleted, and the form's morph boundaries
+        strip = (chars(lemma_codes).closure() + cross(chars(tail_codes).closure(), "")).optimize()
+        unplus = union([chars(self.letter_codes), cross(self.plus, "")]).closure().optimize()
+        forms = pynini.compose(pynini.compose(strip.invert(), spelt), unplus)
+        forms = pynini.arcmap(forms, map_type="rmweight").optimize()
+        hidden = [s.code(f"feature:{f}") for f in hide]
+        shown_codes = [c for c in tail_codes if c not in hidden]
+        rest = union([chars(shown_codes)] + [cross("", h) for h in hidden]).closure()
+        return (forms.invert() + rest).optimize()
 
     def _compound_heads(
         self, names: list[str], entries: list[m.LexEntry], lemma_codes: list[str], derived_out: bool
@@ -667,10 +705,13 @@ def _compound_part(head: pynini.Fst, bounded: pynini.Fst, surface: pynini.Fst, s
     return None if fst.start() == NO_STATE_ID or fst.num_states() == 0 else fst
 
 
-def _compound_last(head: pynini.Fst, bounded: pynini.Fst, tail: pynini.Fst) -> pynini.Fst | None:
+def _compound_last(head: pynini.Fst, bounded: pynini.Fst, tail: pynini.Fst, shown: pynini.Fst | None = None) -> pynini.Fst | None:
     """The last part of a compound: the words of ``bounded`` whose lemma and part of speech ``head``
-    accepts, with features and affixes of ``tail`` (``None`` when there is no such word)."""
+    accepts, with features and affixes of ``tail`` (``None`` when there is no such word); with
+    ``shown`` (:meth:`Compiler._lemma_forms`), read on the analysis side through it."""
     fst = pynini.compose((head + tail).optimize(), bounded).connect()
+    if shown is not None:
+        fst = pynini.compose(shown, fst).connect()
     return None if fst.start() == NO_STATE_ID or fst.num_states() == 0 else fst
 
 

@@ -86,6 +86,9 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
                 "lastmin": c.last_min,
                 "groups": c.groups,
                 "order": c.order,
+                "lastforms": c.last_forms,
+                "lemmaform": c.lemma_form,
+                "hide": c.hide,
                 "file": c.pos.file,
                 "line": c.pos.line,
             }

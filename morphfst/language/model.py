@@ -209,6 +209,15 @@ class Compound:
     # place names, besides being of 'first' or 'last'); empty: any order
     groups: dict[str, list[str]] = field(default_factory=dict)
     order: str = ""
+    # the last part's features begin with one of these bundles (affix ids between, any features
+    # after); empty: any features
+    last_forms: list[list[str]] = field(default_factory=list)
+    # the compound's lemma ends with the last part's form in this bundle, as written, instead of the
+    # last part's lemma (Turkish dil + bilgi-si: dilbilgisi); empty: the last part's lemma
+    lemma_form: list[str] = field(default_factory=list)
+    # features of the last part left out of the compound's analysis (its lemma holds them: the
+    # possessive of dilbilgisi)
+    hide: list[str] = field(default_factory=list)
 
     def order_regex(self) -> re.Pattern[str]:
         """The ``order`` expression as a regular expression over the group names of a compound's parts,

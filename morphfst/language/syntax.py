@@ -459,14 +459,18 @@ class _Builder:
                     lines[f"{key} {t}"] = self.pos_of(t)
             elif key == "order":
                 values[key] = str(line.children[0])[1:-1]
-            elif key == "forms":
+            elif key in {"forms", "lastforms", "lemmaform"}:
                 bundles = []
                 for bundle in line.children:
                     labels = [str(t) for t in bundle.children]
                     for t in bundle.children:
-                        lines.setdefault(f"forms {t}", self.pos_of(t))
+                        lines.setdefault(f"{key} {t}", self.pos_of(t))
                     bundles.append(labels)
-                values[key] = bundles
+                values[key] = bundles[0] if key == "lemmaform" else bundles
+            elif key == "hide":
+                values[key] = [str(t) for t in line.children]
+                for t in line.children:
+                    lines.setdefault(f"hide {t}", self.pos_of(t))
             else:
                 tok: Any = line.children[0]
                 values[key] = self._compound_number(key, tok)
@@ -475,7 +479,7 @@ class _Builder:
                 raise UserError(
                     f"compound: no '{key}' line",
                     block,
-                    hint="a compound block needs 'first', 'forms' and 'last' lines (parts, min, lastmin, weight, agree, group and order are optional)",
+                    hint="a compound block needs 'first', 'forms' and 'last' lines (parts, min, lastmin, weight, agree, group, order, lastforms, lemmaform and hide are optional)",
                     source_line=self._raw_line(block),
                 )
         self.grammar.compounds.append(
@@ -492,6 +496,9 @@ class _Builder:
                 values.get("lastmin", 1),
                 values.get("groups", {}),
                 values.get("order", ""),
+                values.get("lastforms", []),
+                values.get("lemmaform", []),
+                values.get("hide", []),
             )
         )
 

@@ -283,15 +283,22 @@ def _check_compounds(g: m.Grammar) -> None:
                     c.lines.get("order", c.pos),
                     "an order is a regular expression of the block's group names with ( ) | ? * +",
                 ) from None
-        for bundle in c.forms:
-            for label in bundle:
-                if label not in features:
-                    raise _err(
-                        f"compound: {label!r} in 'forms' is not a declared feature",
-                        c.lines.get(f"forms {label}", c.lines.get("forms", c.pos)),
-                        _near(label, sorted(features))
-                        or "a form is a bundle of feature labels, such as SG NOM; bundles are separated by |",
-                    )
+        for key, bundles in (("forms", c.forms), ("lastforms", c.last_forms), ("lemmaform", [c.lemma_form]), ("hide", [c.hide])):
+            for bundle in bundles:
+                for label in bundle:
+                    if label not in features:
+                        raise _err(
+                            f"compound: {label!r} in '{key}' is not a declared feature",
+                            c.lines.get(f"{key} {label}", c.lines.get(key, c.pos)),
+                            _near(label, sorted(features))
+                            or "a form is a bundle of feature labels, such as SG NOM; bundles are separated by |",
+                        )
+        if c.agree and (c.last_forms or c.lemma_form or c.hide):
+            raise _err(
+                "compound: 'agree' with 'lastforms', 'lemmaform' or 'hide'",
+                c.lines.get("agree", c.pos),
+                "with agree the last part is in the bundle of its first parts; lastforms, lemmaform and hide are for a free last part",
+            )
 
 
 def _check_rules(g: m.Grammar) -> None:
