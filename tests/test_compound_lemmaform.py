@@ -64,6 +64,8 @@ rules {
   rule buffer_s : s -> ∅ / @cons + _ i
   rule buffer_i : i -> ∅ / [a e i] + _ m
   rule voicing  : p -> b / _ + [a e i]
+  # a spelling tolerance: b written p (analysis only)
+  rule written_p optional lenient weight 3.0 : b -> p
 }
 
 COMPOUND
@@ -160,6 +162,17 @@ def test_metadata_records_the_lines(lang: morphfst.Language) -> None:
     assert block["lemmaform"] == ["SG", "PSS3S", "NOM"]
     assert block["hide"] == ["PSS3S"]
     assert block["lastforms"][0] == ["SG", "PSS3S"]
+
+
+def test_strict_reads_the_parts_without_the_lenient_rules(tmp_path: Path, lang: morphfst.Language) -> None:
+    # kitabi written kitapi is read by the lenient rule, alone and in a compound
+    assert texts(lang, "kitapini")[:1] == ["kitap N;SG;PSS3S;ACC"]
+    assert texts(lang, "dilkitapini") == ["dilkitabi N;SG;ACC"]
+    strict = toy(tmp_path, BLOCK.replace("hide PSS3S", "hide PSS3S\n  strict"))
+    assert texts(strict, "kitapini")[:1] == ["kitap N;SG;PSS3S;ACC"]
+    assert strict.analyze("dilkitapini") == []
+    assert texts(strict, "dilkitabini") == ["dilkitabi N;SG;ACC"]
+    assert strict.meta["compounds"][0]["strict"] is True
 
 
 @pytest.mark.parametrize(

@@ -409,7 +409,8 @@ class Compiler:
         begin with one of its bundles; with ``lemmaform``, the last part's lemma on the analysis side is
         its form in that bundle as written (from ``strict``, the machine without lenient rules, when
         given: :meth:`_lemma_forms`), and the features of ``hide`` are left out of its analysis (Turkish
-        dil + bilgi-si-ni: ``dil N seam bilgisi N SG ACC``). Every seam weighs the block's weight, plus the weight of the
+        dil + bilgi-si-ni: ``dil N seam bilgisi N SG ACC``); with ``strict``, every part is read from
+        ``strict`` (when given) instead of ``bounded``. Every seam weighs the block's weight, plus the weight of the
         heaviest entry of ``entries``, plus :data:`SEAM_BASE_WEIGHT`, so a lexicon word always ranks above
         a compound reading of itself with the same endings (when no lexicon weight is negative, as with
         counts; see README.md).
@@ -429,6 +430,7 @@ class Compiler:
         pos_codes = [c for c, k in s.kinds.items() if k == "pos"]
         found = []
         for c in self.g.compounds:
+            words = strict if c.strict and strict is not None else bounded
             head = self._compound_heads(c.first, entries, lemma_codes, derived_out=False)
             last_head = self._compound_heads(c.last, entries, lemma_codes, derived_out=True)
             if c.last_min > 1:  # the last part's lemma has at least lastmin letters
@@ -464,8 +466,8 @@ class Compiler:
                 tails = union(group).optimize()
                 last_tail = tails if c.agree else free_tail
 
-                part_of = functools.partial(_compound_part, bounded=bounded, surface=surface, seam=seam, tails=tails)
-                last_of = functools.partial(_compound_last, bounded=bounded, tail=last_tail, shown=shown)
+                part_of = functools.partial(_compound_part, bounded=words, surface=surface, seam=seam, tails=tails)
+                last_of = functools.partial(_compound_last, bounded=words, tail=last_tail, shown=shown)
                 if not c.order:
                     part, last = part_of(head), last_of(last_head)
                     if part is not None and last is not None:

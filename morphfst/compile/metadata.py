@@ -89,6 +89,7 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
                 "lastforms": c.last_forms,
                 "lemmaform": c.lemma_form,
                 "hide": c.hide,
+                "strict": c.strict,
                 "file": c.pos.file,
                 "line": c.pos.line,
             }

@@ -218,6 +218,9 @@ class Compound:
     # features of the last part left out of the compound's analysis (its lemma holds them: the
     # possessive of dilbilgisi)
     hide: list[str] = field(default_factory=list)
+    # the parts are read without the lenient rules (a word written with the spelling tolerance of
+    # the lenient rules is no compound)
+    strict: bool = False
 
     def order_regex(self) -> re.Pattern[str]:
         """The ``order`` expression as a regular expression over the group names of a compound's parts,

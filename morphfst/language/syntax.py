@@ -450,7 +450,7 @@ class _Builder:
                 values[key] = [str(t) for t in names]
                 for t in names:
                     lines[f"{key} {t}"] = self.pos_of(t)
-            elif key == "agree":
+            elif key in {"agree", "strict"}:
                 values[key] = True
             elif key.startswith("group "):
                 names = [kid.children[0] for kid in line.children[1:]]
@@ -479,7 +479,7 @@ class _Builder:
                 raise UserError(
                     f"compound: no '{key}' line",
                     block,
-                    hint="a compound block needs 'first', 'forms' and 'last' lines (parts, min, lastmin, weight, agree, group, order, lastforms, lemmaform and hide are optional)",
+                    hint="a compound block needs 'first', 'forms' and 'last' lines (parts, min, lastmin, weight, agree, group, order, lastforms, lemmaform, hide and strict are optional)",
                     source_line=self._raw_line(block),
                 )
         self.grammar.compounds.append(
@@ -499,6 +499,7 @@ class _Builder:
                 values.get("lastforms", []),
                 values.get("lemmaform", []),
                 values.get("hide", []),
+                values.get("strict", False),
             )
         )
 
