@@ -295,7 +295,13 @@ def main() -> None:
         st[1] += ok_all
     for first_part, last, word in compound_candidates(lex):
         nounish = any(p == "N" for _, p, _ in lex[first_part])
-        name = "compound N+Y-(s)I" if nounish and len(first_part) >= 3 else "compound A+Y-(s)I" if not nounish else "compound NN+Y-(s)I"
+        name = (
+            "compound N+Y-(s)I"
+            if nounish and len(first_part) >= 3
+            else "compound A+Y-(s)I"
+            if not nounish
+            else "compound NN+Y-(s)I"
+        )
         st = stats[name]
         st[0] += 1
         ok_all = True

@@ -85,13 +85,7 @@ compound {
 }
 """
 
-LEXICON = (
-    "lemma\tclass\tpos\tgloss\n"
-    "dil\tnoun\tN\tlanguage\n"
-    "bilgi\tnoun\tN\tknowledge\n"
-    "kitap\tnoun\tN\tbook\n"
-    "el\tnoun\tN\thand\n"
-)
+LEXICON = "lemma\tclass\tpos\tgloss\ndil\tnoun\tN\tlanguage\nbilgi\tnoun\tN\tknowledge\nkitap\tnoun\tN\tbook\nel\tnoun\tN\thand\n"
 
 
 def toy(tmp_path: Path, block: str = BLOCK) -> morphfst.Language:

@@ -393,9 +393,7 @@ class Compiler:
         return {"analyzer": analyzer, "generator": generator, "segmenter": segmenter, "bounded": bounded_analyzer}
 
     # ---- compounds (analysis only) --------------------------------------------------------------------
-    def compound_fst(
-        self, bounded: pynini.Fst, entries: list[m.LexEntry], strict: pynini.Fst | None = None
-    ) -> pynini.Fst | None:
+    def compound_fst(self, bounded: pynini.Fst, entries: list[m.LexEntry], strict: pynini.Fst | None = None) -> pynini.Fst | None:
         """The compound words of the grammar's ``compound`` blocks, on the tapes of the bounded machine
         (``None`` when there is no block).
 
