@@ -131,12 +131,15 @@ def test_recovery_of_removed_turkish_nouns(tmp_path: Path) -> None:
     precision (lemma, class, part of speech and flags must all be right) when the test was written;
     50.0 % and 93.8 % on the larger lexicon of later rounds, 49.3 % and 92.5 % since the flag kin
     (the associative plural, annemler), which no form in the list shows, so abla comes back without
-    it. The floors leave room for the lexicon being rewritten."""
+    it; 44.0 % and 90.4 % since the lexicon's missing compounds X + Y-(s)I are read by rule
+    (grammars/tur/compounds.mfg): a form of a removed noun that two listed nouns spell is read as
+    their compound (as ark + adaş-ı spells arkadaşı), so it is no unknown word and not proposed. The floors
+    leave room for the lexicon being rewritten."""
     grammar = ROOT / "grammars" / "tur.mfg"
     if not grammar.exists():
         pytest.skip("Turkish grammar not present")
     keep = ("nouns.tsv", "adjectives.tsv", "names.tsv", "core.tsv", "closed.tsv", "function.tsv")
     report = recovery_experiment(grammar, tmp_path / "copy", classes=("noun",), every=2, limit=150, keep_files=keep)
     assert len(report.removed) == 150
-    assert report.recall >= 0.45, report.summary()
+    assert report.recall >= 0.42, report.summary()
     assert report.precision >= 0.85, report.summary()
