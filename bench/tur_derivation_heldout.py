@@ -259,6 +259,20 @@ def forms_of(lang, lemma: str, pos: str, cells: tuple[str, ...] | None = None) -
     return out
 
 
+def tally(stats, beaten, fails, name: str, form: str, others: list, hit: bool, first: bool, note: str) -> bool:
+    """Count one form of an entry of group ``name``: read (``hit``), read first (``first``); a form
+    read but not first goes to ``beaten`` with what beat it, a form not read to ``fails``. Returns ``hit``."""
+    st = stats[name]
+    if hit and not first:
+        beaten[name].append(f"{form}:{others[0].text}")
+    st[2] += 1
+    st[3] += hit
+    st[4] += first
+    if not hit:
+        fails[name].append(f"{form}({note})")
+    return hit
+
+
 def main() -> None:
     ap = argparse.ArgumentParser()
     ap.add_argument("--fail", type=int, default=0, help="print this many failures of each suffix")
@@ -284,14 +298,7 @@ def main() -> None:
             # (gözlüğü: göz-lük's possessive before its accusative)
             prefixes = tuple(f"{base} {bp};{lab};" for bp in bpos for lab in labels[name])
             first = bool(others) and (others[0].text in want or bool(rest) and others[0].text.startswith(prefixes))
-            if hit and not first:
-                beaten[name].append(f"{form}:{others[0].text}")
-            st[2] += 1
-            st[3] += hit
-            st[4] += first
-            if not hit:
-                ok_all = False
-                fails[name].append(f"{form}({base})")
+            ok_all &= tally(stats, beaten, fails, name, form, others, hit, first, base)
         st[1] += ok_all
     for first_part, last, word in compound_candidates(lex):
         nounish = any(p == "N" for _, p, _ in lex[first_part])
@@ -312,14 +319,7 @@ def main() -> None:
             )
             hit = any(is_compound(a) and a.text == want for a in others)
             first = bool(others) and is_compound(others[0]) and others[0].text == want
-            if hit and not first:
-                beaten[name].append(f"{form}:{others[0].text}")
-            st[2] += 1
-            st[3] += hit
-            st[4] += first
-            if not hit:
-                ok_all = False
-                fails[name].append(f"{form}({first_part}+{last})")
+            ok_all &= tally(stats, beaten, fails, name, form, others, hit, first, f"{first_part}+{last}")
         st[1] += ok_all
     tot = [sum(s[i] for s in stats.values()) for i in range(5)]
     print(f"derived entries: {tot[0]}, read in all their forms: {tot[1]} ({tot[1] / tot[0]:.1%})")

@@ -86,6 +86,7 @@ class Compiler:
         self.sigma_star = self.sigma.closure().optimize()
         self.plus = s.code(m.MORPH_BOUNDARY)
         self._rule_cache: dict[str, pynini.Fst] = {}
+        self.enclitic_tail = grammar.enclitic_tail()  # see slot_graph
 
     # ---- expressions --------------------------------------------------------------------------
     def set_codes(self, e: m.Expr, dedupe: bool = True) -> list[str]:
@@ -209,7 +210,7 @@ class Compiler:
         fst.set_final(final)
         fst.add_arc(end, Arc(0, ord(s.code(m.WORD_END)), one, final))
         # a whole word may go on into an enclitic slot; after the enclitic's slots it ends for good
-        tail = self.g.enclitic_tail()
+        tail = self.enclitic_tail
         word_end = end
         if tail:
             word_end = fst.add_state()

@@ -156,11 +156,15 @@ class Language:
         """Every feature and part-of-speech label with its dimension."""
         return {v: d for d, values in self.dimensions.items() for v in values}
 
+    def _code_of(self, label: str) -> str | None:
+        """The symbol of a part-of-speech or feature label, ``None`` for a label the grammar lacks."""
+        to_char = self.space.to_char
+        return to_char.get(f"pos:{label}") or to_char.get(f"feature:{label}")
+
     def _label_code(self, label: str) -> str:
-        for kind in ("pos", "feature"):
-            key = f"{kind}:{label}"
-            if key in self.space.to_char:
-                return self.space.to_char[key]
+        code = self._code_of(label)
+        if code is not None:
+            return code
         known = sorted(self.labels())
         import difflib
 
@@ -215,11 +219,8 @@ class Language:
         labels = [f.strip() for f in (features.split(";") if isinstance(features, str) else features) if f.strip()]
         unmarked = self.meta.get("unmarked") or ()
         if unmarked:
-            labels = [f for f in labels if f not in unmarked or self._has_label(f)]
+            labels = [f for f in labels if f not in unmarked or self._code_of(f) is not None]
         return labels, [self._label_code(f) for f in labels]
-
-    def _has_label(self, label: str) -> bool:
-        return f"pos:{label}" in self.space.to_char or f"feature:{label}" in self.space.to_char
 
     def generate_guessed(self, lemma: str, features: str | Sequence[str]) -> list[Form]:
         """Forms of ``lemma`` as a guessed stem (marked ``guessed``, weighing what a guessed analysis
