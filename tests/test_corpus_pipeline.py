@@ -7,6 +7,7 @@ import json
 import sys
 import unicodedata
 from pathlib import Path
+from typing import Any
 
 import pytest
 from corpus_helpers import DyingProcessor, FailingProcessor
@@ -261,16 +262,27 @@ def test_dask_local_cluster_keeps_every_token(
 
 
 def test_dask_running_cluster_keeps_the_grammar_loaded_but_not_the_cache(
-    tur: morphfst.Language, corpus: Path, tmp_path: Path
+    tur: morphfst.Language, corpus: Path, tmp_path: Path, monkeypatch: pytest.MonkeyPatch
 ) -> None:
-    # A cluster kept running between runs loads a grammar once (by the digest of its compiled bytes);
-    # each run still gets a new cache of word types, so each run analyzes its own types and counts them.
+    # A cluster kept running between runs loads a grammar once (by the digest of its compiled bytes)
+    # and is sent its bytes once; each run still gets a new cache of word types, so each run analyzes
+    # its own types and counts them.
     pytest.importorskip("distributed")
     import logging
 
     from distributed import Client, LocalCluster
 
-    from morphfst.corpus import dask_worker
+    from morphfst.corpus import cluster, dask_worker
+
+    sent: list[bool] = []
+    make_plugin = cluster.grammar_plugin
+
+    def recording(*args: Any) -> Any:
+        plugin = make_plugin(*args)
+        sent.append(plugin.data is not None)
+        return plugin
+
+    monkeypatch.setattr(cluster, "grammar_plugin", recording)
 
     options = Options(mode="terms", term="morphs")
     one = run_corpus(tur, [str(corpus)], str(tmp_path / "one.txt"), options, jobs=1)
@@ -289,6 +301,7 @@ def test_dask_running_cluster_keeps_the_grammar_loaded_but_not_the_cache(
         joined = b"".join((tmp_path / f"run{i}" / e["output"]).read_bytes() for e in manifest["outputs"])
         assert joined == (tmp_path / "one.txt").read_bytes()
     assert len(loaded) == 2 and all(len(digests) == 1 for digests in loaded.values())
+    assert sent == [True, False]  # the second run found the grammar on every worker
 
 
 def test_dask_analyzes_each_type_once_when_a_batch_outgrows_the_cache(tur: morphfst.Language, tmp_path: Path) -> None:
@@ -426,3 +439,37 @@ def test_survey_types_on_any_bytes(tur: morphfst.Language, pieces: list[bytes]) 
     processor = ChunkProcessor(tur, Options(chunk_bytes=5, max_line_bytes=8))
     parts = list(chunks([data], 1, 5, 8))
     assert set(processor.types_of(parts)) == _types_by_chunk(processor, parts)
+
+
+def test_dask_counts_again_the_partitions_whose_figures_a_worker_lost(
+    tur: morphfst.Language, corpus: Path, tmp_path: Path, monkeypatch: pytest.MonkeyPatch
+) -> None:
+    # Workers keep the per-type figures of the partitions they write and send them at the end of the
+    # run. If a worker loses them (it left the cluster after writing its partitions), the client counts
+    # those partitions again: the figures are still those of one process.
+    pytest.importorskip("distributed")
+    from morphfst.corpus import cluster
+    from morphfst.corpus import dask_worker as dask_worker_module
+
+    settle = cluster.settle_tallies
+    dropped: list[int] = []
+
+    def lose_one_worker(client: Any, specs: list[dict[str, Any]], total: Any, covered: list[int]) -> None:
+        first = sorted(client.scheduler_info()["workers"])[0]
+        for _, covers in client.run(
+            lambda dask_worker: dask_worker_module.collect_tallies(dask_worker), workers=[first]
+        ).values():
+            dropped.extend(covers)
+        settle(client, specs, total, covered)
+
+    monkeypatch.setattr(cluster, "settle_tallies", lose_one_worker)
+    monkeypatch.setattr(cluster, "LAST_PARTITIONS", 0)  # every worker holds its figures to the end
+    options = Options(mode="terms", term="morphs")
+    one = run_corpus(tur, [str(corpus)], str(tmp_path / "one.txt"), options, jobs=1)
+    run = run_corpus(tur, [str(corpus)], str(tmp_path / "dask"), options, jobs=2, dask=True, partition_bytes=40_000)
+    assert dropped  # the first worker held the figures of some partitions, and they were lost
+    figures, expected = run.coverage.figures(), one.coverage.figures()
+    # the recount analyzes its partitions' types again, and says so
+    assert figures.pop("types_analyzed") > expected.pop("types_analyzed")
+    assert figures == expected
+    assert run.coverage.types == one.coverage.types

@@ -68,12 +68,16 @@ class Coverage:
         self.long_tokens += t.long_tokens
         self.unlisted_tokens += t.unlisted_tokens
         types = self.types
-        for word, (count, status, n) in t.types.items():
-            entry = types.get(word)
-            if entry is None:
-                types[word] = [count, status, n]
-            else:
-                entry[0] += count
+        if not types:  # the first table: copied in one pass
+            self.types = types = {word: [count, status, n] for word, (count, status, n) in t.types.items()}
+        else:
+            get = types.get
+            for word, (count, status, n) in t.types.items():
+                entry = get(word)
+                if entry is None:
+                    types[word] = [count, status, n]
+                else:
+                    entry[0] += count
         if len(types) > self.max_types:
             self._prune()
 

@@ -12,6 +12,7 @@ from __future__ import annotations
 
 import hashlib
 import pickle
+import threading
 from pathlib import Path
 from typing import Any
 
@@ -35,17 +36,62 @@ Answers = dict[str, tuple[Any, tuple[str, int, int]]]  # word type -> (formatted
 
 
 class GrammarPlugin(WorkerPlugin):
-    """Holds the compiled grammar (the bytes of a .mfc file) and, on each worker, the loaded language."""
+    """Holds the compiled grammar (the bytes of a .mfc file, identified by their SHA-256 digest) and,
+    on each worker, the loaded language. ``data`` may be ``None`` when every worker already holds the
+    grammar (a cluster kept running between runs, see :func:`grammar_loaded`): the 15 MB of a compiled
+    grammar then do not travel again."""
 
     name = PLUGIN_NAME
 
-    def __init__(self, data: bytes, filename: str, options: Options) -> None:
+    def __init__(self, data: bytes | None, filename: str, options: Options, digest: str = "") -> None:
+        if not digest and data is None:
+            raise ValueError("a grammar plugin needs the compiled bytes or their digest")
         self.data = data
         self.filename = filename
         self.options = options
-        self.digest = hashlib.sha256(data).hexdigest()
+        self.digest = digest or hashlib.sha256(data or b"").hexdigest()
         self.processor: ChunkProcessor | None = None
         self.answers: dict[int, Answers] = {}  # batch -> its owners' answers (the last two batches)
+        self.lock = threading.Lock()
+        self.counted: list[int] = []  # partitions whose figures this worker holds, not yet sent
+        self.held = Tally()  # figures flushed meanwhile (the cache turned over), not yet sent
+
+    def __getstate__(self) -> dict[str, Any]:
+        state = dict(self.__dict__)
+        state.pop("lock", None)  # a lock does not travel; each worker makes its own
+        return state
+
+    def __setstate__(self, state: dict[str, Any]) -> None:
+        self.__dict__.update(state)
+        self.lock = threading.Lock()
+
+    def hold(self, index: int, rotated: list[Tally], last: bool = False) -> tuple[Tally | None, list[int]]:
+        """Keep the figures of partition ``index`` (and ``rotated``, flushed while it was processed);
+        release them all (:meth:`release`) with one of the run's ``last`` partitions or past a cache
+        generation of types, else ``(None, [])``."""
+        for tally in rotated:
+            self.held.merge(tally)
+        self.counted.append(index)
+        processor = self.processor
+        assert processor is not None
+        if last or len(self.held.types) + len(processor.counts) > processor.options.cache_size:
+            return self.release()
+        return None, []
+
+    def release(self) -> tuple[Tally, list[int]]:
+        """Every figure held (the processor's counts flushed) and the partitions they cover; then none."""
+        tally, covers = self.held, self.counted
+        if self.processor is not None:
+            tally.merge(self.processor.flush())
+        self.held, self.counted = Tally(), []
+        return tally, covers
+
+    def spoil(self) -> None:
+        """A partition failed half-way: its counts are mixed with the others', so nothing held is sent
+        (the client counts the partitions left uncovered again)."""
+        self.held, self.counted = Tally(), []
+        if self.processor is not None:
+            self.processor.flush()
 
     def setup(self, worker: Any) -> None:
         """Load the grammar on this worker, or take the language a run before loaded from the same
@@ -58,6 +104,10 @@ class GrammarPlugin(WorkerPlugin):
 
         lang = _loaded.get(self.digest)
         if lang is None:
+            if self.data is None:  # a worker that joined after the client looked: it never had it
+                raise RuntimeError(
+                    f"this worker does not hold the grammar {self.filename} and it was not sent: run the command again"
+                )
             directory = Path(getattr(worker, "local_directory", None) or ".")
             path = directory / f"morphfst-{self.digest[:16]}-{self.filename}"
             if not path.exists() or path.stat().st_size != len(self.data):
@@ -66,6 +116,12 @@ class GrammarPlugin(WorkerPlugin):
             while len(_loaded) > KEPT_GRAMMARS:
                 del _loaded[next(iter(_loaded))]
         return lang
+
+
+def grammar_loaded(digest: str) -> bool:
+    """Whether this worker holds the grammar whose compiled bytes have ``digest`` (run on every
+    worker by the client before it registers the plugin)."""
+    return digest in _loaded
 
 
 def _plugin() -> GrammarPlugin:
@@ -137,43 +193,80 @@ def process_partition(spec: dict[str, Any], answers: list[tuple[bytes, int]] | N
     """Process the lines that start in one byte range of a file into one output file (atomic). The
     owners' ``answers`` for the partition's batch are what the processor consults before analyzing
     a type it has not cached (unpickled once per batch and kept until the next one: not poured into
-    the cache, whose bounded generations would drop a large batch's types before they are used)."""
+    the cache, whose bounded generations would drop a large batch's types before they are used).
+
+    The partition's per-type figures stay on this worker, added to those of the partitions it
+    processed before (:meth:`GrammarPlugin.hold`): they travel with a partition's result only when
+    the worker holds more than a cache generation of types or the partition is one of the run's last
+    (most often the last one of its worker: the figures then come back while the other workers
+    finish), else at the end of the run (:func:`collect_tallies`). Sending a table of every type with every partition, and adding the
+    tables up in the client, took a tenth of a Dask run; each table says which partitions it covers,
+    so the client can check that every partition is counted exactly once."""
     plugin = _plugin()
-    processor = _processor()
-    batch = int(spec.get("batch", -1))
-    if answers:
-        if batch not in plugin.answers:
-            known: Answers = {}
-            for data, _ in answers:
-                known.update(pickle.loads(data))
-            plugin.answers[batch] = known
-            while len(plugin.answers) > KEPT_BATCHES:  # the next batch's partitions may start first
-                del plugin.answers[min(plugin.answers)]
-        processor.known = plugin.answers.get(batch, {})
-    options = processor.options
-    processor.doc = spec["doc"]
-    coverage = Coverage(files=[spec["path"]])
-    tallies: list[Tally] = []  # per-type figures, added up by the client (idle meanwhile), not here
-    sink = AtomicFile(spec["output"])
-    try:
-        with open(spec["path"], "rb") as handle:
-            blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
-            for chunk in chunks(blocks, spec["first_line"], options.chunk_bytes, options.max_line_bytes):
-                result = processor.process(chunk)
-                sink.write(result.data)
-                if result.tally is not None:
-                    tallies.append(result.tally)
-                    result.tally = None
-                coverage.add(result)
-        tallies.append(processor.flush())
-        sink.commit()
-    except BaseException:
-        sink.abort()
-        raise
+    with plugin.lock:  # one partition at a time per worker: the processor and its counts are not thread-safe
+        processor = _processor()
+        batch = int(spec.get("batch", -1))
+        if answers:
+            if batch not in plugin.answers:
+                known: Answers = {}
+                for data, _ in answers:
+                    known.update(pickle.loads(data))
+                plugin.answers[batch] = known
+                while len(plugin.answers) > KEPT_BATCHES:  # the next batch's partitions may start first
+                    del plugin.answers[min(plugin.answers)]
+            processor.known = plugin.answers.get(batch, {})
+        options = processor.options
+        processor.doc = spec["doc"]
+        coverage = Coverage(files=[spec["path"]])
+        rotated: list[Tally] = []  # figures flushed when the cache turned over (with earlier partitions' counts)
+        sink = AtomicFile(spec["output"])
+        try:
+            with open(spec["path"], "rb") as handle:
+                blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
+                for chunk in chunks(blocks, spec["first_line"], options.chunk_bytes, options.max_line_bytes):
+                    result = processor.process(chunk)
+                    sink.write(result.data)
+                    if result.tally is not None:
+                        rotated.append(result.tally)
+                        result.tally = None
+                    coverage.add(result)
+            sink.commit()
+        except BaseException:
+            sink.abort()
+            plugin.spoil()
+            raise
+        tally, covers = plugin.hold(spec["index"], rotated, bool(spec.get("last")))
     return {
         "index": spec["index"],
         "output": spec["output"],
         "coverage": coverage,
-        "tallies": tallies,
+        "tally": tally,
+        "covers": covers,
         "bytes": spec["stop"] - spec["start"],
     }
+
+
+def collect_tallies(dask_worker: Any) -> tuple[Tally, list[int]]:
+    """The per-type figures this worker still holds and the partitions they cover (run on every
+    worker by the client once every partition is written: ``client.run`` passes the worker)."""
+    plugin = dask_worker.plugins.get(PLUGIN_NAME)
+    if not isinstance(plugin, GrammarPlugin) or plugin.processor is None:
+        return Tally(), []
+    with plugin.lock:
+        return plugin.release()
+
+
+def recount_partition(spec: dict[str, Any]) -> Tally:
+    """The per-type figures of one partition, counted again by a processor of its own (for a partition
+    whose figures were lost with the worker that held them; its types are analyzed again)."""
+    processor = ChunkProcessor(_processor().lang, _plugin().options)
+    options = processor.options
+    with open(spec["path"], "rb") as handle:
+        blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
+        total = Tally()
+        for chunk in chunks(blocks, spec["first_line"], options.chunk_bytes, options.max_line_bytes):
+            result = processor.process(chunk)
+            if result.tally is not None:
+                total.merge(result.tally)
+    total.merge(processor.flush())
+    return total

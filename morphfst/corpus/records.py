@@ -97,6 +97,23 @@ class Tally:
     types: dict[str, tuple[int, int, int]] = field(default_factory=dict)  # normalized type -> (tokens, status, analyses)
     analyzed: int = 0  # word types analyzed (cache misses): the same type in two processes counts twice
 
+    def merge(self, other: Tally) -> None:
+        """Add ``other``'s figures to these (a type's status and analyses are those first seen)."""
+        for i, n in enumerate(other.status_tokens):
+            self.status_tokens[i] += n
+        self.analyses += other.analyses
+        self.ambiguous += other.ambiguous
+        self.long_tokens += other.long_tokens
+        self.unlisted_tokens += other.unlisted_tokens
+        self.analyzed += other.analyzed
+        types = self.types
+        if not types:
+            self.types = dict(other.types)
+            return
+        for norm, (count, status, n) in other.types.items():
+            prev = types.get(norm)
+            types[norm] = (count + prev[0], prev[1], prev[2]) if prev else (count, status, n)
+
 
 @dataclass
 class ChunkResult:
