@@ -122,7 +122,14 @@ def run(args: argparse.Namespace) -> int:
     except WorkerFailure as exc:
         sys.stderr.write(exc.render() + "\n")
         return 1
-    propose = ChunkProcessor(lang, options).propose
+    proposer: list[ChunkProcessor] = []
+
+    def propose(word: str) -> tuple[str, str]:
+        """The guesser's proposal for an unanalyzed type of the report (a processor made on first use)."""
+        if not proposer:
+            proposer.append(ChunkProcessor(lang, options))
+        return proposer[0].propose(word)
+
     cov = result.coverage
     if args.report:
         extra = {"seconds": round(result.seconds, 3), "tokens_per_second": round(result.tokens_per_second)}

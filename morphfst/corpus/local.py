@@ -31,14 +31,16 @@ from typing import Any
 
 from ..errors import UserError
 from ..runtime.compiled_language import Language
+from ..runtime.tokenize import Tokenizer
 from .coverage import Coverage
 from .outputs import AtomicFile, StdoutSink
 from .progress import Progress
-from .reading import Chunk, chunks, read_blocks
+from .reading import Chunk, chunks, finer_tail, read_blocks
 from .records import ChunkProcessor, ChunkResult, Options, Tally
 from .sources import Source, compiled_file, load_compiled
 
 POLL_SECONDS = 0.5
+TAIL_CHUNKS, TAIL_PARTS = 2, 4  # per worker, the input's last chunks are cut in this many (see finer_tail)
 ANSWER_EVERY = 32  # word types a worker analyzes between two looks for other workers' questions
 
 
@@ -124,11 +126,16 @@ def _worker_main(
     if peers and len(peers) > 1 and processor.type_affine:
         _shared_loop(processor, tasks, results, peers, me)
         return
+    drained = False
     while True:
         item = tasks.get()
         if item is None:
-            results.send(("final", processor.flush()))
+            results.send(("bye" if drained else "final", processor.flush()))
             break
+        if item[0] == "drain":  # every chunk is done: the figures go now (see _shared_loop)
+            results.send(("final", processor.flush()))
+            drained = True
+            continue
         _, doc, chunk = item
         processor.doc = doc
         try:
@@ -162,6 +169,10 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
     kept, so a type asked for by several workers is analyzed once) and answers. No worker ever waits
     for one particular message, so none can wait for another in a circle. Chunks leave in the order
     they came, which keeps the main process's round-robin reading in input order.
+
+    After its last chunk the main process sends ``drain``: once every chunk it holds is out, the
+    worker sends its figures (``final``) at once, while the others finish their chunks, and goes on
+    answering questions until told to stop; then it sends what those answers analyzed (``bye``).
     """
     import queue
     import threading
@@ -188,6 +199,7 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
         thread.join()
 
     backlog: deque[Any] = deque()  # messages taken from the inbox while answering questions early
+    draining = drained = False  # the main process sent its last chunk / this worker sent its figures
 
     def answer(item: Any) -> None:
         _, asker, number, tokens = item
@@ -241,14 +253,21 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
                 for token, (value, info) in zip(tokens, found):
                     processor.learn(token, value, info)
                 by_number[number][4] -= 1
+            elif kind == "drain":
+                draining = True
             else:
-                finish(("final", processor.flush()))
+                # after a drain, what is left to count is the types analyzed for the others since
+                finish(("bye" if drained else "final", processor.flush()))
                 break
             while waiting and waiting[0][4] == 0:
                 number, doc, chunk, decoded, _ = waiting.popleft()
                 del by_number[number]
                 processor.doc = doc
                 outbox.put(("ok", processor.process(chunk, decoded)))
+            if draining and not waiting:
+                # every chunk is out: the figures go now, while the other workers finish theirs
+                outbox.put(("final", processor.flush()))
+                draining, drained = False, True
     except BaseException:
         finish(("error", traceback.format_exc()))
         return
@@ -289,6 +308,9 @@ class Workers:
                     stream.flush()
                 except (AttributeError, OSError, ValueError):
                     pass
+            # the tokenizer's tables (every combining mark: 20-60 ms) made once here and inherited,
+            # not once in each worker and again here for the report
+            Tokenizer.for_meta(lang.meta)
             self._start(ctx, lang, options, jobs, processor_class)
         else:
             with _main_file_hidden_if_missing():
@@ -296,6 +318,7 @@ class Workers:
         self.next_put = 0
         self.next_get = 0
         self.closed = False
+        self.drained = False
 
     def _start(
         self, ctx: Any, source: str | Language, options: Options, jobs: int, processor_class: type[ChunkProcessor]
@@ -365,17 +388,30 @@ class Workers:
             )
         return kind, payload
 
+    def drain(self) -> None:
+        """Say that no chunk follows: each worker sends its figures as soon as its chunks are out."""
+        for tasks in self.tasks:
+            tasks.put(("drain",))
+        self.drained = True
+
     def finish(self) -> list[Tally]:
-        """Tell every worker to stop; returns the figures each flushes before it stops."""
+        """Tell every worker to stop (after every result was read); returns the figures each sent."""
+        tallies = []
+        if self.drained:
+            for index in range(len(self.procs)):
+                tallies.append(self._expect(index, "final"))
         for tasks in self.tasks:
             tasks.put(None)
-        tallies = []
         for index in range(len(self.procs)):
-            kind, payload = self._receive(index, "its last figures")
-            if kind != "final":
-                raise WorkerFailure(f"worker process {index + 1} sent {kind!r} instead of its last figures")
-            tallies.append(payload)
+            tallies.append(self._expect(index, "bye" if self.drained else "final"))
+        self.drained = False
         return tallies
+
+    def _expect(self, index: int, kind: str) -> Tally:
+        got, payload = self._receive(index, "its last figures")
+        if got != kind:
+            raise WorkerFailure(f"worker process {index + 1} sent {got!r} instead of its last figures")
+        return payload  # type: ignore[no-any-return]
 
     def close(self, wait: bool = True) -> None:
         if self.closed:
@@ -507,7 +543,10 @@ def run_local(
 
         for i, source in enumerate(sources):
             open_source(i)
-            for chunk in source_chunks(source, options):
+            read = source_chunks(source, options)
+            if i == len(sources) - 1:
+                read = finer_tail(read, TAIL_CHUNKS * len(pool.procs), TAIL_PARTS)
+            for chunk in read:
                 while len(pending) >= window:
                     collect()
                 job = Job(i, chunk, source.path)
@@ -516,6 +555,8 @@ def run_local(
             reading_done.add(i)
             if not any(p.source == i for p in pending):
                 finish(i)
+        if owned:
+            pool.drain()
         while pending:
             collect()
         if owned:

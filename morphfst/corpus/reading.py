@@ -129,3 +129,34 @@ def chunks(
         buffer = buffer + block if buffer else block
         yield from drain(False)
     yield from drain(True)
+
+
+def split_chunk(chunk: Chunk, parts: int) -> Iterator[Chunk]:
+    """``chunk`` as about ``parts`` chunks of whole lines (the same bytes, first lines renumbered); a
+    piece of a cut line, or a chunk of one line, stays whole."""
+    data = chunk.data
+    if parts <= 1 or chunk.part or chunk.continues:
+        yield chunk
+        return
+    size = max(1, len(data) // parts)
+    start, line = 0, chunk.first_line
+    while start < len(data):
+        end = data.find(b"\n", start + size - 1) if len(data) - start > size else -1
+        stop = len(data) if end < 0 else end + 1
+        piece = data[start:stop]
+        yield Chunk(chunk.index, line, piece)
+        line += piece.count(b"\n")
+        start = stop
+
+
+def finer_tail(chunks: Iterable[Chunk], hold: int, parts: int) -> Iterator[Chunk]:
+    """The chunks of ``chunks`` in order, the last ``hold`` of them each cut into about ``parts``
+    (:func:`split_chunk`): several processes working through the chunks then run out of work at
+    about the same time, not one chunk's work apart (a quarter of the chunk at the end of a run)."""
+    held: list[Chunk] = []
+    for chunk in chunks:
+        held.append(chunk)
+        if len(held) > hold:
+            yield held.pop(0)
+    for chunk in held:
+        yield from split_chunk(chunk, parts)
