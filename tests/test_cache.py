@@ -169,3 +169,24 @@ def test_the_compiler_digest_reads_every_compiler_source() -> None:
     package = Path(sourcehash.__file__).resolve().parent.parent
     missing = [name for name in sourcehash.COMPILER_MODULES if not (package / name).is_file()]
     assert not missing
+
+
+def test_a_mapped_compiled_file_reads_as_its_bytes_do(tmp_path: Path, own_cache: Path, monkeypatch: pytest.MonkeyPatch) -> None:
+    # On POSIX systems a compiled file is mapped into memory, not copied; zip members are read through
+    # a reader of the mapping with its own position. Every member and arc table must read as from the
+    # file's bytes (as on systems without the mapping).
+    compiled = morphfst.compile_grammar(write_toy(tmp_path), tmp_path / "toy.mfc")
+    mapped_zf, _, mapped = archive._open(compiled)
+    monkeypatch.setattr(archive.os, "name", "nt")
+    plain_zf, _, plain = archive._open(compiled)
+    assert isinstance(plain, bytes) and not isinstance(mapped, bytes)
+    names = mapped_zf.namelist()
+    assert names == plain_zf.namelist() and any(n.endswith(".arcs") for n in names)
+    for name in names:
+        assert mapped_zf.read(name) == plain_zf.read(name)
+        view = archive._stored_view(mapped_zf, mapped, name)
+        assert (view is None) == (archive._stored_view(plain_zf, plain, name) is None)
+        if view is not None:
+            assert bytes(view) == plain_zf.read(name)
+    reader = archive._MappedReader(mapped)
+    assert reader.seek(-5, os.SEEK_END) == len(plain) - 5 and reader.read() == plain[-5:] and reader.read(3) == b""
