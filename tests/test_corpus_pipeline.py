@@ -500,3 +500,24 @@ def test_dask_counts_again_the_partitions_whose_figures_a_worker_lost(
     assert figures.pop("types_analyzed") >= expected.pop("types_analyzed")
     assert figures == expected
     assert run.coverage.types == one.coverage.types
+
+
+def test_dask_worker_with_two_threads_counts_exactly(tur: morphfst.Language, corpus: Path, tmp_path: Path) -> None:
+    # A worker with two threads may run two partitions (or a partition and an owner's answers) at
+    # once: they share one processor, so they take turns, and the figures are those of one process.
+    pytest.importorskip("distributed")
+    import logging
+
+    from distributed import LocalCluster
+
+    options = Options(mode="terms", term="morphs")
+    one = run_corpus(tur, [str(corpus)], str(tmp_path / "one.txt"), options, jobs=1)
+    with LocalCluster(
+        n_workers=1, threads_per_worker=2, processes=True, dashboard_address=":0", silence_logs=logging.ERROR
+    ) as lc:
+        run = run_corpus(tur, [str(corpus)], str(tmp_path / "dask"), options, dask=lc.scheduler_address, partition_bytes=20_000)
+    assert run.coverage.figures() == one.coverage.figures()
+    assert run.coverage.types == one.coverage.types
+    manifest = json.loads((tmp_path / "dask" / "manifest.json").read_text(encoding="utf-8"))
+    joined = b"".join((tmp_path / "dask" / e["output"]).read_bytes() for e in manifest["outputs"])
+    assert joined == (tmp_path / "one.txt").read_bytes()

@@ -160,10 +160,11 @@ def answer_types(me: int, *surveys: list[str]) -> tuple[bytes, int]:
     for survey in surveys:
         if survey[me]:
             tokens.update(dict.fromkeys(survey[me].split("\n")))
-    before = processor.misses
-    found: Answers = {token: processor.lookup(token) for token in tokens}
-    analyzed = processor.misses - before
-    processor.misses = before  # counted by the caller, so that no partition's tally counts them again
+    with _plugin().lock:  # a worker with several threads may be writing a partition meanwhile
+        before = processor.misses
+        found: Answers = {token: processor.lookup(token) for token in tokens}
+        analyzed = processor.misses - before
+        processor.misses = before  # counted by the caller, so that no partition's tally counts them again
     return pickle.dumps(found, protocol=pickle.HIGHEST_PROTOCOL), analyzed
 
 
@@ -259,14 +260,15 @@ def collect_tallies(dask_worker: Any) -> tuple[Tally, list[int]]:
 def recount_partition(spec: dict[str, Any]) -> Tally:
     """The per-type figures of one partition, counted again by a processor of its own (for a partition
     whose figures were lost with the worker that held them; its types are analyzed again)."""
-    processor = ChunkProcessor(_processor().lang, _plugin().options)
+    plugin = _plugin()
+    processor = ChunkProcessor(_processor().lang, plugin.options)
     options = processor.options
-    with open(spec["path"], "rb") as handle:
+    total = Tally()
+    with plugin.lock, open(spec["path"], "rb") as handle:  # the language's analyzer is shared
         blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
-        total = Tally()
         for chunk in chunks(blocks, spec["first_line"], options.chunk_bytes, options.max_line_bytes):
             result = processor.process(chunk)
             if result.tally is not None:
                 total.merge(result.tally)
-    total.merge(processor.flush())
+        total.merge(processor.flush())
     return total
