@@ -12,8 +12,8 @@ still ranks above a derivation from a frequent stem that spells it.
 
 Run it twice: the first pass ranks readings without counts, the second with the first pass's counts.
 
-    python bench/lexicon_counts.py --lang tur            # rewrites lexicons/tur/*.tsv in place
-    python bench/lexicon_counts.py --lang fin --dry-run  # prints the 30 most frequent lemmas only
+    python bench/lexicon_counts.py --lang fin           # prints the 30 most frequent lemmas, writes nothing
+    python bench/lexicon_counts.py --lang tur --write   # rewrites lexicons/tur/*.tsv in place
 """
 
 from __future__ import annotations
@@ -108,12 +108,13 @@ def rewrite(path: Path, counts: collections.Counter[tuple[str, str]], floor: int
 def main(argv: list[str] | None = None) -> int:
     ap = argparse.ArgumentParser(description=__doc__.split("\n\n")[0])
     ap.add_argument("--lang", default="tur", help="shipped language name (default tur)")
-    ap.add_argument("--dry-run", action="store_true", help="print the most frequent lemmas, write nothing")
+    ap.add_argument("--write", action="store_true", help="rewrite the count column of the lexicon files in place")
+    ap.add_argument("--dry-run", action="store_true", help="print the most frequent lemmas, write nothing (the default)")
     args = ap.parse_args(argv)
     grammar_path = find_grammar(args.lang)
     lang = morphfst.load(grammar_path)
     counts = lemma_counts(lang, WORDFREQ_CODES.get(lang.name, lang.name))
-    if args.dry_run:
+    if args.dry_run or not args.write:
         for (lemma, pos), n in counts.most_common(30):
             print(f"{lemma}\t{pos}\t{n:,.0f}")
         return 0
