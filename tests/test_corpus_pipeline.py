@@ -316,10 +316,16 @@ def test_dask_running_cluster_keeps_the_grammar_loaded_but_not_the_cache(
     with LocalCluster(
         n_workers=2, threads_per_worker=1, processes=True, dashboard_address=":0", silence_logs=logging.ERROR
     ) as lc:
-        runs = [
-            run_corpus(tur, [str(corpus)], str(tmp_path / f"run{i}"), options, dask=lc.scheduler_address, partition_bytes=40_000)
-            for i in range(2)
-        ]
+        runs = []
+        for i in range(3):
+            # the first run sends the compiled bytes (as to workers that do not share the file
+            # system); the second finds the grammar loaded; the third may read it from the path
+            monkeypatch.setattr(cluster, "SHARED_FILES", i > 0)
+            runs.append(
+                run_corpus(
+                    tur, [str(corpus)], str(tmp_path / f"run{i}"), options, dask=lc.scheduler_address, partition_bytes=40_000
+                )
+            )
         with Client(lc.scheduler_address) as client:
             loaded = client.run(lambda: sorted(dask_worker._loaded))
     for i, run in enumerate(runs):
@@ -328,7 +334,7 @@ def test_dask_running_cluster_keeps_the_grammar_loaded_but_not_the_cache(
         joined = b"".join((tmp_path / f"run{i}" / e["output"]).read_bytes() for e in manifest["outputs"])
         assert joined == (tmp_path / "one.txt").read_bytes()
     assert len(loaded) == 2 and all(len(digests) == 1 for digests in loaded.values())
-    assert sent == [True, False]  # the second run found the grammar on every worker
+    assert sent == [True, False, False]
 
 
 def test_dask_analyzes_each_type_once_when_a_batch_outgrows_the_cache(tur: morphfst.Language, tmp_path: Path) -> None:
@@ -521,3 +527,18 @@ def test_dask_worker_with_two_threads_counts_exactly(tur: morphfst.Language, cor
     manifest = json.loads((tmp_path / "dask" / "manifest.json").read_text(encoding="utf-8"))
     joined = b"".join((tmp_path / "dask" / e["output"]).read_bytes() for e in manifest["outputs"])
     assert joined == (tmp_path / "one.txt").read_bytes()
+
+
+def test_a_worker_reads_the_grammar_from_a_path_only_when_the_bytes_are_the_same(tmp_path: Path) -> None:
+    pytest.importorskip("distributed")
+    import hashlib
+
+    from morphfst.corpus import dask_worker
+
+    compiled = tmp_path / "g.mfc"
+    compiled.write_bytes(b"compiled bytes")
+    digest = hashlib.sha256(b"compiled bytes").hexdigest()
+    assert dask_worker.grammar_reachable(digest, str(compiled))
+    assert not dask_worker.grammar_reachable(hashlib.sha256(b"other bytes").hexdigest(), str(compiled))
+    assert not dask_worker.grammar_reachable(digest, str(tmp_path / "missing.mfc"))
+    assert not dask_worker.grammar_reachable(digest, "")  # the client did not offer its path

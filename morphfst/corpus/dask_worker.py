@@ -38,15 +38,17 @@ Answers = dict[str, tuple[Any, tuple[str, int, int]]]  # word type -> (formatted
 class GrammarPlugin(WorkerPlugin):
     """Holds the compiled grammar (the bytes of a .mfc file, identified by their SHA-256 digest) and,
     on each worker, the loaded language. ``data`` may be ``None`` when every worker already holds the
-    grammar (a cluster kept running between runs, see :func:`grammar_loaded`): the 15 MB of a compiled
-    grammar then do not travel again."""
+    grammar (a cluster kept running between runs) or reads the same bytes at ``path`` (a shared file
+    system, a local cluster): see :func:`grammar_reachable`; the 15 MB of a compiled grammar then do
+    not travel."""
 
     name = PLUGIN_NAME
 
-    def __init__(self, data: bytes | None, filename: str, options: Options, digest: str = "") -> None:
+    def __init__(self, data: bytes | None, filename: str, options: Options, digest: str = "", path: str = "") -> None:
         if not digest and data is None:
             raise ValueError("a grammar plugin needs the compiled bytes or their digest")
         self.data = data
+        self.path = path
         self.filename = filename
         self.options = options
         self.digest = digest or hashlib.sha256(data or b"").hexdigest()
@@ -104,24 +106,36 @@ class GrammarPlugin(WorkerPlugin):
 
         lang = _loaded.get(self.digest)
         if lang is None:
-            if self.data is None:  # a worker that joined after the client looked: it never had it
-                raise RuntimeError(
-                    f"this worker does not hold the grammar {self.filename} and it was not sent: run the command again"
-                )
-            directory = Path(getattr(worker, "local_directory", None) or ".")
-            path = directory / f"morphfst-{self.digest[:16]}-{self.filename}"
-            if not path.exists() or path.stat().st_size != len(self.data):
-                write_bytes_atomic(path, self.data)  # the name holds the digest: a whole file is the right one
+            if self.data is None:
+                if not (self.path and _digest_of(self.path) == self.digest):  # joined after the client looked
+                    raise RuntimeError(
+                        f"this worker does not hold the grammar {self.filename} and it was not sent: run the command again"
+                    )
+                path = Path(self.path)
+            else:
+                directory = Path(getattr(worker, "local_directory", None) or ".")
+                path = directory / f"morphfst-{self.digest[:16]}-{self.filename}"
+                if not path.exists() or path.stat().st_size != len(self.data):
+                    write_bytes_atomic(path, self.data)  # the name holds the digest: a whole file is the right one
             lang = _loaded[self.digest] = load_compiled(str(path))
             while len(_loaded) > KEPT_GRAMMARS:
                 del _loaded[next(iter(_loaded))]
         return lang
 
 
-def grammar_loaded(digest: str) -> bool:
-    """Whether this worker holds the grammar whose compiled bytes have ``digest`` (run on every
-    worker by the client before it registers the plugin)."""
-    return digest in _loaded
+def _digest_of(path: str) -> str:
+    """The SHA-256 of a file's bytes ("" when it cannot be read)."""
+    try:
+        with open(path, "rb") as handle:
+            return hashlib.file_digest(handle, "sha256").hexdigest()
+    except OSError:
+        return ""
+
+
+def grammar_reachable(digest: str, path: str) -> bool:
+    """Whether this worker holds the grammar whose compiled bytes have ``digest``, or can read those
+    very bytes at ``path`` (run on every worker by the client before it registers the plugin)."""
+    return digest in _loaded or bool(path) and _digest_of(path) == digest
 
 
 def _plugin() -> GrammarPlugin:
