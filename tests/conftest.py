@@ -3,8 +3,12 @@
 from __future__ import annotations
 
 import atexit
+import inspect
 import os
+import re
 import shutil
+import subprocess
+import sys
 import tempfile
 from pathlib import Path
 
@@ -23,6 +27,9 @@ _OWNER = os.getpid()
 def _remove_cache() -> None:
     """Remove the session's cache when the test session ends (not in a forked child that exits)."""
     if os.getpid() == _OWNER:
+        for proc in _background:
+            proc.kill()
+            proc.wait()
         shutil.rmtree(_CACHE, ignore_errors=True)
 
 
@@ -101,12 +108,74 @@ def tur_small(tmp_path_factory: pytest.TempPathFactory) -> morphfst.Language:
     return morphfst.load(root / "grammars" / "tur.mfg")
 
 
+# The Finnish grammar takes 5-7 minutes to compile, the Turkish one under a minute: when the session
+# has Finnish tests, Finnish is compiled into the session's cache by a background process while the
+# other tests run, and the Finnish tests run last (see pytest_collection_modifyitems).
+_FINNISH = re.compile(r"\bfin\b")
+_background: list[subprocess.Popen[bytes]] = []
+
+
+def _is_finnish(item: pytest.Item) -> bool:
+    """Whether a test may load the Finnish grammar: it names ``fin`` (a fixture, a parameter, a
+    language name in its source, decorators included) or lives in a Finnish test module."""
+    if "fin" in getattr(item, "fixturenames", ()) or "_fin_" in item.path.name:
+        return True
+    callspec = getattr(item, "callspec", None)
+    if callspec is not None and "fin" in map(str, callspec.params.values()):
+        return True
+    function = getattr(item, "function", None)
+    try:
+        return function is not None and bool(_FINNISH.search(inspect.getsource(function)))
+    except (OSError, TypeError):
+        return False
+
+
+def pytest_configure(config: pytest.Config) -> None:
+    config.addinivalue_line("markers", "finnish_compiled: waits for the background compile of the Finnish grammar")
+
+
+def pytest_collection_modifyitems(session: pytest.Session, config: pytest.Config, items: list[pytest.Item]) -> None:
+    finnish = [item for item in items if _is_finnish(item)]
+    if not finnish or not (GRAMMARS / "fin.mfg").exists() or config.option.collectonly:
+        return
+    others = [item for item in items if not _is_finnish(item)]
+    items[:] = others + finnish
+    for item in finnish:
+        item.add_marker(pytest.mark.finnish_compiled)
+    _background.append(
+        subprocess.Popen(
+            [sys.executable, "-c", "import sys, morphfst; morphfst.load(sys.argv[1])", str(GRAMMARS / "fin.mfg")],
+            stdout=subprocess.DEVNULL,
+            stderr=subprocess.DEVNULL,
+        )
+    )
+
+
+def _wait_for_finnish() -> None:
+    """Let the background compile of Finnish finish (its failure is seen when the test loads it)."""
+    while _background:
+        _background.pop().wait()
+
+
+def pytest_runtest_setup(item: pytest.Item) -> None:
+    if item.get_closest_marker("finnish_compiled") is not None:
+        _wait_for_finnish()
+
+
+def pytest_sessionfinish(session: pytest.Session, exitstatus: int) -> None:
+    for proc in _background:  # a session that ended before its Finnish tests
+        proc.kill()
+        proc.wait()
+    _background.clear()
+
+
 @pytest.fixture(scope="session")
 def fin() -> morphfst.Language:
     """The shipped Finnish grammar, compiled once."""
     path = GRAMMARS / "fin.mfg"
     if not path.exists():
         pytest.skip("Finnish grammar not present")
+    _wait_for_finnish()
     return morphfst.load(path)
 
 
