@@ -27,9 +27,7 @@ _OWNER = os.getpid()
 def _remove_cache() -> None:
     """Remove the session's cache when the test session ends (not in a forked child that exits)."""
     if os.getpid() == _OWNER:
-        for proc in _background:
-            proc.kill()
-            proc.wait()
+        _stop_background()
         shutil.rmtree(_CACHE, ignore_errors=True)
 
 
@@ -135,13 +133,15 @@ def pytest_configure(config: pytest.Config) -> None:
 
 
 def pytest_collection_modifyitems(session: pytest.Session, config: pytest.Config, items: list[pytest.Item]) -> None:
-    finnish = [item for item in items if _is_finnish(item)]
-    if not finnish or not (GRAMMARS / "fin.mfg").exists() or config.option.collectonly:
+    marked = [_is_finnish(item) for item in items]
+    if not any(marked) or not (GRAMMARS / "fin.mfg").exists():
         return
-    others = [item for item in items if not _is_finnish(item)]
-    items[:] = others + finnish
+    finnish = [item for item, yes in zip(items, marked) if yes]
+    items[:] = [item for item, yes in zip(items, marked) if not yes] + finnish
     for item in finnish:
         item.add_marker(pytest.mark.finnish_compiled)
+    if config.option.collectonly:
+        return
     _background.append(
         subprocess.Popen(
             [sys.executable, "-c", "import sys, morphfst; morphfst.load(sys.argv[1])", str(GRAMMARS / "fin.mfg")],
@@ -162,11 +162,16 @@ def pytest_runtest_setup(item: pytest.Item) -> None:
         _wait_for_finnish()
 
 
-def pytest_sessionfinish(session: pytest.Session, exitstatus: int) -> None:
-    for proc in _background:  # a session that ended before its Finnish tests
+def _stop_background() -> None:
+    """Stop a background compile still running (a session that ended before its Finnish tests)."""
+    while _background:
+        proc = _background.pop()
         proc.kill()
         proc.wait()
-    _background.clear()
+
+
+def pytest_sessionfinish(session: pytest.Session, exitstatus: int) -> None:
+    _stop_background()
 
 
 @pytest.fixture(scope="session")

@@ -529,16 +529,24 @@ def test_dask_worker_with_two_threads_counts_exactly(tur: morphfst.Language, cor
     assert joined == (tmp_path / "one.txt").read_bytes()
 
 
-def test_a_worker_reads_the_grammar_from_a_path_only_when_the_bytes_are_the_same(tmp_path: Path) -> None:
+def test_a_worker_reads_the_grammar_from_a_path_only_when_the_bytes_are_the_same(
+    tmp_path: Path, monkeypatch: pytest.MonkeyPatch
+) -> None:
     pytest.importorskip("distributed")
     import hashlib
 
+    from toygrammar import write_toy
+
     from morphfst.corpus import dask_worker
 
-    compiled = tmp_path / "g.mfc"
-    compiled.write_bytes(b"compiled bytes")
-    digest = hashlib.sha256(b"compiled bytes").hexdigest()
-    assert dask_worker.grammar_reachable(digest, str(compiled))
+    monkeypatch.setattr(dask_worker, "_loaded", {})  # this process's languages, as on a fresh worker
+    compiled = morphfst.compile_grammar(write_toy(tmp_path), tmp_path / "toy.mfc")
+    digest = hashlib.sha256(compiled.read_bytes()).hexdigest()
     assert not dask_worker.grammar_reachable(hashlib.sha256(b"other bytes").hexdigest(), str(compiled))
     assert not dask_worker.grammar_reachable(digest, str(tmp_path / "missing.mfc"))
     assert not dask_worker.grammar_reachable(digest, "")  # the client did not offer its path
+    assert dask_worker._loaded == {}
+    assert dask_worker.grammar_reachable(digest, str(compiled))
+    assert list(dask_worker._loaded) == [digest]  # loaded once, now: the plugin's setup finds it
+    assert dask_worker._loaded[digest].analyze("kalar")
+    assert dask_worker.grammar_reachable(digest, "")  # held

@@ -13,6 +13,7 @@ from __future__ import annotations
 import hashlib
 import pickle
 import threading
+from collections.abc import Iterator
 from pathlib import Path
 from typing import Any
 
@@ -24,7 +25,7 @@ from ..runtime.compiled_language import Language
 from .coverage import Coverage
 from .local import owner
 from .outputs import AtomicFile
-from .reading import chunks, read_blocks
+from .reading import Chunk, chunks, read_blocks
 from .records import ChunkProcessor, Options, Tally
 
 PLUGIN_NAME = "morphfst-grammar"
@@ -44,14 +45,12 @@ class GrammarPlugin(WorkerPlugin):
 
     name = PLUGIN_NAME
 
-    def __init__(self, data: bytes | None, filename: str, options: Options, digest: str = "", path: str = "") -> None:
-        if not digest and data is None:
-            raise ValueError("a grammar plugin needs the compiled bytes or their digest")
+    def __init__(self, data: bytes | None, filename: str, options: Options, digest: str, path: str = "") -> None:
         self.data = data
         self.path = path
         self.filename = filename
         self.options = options
-        self.digest = digest or hashlib.sha256(data or b"").hexdigest()
+        self.digest = digest
         self.processor: ChunkProcessor | None = None
         self.answers: dict[int, Answers] = {}  # batch -> its owners' answers (the last two batches)
         self.lock = threading.Lock()
@@ -104,38 +103,48 @@ class GrammarPlugin(WorkerPlugin):
     def _language(self, worker: Any) -> Language:
         from .sources import load_compiled
 
-        lang = _loaded.get(self.digest)
-        if lang is None:
-            if self.data is None:
-                if not (self.path and _digest_of(self.path) == self.digest):  # joined after the client looked
-                    raise RuntimeError(
-                        f"this worker does not hold the grammar {self.filename} and it was not sent: run the command again"
-                    )
-                path = Path(self.path)
-            else:
-                directory = Path(getattr(worker, "local_directory", None) or ".")
-                path = directory / f"morphfst-{self.digest[:16]}-{self.filename}"
-                if not path.exists() or path.stat().st_size != len(self.data):
-                    write_bytes_atomic(path, self.data)  # the name holds the digest: a whole file is the right one
-            lang = _loaded[self.digest] = load_compiled(str(path))
-            while len(_loaded) > KEPT_GRAMMARS:
-                del _loaded[next(iter(_loaded))]
-        return lang
+        if grammar_reachable(self.digest, self.path):  # held, or read now from the client's path
+            return _loaded[self.digest]
+        if self.data is None:  # a worker that joined after the client looked, on another file system
+            raise RuntimeError(
+                f"this worker does not hold the grammar {self.filename} and it was not sent: run the command again"
+            )
+        directory = Path(getattr(worker, "local_directory", None) or ".")
+        path = directory / f"morphfst-{self.digest[:16]}-{self.filename}"
+        if not path.exists() or path.stat().st_size != len(self.data):
+            write_bytes_atomic(path, self.data)  # the name holds the digest: a whole file is the right one
+        return _keep(self.digest, load_compiled(str(path)))
 
 
-def _digest_of(path: str) -> str:
-    """The SHA-256 of a file's bytes ("" when it cannot be read)."""
-    try:
-        with open(path, "rb") as handle:
-            return hashlib.file_digest(handle, "sha256").hexdigest()
-    except OSError:
-        return ""
+def _keep(digest: str, lang: Language) -> Language:
+    """Keep ``lang`` loaded on this worker under the digest of its compiled bytes (the last few)."""
+    _loaded[digest] = lang
+    while len(_loaded) > KEPT_GRAMMARS:
+        del _loaded[next(iter(_loaded))]
+    return lang
 
 
 def grammar_reachable(digest: str, path: str) -> bool:
-    """Whether this worker holds the grammar whose compiled bytes have ``digest``, or can read those
-    very bytes at ``path`` (run on every worker by the client before it registers the plugin)."""
-    return digest in _loaded or bool(path) and _digest_of(path) == digest
+    """Whether this worker holds the grammar whose compiled bytes have ``digest``, or reads those
+    very bytes at ``path`` (then it loads them now, once: the plugin's setup finds them loaded). Run
+    on every worker by the client before it registers the plugin."""
+    if digest in _loaded:
+        return True
+    if not path:
+        return False
+    try:
+        with open(path, "rb") as handle:
+            if hashlib.file_digest(handle, "sha256").hexdigest() != digest:
+                return False
+    except OSError:
+        return False
+    from .sources import load_compiled
+
+    try:
+        _keep(digest, load_compiled(path))
+    except Exception:  # the same bytes the client loaded, so not expected: they are sent, and the setup says why
+        return False
+    return True
 
 
 def _plugin() -> GrammarPlugin:
@@ -149,15 +158,19 @@ def _processor() -> ChunkProcessor:
     return _plugin().processor  # type: ignore[return-value]
 
 
+def _partition_chunks(spec: dict[str, Any], options: Options) -> Iterator[Chunk]:
+    """The chunks of the lines that start in a partition's byte range, numbered from its first line."""
+    with open(spec["path"], "rb") as handle:
+        blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
+        yield from chunks(blocks, spec.get("first_line", 1), options.chunk_bytes, options.max_line_bytes)
+
+
 def survey_partition(spec: dict[str, Any], owners: int) -> list[str]:
     """The distinct word types of one partition (every one, cached on this worker or not), shared
     out by owner (:func:`~morphfst.corpus.local.owner`): one string per owner, a type per line (Dask
     sends one string about ten times faster than a list of tens of thousands of strings)."""
     processor = _processor()
-    options = processor.options
-    with open(spec["path"], "rb") as handle:
-        blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
-        seen = processor.types_of(chunks(blocks, 1, options.chunk_bytes, options.max_line_bytes))
+    seen = processor.types_of(_partition_chunks(spec, processor.options))
     buckets: list[list[str]] = [[] for _ in range(max(owners, 1))]
     for token in seen:
         buckets[owner(token, len(buckets))].append(token)
@@ -236,15 +249,13 @@ def process_partition(spec: dict[str, Any], answers: list[tuple[bytes, int]] | N
         rotated: list[Tally] = []  # figures flushed when the cache turned over (with earlier partitions' counts)
         sink = AtomicFile(spec["output"])
         try:
-            with open(spec["path"], "rb") as handle:
-                blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
-                for chunk in chunks(blocks, spec["first_line"], options.chunk_bytes, options.max_line_bytes):
-                    result = processor.process(chunk)
-                    sink.write(result.data)
-                    if result.tally is not None:
-                        rotated.append(result.tally)
-                        result.tally = None
-                    coverage.add(result)
+            for chunk in _partition_chunks(spec, options):
+                result = processor.process(chunk)
+                sink.write(result.data)
+                if result.tally is not None:
+                    rotated.append(result.tally)
+                    result.tally = None
+                coverage.add(result)
             sink.commit()
         except BaseException:
             sink.abort()
@@ -276,11 +287,9 @@ def recount_partition(spec: dict[str, Any]) -> Tally:
     whose figures were lost with the worker that held them; its types are analyzed again)."""
     plugin = _plugin()
     processor = ChunkProcessor(_processor().lang, plugin.options)
-    options = processor.options
     total = Tally()
-    with plugin.lock, open(spec["path"], "rb") as handle:  # the language's analyzer is shared
-        blocks = read_blocks(handle, spec["start"], spec["stop"], block=options.chunk_bytes)
-        for chunk in chunks(blocks, spec["first_line"], options.chunk_bytes, options.max_line_bytes):
+    with plugin.lock:  # the language's analyzer is shared
+        for chunk in _partition_chunks(spec, processor.options):
             result = processor.process(chunk)
             if result.tally is not None:
                 total.merge(result.tally)
