@@ -190,3 +190,21 @@ def test_a_mapped_compiled_file_reads_as_its_bytes_do(tmp_path: Path, own_cache:
             assert bytes(view) == plain_zf.read(name)
     reader = archive._MappedReader(mapped)
     assert reader.seek(-5, os.SEEK_END) == len(plain) - 5 and reader.read() == plain[-5:] and reader.read(3) == b""
+
+
+def test_loading_a_compiled_file_and_analyzing_a_known_word_imports_no_pynini(tmp_path: Path, own_cache: Path) -> None:
+    """Start-up: the walk reads the compiled file's packed arc tables, so neither loading nor analyzing
+    a word the lexicon knows needs OpenFst's Python module; composing (here: generating) imports it."""
+    import subprocess
+    import sys
+
+    compiled = morphfst.compile_grammar(write_toy(tmp_path), tmp_path / "toy.mfc")
+    code = (
+        "import sys, morphfst\n"
+        f"lang = morphfst.load({str(compiled)!r})\n"
+        "print(lang.analyze('kalar')[0].text, 'pynini' in sys.modules)\n"
+        "lang.generate('ka', 'N;PL;LOC')\n"
+        "print('pynini' in sys.modules)\n"
+    )
+    done = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True)
+    assert done.stdout.split("\n")[:2] == ["ka N;PL;NOM False", "True"]

@@ -22,14 +22,15 @@ import struct
 import zipfile
 from collections.abc import Callable, Iterator, Mapping
 from pathlib import Path
-from typing import Any
-
-import pynini
+from typing import TYPE_CHECKING, Any
 
 from ..atomic import create_temp, discard, publish, write_error
 from ..errors import Position, UserError
 from ..version import FORMAT_VERSION
 from .arctable import WALKED, Arcs, FstArcs, PackedArcs, pack
+
+if TYPE_CHECKING:  # a transducer is read through pynini the first time it is used; loading needs none
+    import pynini
 
 SUFFIX = ".mfc"
 CHECKSUM_PREFIX = b"morphfst-sha256:"
@@ -86,7 +87,7 @@ class Metadata(dict):  # type: ignore[type-arg]
         return {k: self[k] for k in [*self.keys(), *self._lazy]}
 
 
-class LazyFsts(Mapping[str, pynini.Fst]):
+class LazyFsts(Mapping[str, "pynini.Fst"]):
     """The transducers of an archive, each read from its member the first time it is looked up."""
 
     def __init__(self, zf: zipfile.ZipFile, names: list[str], path: str | Path, raw: Any = b"") -> None:
@@ -102,6 +103,8 @@ class LazyFsts(Mapping[str, pynini.Fst]):
         if fst is None:
             if name not in self._names:
                 raise KeyError(name)
+            import pynini
+
             try:
                 fst = self._loaded[name] = pynini.Fst.read_from_string(self._zf.read(f"{name}.fst"))
             except Exception as exc:  # a damaged member: zlib.error, BadZipFile, pynini's FstIOError

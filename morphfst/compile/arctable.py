@@ -20,16 +20,16 @@ import array
 import struct
 import sys
 from collections.abc import Iterable, Sequence
-from typing import Any, Protocol
+from typing import TYPE_CHECKING, Any, Protocol
 
-import pynini
-
-from .fstutil import Weight
+if TYPE_CHECKING:  # pynini is imported only to read or pack an in-memory transducer, not to walk a table
+    import pynini
 
 MAGIC = b"MFARCS2\n"
 WALKED = ("bounded", "guesser")  # the transducers the walk reads: these get a packed table
 _HEADER = struct.Struct("<qqq")
 _INF = float("inf")
+NO_STATE_ID = -1  # OpenFst's "no state" (the start of an empty transducer), named without importing pynini
 ArcRow = tuple[int, int, float, int]  # input label, output label, weight, next state
 
 
@@ -47,6 +47,8 @@ class FstArcs:
     """The arcs of an in-memory transducer, read through pynini one state at a time."""
 
     def __init__(self, fst: pynini.Fst) -> None:
+        from .fstutil import Weight
+
         self.fst = fst
         self.start: int = fst.start()
         self._zero = Weight.zero(fst.weight_type())
@@ -97,6 +99,8 @@ class PackedArcs:
 
 def pack(fst: pynini.Fst) -> bytes:
     """The packed table of ``fst`` (tropical weights)."""
+    from .fstutil import Weight
+
     zero = Weight.zero(fst.weight_type())
     first = array.array("I", [0])
     ilabel, olabel, targets = array.array("I"), array.array("I"), array.array("I")

@@ -12,19 +12,19 @@ import itertools
 import re
 from collections.abc import Mapping, Sequence
 from functools import lru_cache
-from typing import Any
-
-import pynini
+from typing import TYPE_CHECKING, Any
 
 from ..compile.archive import LazyFsts, Metadata
 from ..compile.arctable import Arcs, FstArcs
-from ..compile.fstutil import Arc, Weight, acc, is_empty, paths
 from ..errors import UserError
 from ..language.normalize import Normalization, make_normalizer, restore_case
 from ..language.symbols import GUESS_SYMBOL, PRIVATE_START, SymbolSpace
 from .hyphenated import HYPHEN, hyphenated
 from .results import Analysis, Form, Segmentation
 from .walk import FastAnalyzer
+
+if TYPE_CHECKING:  # pynini is imported by the methods that compose (reference path, generation), not to walk
+    import pynini
 
 _UNREADABLE = re.compile(f"[\\x00{chr(PRIVATE_START)}-\\U0010ffff]")  # NUL cuts pynini strings; the rest is ours
 MAX_PATHS = 200
@@ -56,7 +56,7 @@ class Language:
         self.analyze_cached = lru_cache(maxsize=65536)(self._analyze_tuple)
         self._fast: FastAnalyzer | None = None
         self._orders: dict[str, str] = {}  # label codes in an order that generated nothing -> one that did
-        self._guessing: pynini.Fst | bool | None = None  # see _guess_generator (False: no guesser)
+        self._guessing: list[pynini.Fst | None] = []  # see _guess_generator: empty until built
 
     # ---- analysis ---------------------------------------------------------------------------------
     def analyze(self, word: str, guess: bool = False) -> list[Analysis]:
@@ -112,6 +112,10 @@ class Language:
     def _composed_surface(self, surface: str, written: str | None = None) -> tuple[Analysis, ...]:
         if not self.acceptable(surface):
             return ()
+        import pynini
+
+        from ..compile.fstutil import acc, paths
+
         found: list[tuple[str, str, float]] = []
         for bounded, _ in self._bounded(surface):
             lattice = pynini.compose(acc(bounded), self.fsts["bounded"])
@@ -124,6 +128,10 @@ class Language:
         return 0 < len(surface) <= MAX_WORD and _UNREADABLE.search(surface) is None
 
     def _bounded(self, surface: str) -> list[tuple[str, float]]:
+        import pynini
+
+        from ..compile.fstutil import acc, is_empty, paths
+
         lattice = pynini.compose(acc(surface), self.fsts["segmenter"])
         if is_empty(lattice):
             return []
@@ -147,6 +155,10 @@ class Language:
         surface = self.normalize(word)
         if not self.acceptable(surface):
             return False
+        import pynini
+
+        from ..compile.fstutil import acc, is_empty
+
         if not is_empty(pynini.compose(acc(surface), self.fsts["analyzer"]).connect()):
             return True
         return HYPHEN in surface and bool(self.analyze(word))
@@ -246,9 +258,9 @@ class Language:
         """The guesser inverted (analysis -> surface) with the guess marker and affix ids read as nothing
         and the morph boundaries written as nothing: what the generator is to the bounded analyzer
         (built on first use; the guesser is small)."""
-        if self._guessing is None:
+        if not self._guessing:
             if "guesser" not in self.fsts:
-                self._guessing = False
+                self._guessing.append(None)
             else:
                 silent = [(ord(c), 0) for c, kind in self.space.kinds.items() if kind == "affix"]
                 mark = self.space.to_char.get(GUESS_SYMBOL)
@@ -256,11 +268,15 @@ class Language:
                     silent.append((ord(mark), 0))
                 fst = self.fsts["guesser"].copy().invert()
                 fst.relabel_pairs(ipairs=silent, opairs=[(ord(self.plus), 0)])
-                self._guessing = fst.arcsort("ilabel")
-        return self._guessing if isinstance(self._guessing, pynini.Fst) else None
+                self._guessing.append(fst.arcsort("ilabel"))
+        return self._guessing[0]
 
     def _generate_with(self, generator: pynini.Fst, lemma: str, labels: list[str], codes: list[str]) -> list[Form]:
         """:meth:`generate` through ``generator`` (labels in the order given, else in any order)."""
+        import pynini
+
+        from ..compile.fstutil import acc, paths
+
         analysis = f"{lemma} {';'.join(labels)}"
         given = "".join(codes)
         known = self._orders.get(given)  # an order that served these labels when the given one did not
@@ -307,6 +323,10 @@ class Language:
         return [Form(head + f.form, f.weight, analysis) for f in self.generate(tail, labels)]
 
     def _generate_from(self, generator: pynini.Fst, query: pynini.Fst, analysis: str) -> list[Form]:
+        import pynini
+
+        from ..compile.fstutil import paths
+
         return _forms(paths(pynini.compose(query, generator), MAX_PATHS), analysis)
 
     def generate_text(self, analysis: str) -> list[Form]:
@@ -359,6 +379,10 @@ def _forms(found: list[tuple[str, str, float]], analysis: str) -> list[Form]:
 
 def _permutations(codes: list[str]) -> pynini.Fst:
     """An acceptor for every ordering of a multiset of single-symbol codes (subset construction)."""
+    import pynini
+
+    from ..compile.fstutil import Arc, Weight
+
     counts: dict[str, int] = {}
     for c in codes:
         counts[c] = counts.get(c, 0) + 1

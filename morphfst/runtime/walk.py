@@ -19,18 +19,18 @@ import math
 import re
 from collections.abc import Callable, Iterable, Mapping
 from dataclasses import MISSING, fields
-from typing import Any, Protocol, TypeVar
+from typing import TYPE_CHECKING, Any, Protocol, TypeVar, cast
 
-import pynini
-
-from ..compile.arctable import Arcs, FstArcs
-from ..compile.fstutil import NO_STATE_ID
+from ..compile.arctable import NO_STATE_ID, Arcs, FstArcs, PackedArcs
 from ..compile.guessweights import GUESS_COMPOUND_WEIGHT, GUESS_NAME_WEIGHT, GUESS_OFFSET, GUESS_STEM_WEIGHT, NAME_POS
 from ..language.normalize import restore_case
 from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
 from .hyphenated import HYPHEN, hyphenated
 from .native import native_walker
 from .results import Analysis, Morph
+
+if TYPE_CHECKING:  # a walk over a packed table needs no pynini; it is imported when an Fst is walked
+    import pynini
 
 
 class Language(Protocol):
@@ -112,7 +112,8 @@ class ArcWalker:
     """
 
     def __init__(self, fst: pynini.Fst | Arcs, skip: Iterable[str] = (), future: bool = False) -> None:
-        self.table: Arcs = FstArcs(fst) if isinstance(fst, pynini.Fst) else fst
+        # a table as it is; anything else is an in-memory transducer, read through pynini
+        self.table: Arcs = fst if isinstance(fst, (PackedArcs, FstArcs)) else FstArcs(cast("pynini.Fst", fst))
         self.start = self.table.start
         self._skip = {ord(c) for c in skip}
         self._raw: dict[int, Raw] = {}
