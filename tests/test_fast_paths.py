@@ -238,6 +238,22 @@ def test_glosses_found_in_the_text_are_the_parsed_glosses(tur: morphfst.Language
     assert dict(fresh) == parsed and len(fresh) == len(parsed)
 
 
+def test_a_corpus_processor_reads_the_glosses_whole_and_learns_answers_in_one_call(tur: morphfst.Language) -> None:
+    from morphfst.corpus.records import ChunkProcessor, Options
+
+    lang = morphfst.load(tur.meta["grammar_path"])  # a fresh load: its glosses not yet parsed
+    glosses = lang.glosses
+    assert isinstance(glosses, archive.Glosses) and not glosses._parsed
+    processor = ChunkProcessor(lang, Options())
+    assert glosses._parsed  # thousands of words follow: one parse, not a search of the text per lemma
+    teacher = ChunkProcessor(tur, Options())
+    tokens = ["evlerde", "kitaplar", "evlerde"]
+    found = [teacher.lookup(t) for t in tokens]
+    processor.learn_all(tokens, found)
+    assert [processor.lookup(t) for t in tokens] == found and processor.misses == 0
+    assert processor.young_chars == sum(len(t) + len(v) for t, (v, _) in zip(tokens[:2], found[:2]))
+
+
 def test_the_walk_ends_on_a_cycle_of_arcs_that_read_nothing() -> None:
     # the recursive fold meets the cycle and falls back to the depth-bounded closure
     found = walk.ArcWalker(epsilon_cycle()).walk("a")

@@ -208,6 +208,11 @@ class Glosses(Mapping[tuple[str, str], str]):
         except KeyError:
             return default
 
+    def read_all(self) -> None:
+        """Parse the text whole now (a corpus run decodes thousands of words: the finds would be wasted)."""
+        if not self._parsed:
+            self._parse()
+
     def _parse(self) -> None:
         self._found = read_glosses(self._text[1:])
         self._parsed = True

@@ -178,6 +178,7 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
     import threading
 
     workers = len(peers)
+    owners: dict[str, int] = {}  # owner by a type's first letters (see owner): a few thousand keys
     waiting: deque[list[Any]] = deque()  # [number, doc, chunk, decoded text, answers still expected]
     by_number: dict[int, list[Any]] = {}
     count = 0
@@ -229,7 +230,9 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
                 asks: dict[int, list[str]] = {}
                 own: list[str] = []
                 for token in missing:
-                    who = owner(token, workers)
+                    who = owners.get(token[:OWNER_PREFIX])
+                    if who is None:
+                        who = owners[token[:OWNER_PREFIX]] = owner(token, workers)
                     if who == me:
                         own.append(token)
                     else:
@@ -250,8 +253,7 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
                 answer(item)
             elif kind == "answer":
                 _, number, tokens, found = item
-                for token, (value, info) in zip(tokens, found):
-                    processor.learn(token, value, info)
+                processor.learn_all(tokens, found)
                 by_number[number][4] -= 1
             elif kind == "drain":
                 draining = True
@@ -308,9 +310,10 @@ class Workers:
                     stream.flush()
                 except (AttributeError, OSError, ValueError):
                     pass
-            # the tokenizer's tables (every combining mark: 20-60 ms) made once here and inherited,
-            # not once in each worker and again here for the report
+            # the tokenizer's tables (every combining mark: 20-60 ms) and the glosses table made once
+            # here and inherited, not once in each worker (and again here for the report)
             Tokenizer.for_meta(lang.meta)
+            lang.expect_many_words()
             self._start(ctx, lang, options, jobs, processor_class)
         else:
             with _main_file_hidden_if_missing():

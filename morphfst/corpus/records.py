@@ -263,6 +263,7 @@ class ChunkProcessor:
         self.options = options
         self.doc = doc or "doc"
         self.fast = lang.fast
+        lang.expect_many_words()
         self.tokenizer = Tokenizer.for_meta(lang.meta)
         self.apostrophes = "".join(self.tokenizer.apostrophes)
         self.young: dict[str, Any] = {}
@@ -410,12 +411,16 @@ class ChunkProcessor:
             value = self.miss(token)
         return value, self.info_young[token]
 
-    def learn(self, token: str, value: Any, info: tuple[str, int, int]) -> None:
-        """Cache what another process found for ``token``."""
-        if token not in self.young:
-            self.young[token] = value
-            self.info_young[token] = info
-            self.young_chars += len(token) + (len(value) if isinstance(value, str) else sum(map(len, value)))
+    def learn_all(self, tokens: list[str], found: list[tuple[Any, tuple[str, int, int]]]) -> None:
+        """Cache what another process found for each of ``tokens`` (``found``: value and info of each)."""
+        young, info_young = self.young, self.info_young
+        chars = 0
+        for token, (value, info) in zip(tokens, found):
+            if token not in young:
+                young[token] = value
+                info_young[token] = info
+                chars += len(token) + (len(value) if isinstance(value, str) else sum(map(len, value)))
+        self.young_chars += chars
 
     def flush(self) -> Tally:
         """The figures of every token counted since the last flush (then forgotten)."""

@@ -336,6 +336,14 @@ class Language:
             raise UserError(f"malformed analysis {analysis!r}", hint="write it as: lemma POS;FEAT;FEAT")
         return self.generate(lemma, bundle)
 
+    def expect_many_words(self) -> None:
+        """Get ready to decode many words (a corpus run): the glosses are read whole now instead of
+        being looked up in their text one by one (:class:`morphfst.compile.archive.Glosses`; a process
+        that forks workers calls this first, so they share the table instead of each building it)."""
+        read_all = getattr(self.glosses, "read_all", None)
+        if read_all is not None:
+            read_all()
+
     # ---- information -----------------------------------------------------------------------------------
     @property
     def glosses(self) -> Mapping[tuple[str, str], str]:
