@@ -19,7 +19,7 @@ from pathlib import Path
 from typing import Any, TextIO
 
 from .outputs import atomic_text
-from .records import ANALYZED, GUESSED, NUMBER, STATUS, UNKNOWN, ChunkResult, Tally
+from .records import ANALYZED, GUESSED, NUMBER, STATUS, UNKNOWN, ChunkResult, Tally, TypeRow, add_types
 
 MAX_TYPES = 500_000
 
@@ -41,7 +41,7 @@ class Coverage:
     analyses: int = 0
     ambiguous: int = 0
     analyzed: int = 0  # word types analyzed by all processes together (a type analyzed twice counts twice)
-    types: dict[str, list[int]] = field(default_factory=dict)  # type -> [tokens, status, analyses]
+    types: dict[str, TypeRow] = field(default_factory=dict)  # type -> (tokens, status, analyses)
     max_types: int = MAX_TYPES
     pruned_below: int = 0  # types seen fewer than this many times may be missing from ``types``
     files: list[str] = field(default_factory=list)
@@ -67,18 +67,8 @@ class Coverage:
         self.analyzed += t.analyzed
         self.long_tokens += t.long_tokens
         self.unlisted_tokens += t.unlisted_tokens
-        types = self.types
-        if not types:  # the first table: copied in one pass
-            self.types = types = {word: [count, status, n] for word, (count, status, n) in t.types.items()}
-        else:
-            get = types.get
-            for word, (count, status, n) in t.types.items():
-                entry = get(word)
-                if entry is None:
-                    types[word] = [count, status, n]
-                else:
-                    entry[0] += count
-        if len(types) > self.max_types:
+        add_types(self.types, t.types)
+        if len(self.types) > self.max_types:
             self._prune()
 
     def merge(self, other: Coverage) -> None:
@@ -100,12 +90,7 @@ class Coverage:
             setattr(self, name, getattr(self, name) + getattr(other, name))
         for i, n in enumerate(other.status_tokens):
             self.status_tokens[i] += n
-        for word, (count, status, n) in other.types.items():
-            entry = self.types.get(word)
-            if entry is None:
-                self.types[word] = [count, status, n]
-            else:
-                entry[0] += count
+        add_types(self.types, other.types)
         self.pruned_below = max(self.pruned_below, other.pruned_below)
         if len(self.types) > self.max_types:
             self._prune()

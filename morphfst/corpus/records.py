@@ -85,6 +85,9 @@ class Options:
         return {"terms": ".terms.txt", "jsonl": ".jsonl", "conllu": ".conllu"}[self.mode]
 
 
+TypeRow = tuple[int, int, int]  # a word type's tokens, status and number of analyses
+
+
 @dataclass
 class Tally:
     """Per-token and per-type figures of the tokens processed since the last flush."""
@@ -94,7 +97,7 @@ class Tally:
     ambiguous: int = 0  # analyzed tokens with more than one analysis
     long_tokens: int = 0  # tokens longer than the runtime's word limit
     unlisted_tokens: int = 0  # tokens too long to be listed as types
-    types: dict[str, tuple[int, int, int]] = field(default_factory=dict)  # normalized type -> (tokens, status, analyses)
+    types: dict[str, TypeRow] = field(default_factory=dict)  # normalized type -> (tokens, status, analyses)
     analyzed: int = 0  # word types analyzed (cache misses): the same type in two processes counts twice
 
     def merge(self, other: Tally) -> None:
@@ -106,13 +109,19 @@ class Tally:
         self.long_tokens += other.long_tokens
         self.unlisted_tokens += other.unlisted_tokens
         self.analyzed += other.analyzed
-        types = self.types
-        if not types:
-            self.types = dict(other.types)
-            return
-        for norm, (count, status, n) in other.types.items():
-            prev = types.get(norm)
-            types[norm] = (count + prev[0], prev[1], prev[2]) if prev else (count, status, n)
+        add_types(self.types, other.types)
+
+
+def add_types(into: dict[str, TypeRow], other: dict[str, TypeRow]) -> None:
+    """Add the per-type table ``other`` to ``into``: token counts add up, a type's status and number
+    of analyses are those first seen (an empty table takes the other whole, in one C-level copy)."""
+    if not into:
+        into.update(other)
+        return
+    get = into.get
+    for norm, row in other.items():
+        prev = get(norm)
+        into[norm] = (prev[0] + row[0], prev[1], prev[2]) if prev else row
 
 
 @dataclass
