@@ -66,6 +66,21 @@ def test_an_unlisted_name_is_segmented_at_its_apostrophe(tur: morphfst.Language)
     assert tur.segment("Zorbuldak'tan")[0].morphs == ("zorbuldak", "'tan")
 
 
+@pytest.mark.parametrize("word", ["Zorbuldak'ta", "Kemerlioğlu'nun", "KZBT'ye", "İzmitgücü'ne"])
+def test_an_unlisted_turkish_name_generates_the_word_it_was_read_from(tur: morphfst.Language, word: str) -> None:
+    # the lemma keeps the name's capitals (TDK-YK: the name as written, then the apostrophe and the
+    # ending); generating from the first reading's lemma and labels gives the word back
+    first = tur.analyze(word)[0]
+    forms = [f.form for f in tur.generate(first.lemma, first.tags)]
+    assert word in forms, (first.text, forms)
+
+
+def test_a_capitalized_lower_case_lemma_generates_in_its_capitals(tur: morphfst.Language) -> None:
+    # what analysis does for a capitalized word (Evlerde: ev N;PL;LOC), generation does for a lemma
+    assert [f.form for f in tur.generate("Ev", "N;PL;LOC")] == ["Evlerde"]  # G&K: ev-ler-de
+    assert tur.generate("Ankara", "PROPN;SG;LOC")[0].form == "Ankara'da"  # the lexicon's own lemma (TDK-YK)
+
+
 @pytest.mark.parametrize(
     ("word", "first"),
     [

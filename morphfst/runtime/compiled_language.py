@@ -220,9 +220,23 @@ class Language:
         forms = self._generate_with(self.fsts["generator"], lemma, labels, codes)
         if not forms:
             forms = self._generate_compound(lemma, labels)
+        if not forms:
+            forms = self._generate_folded(lemma, labels, codes)
         if not forms and guess:
             forms = self._generate_guessed(lemma, labels, codes)
         return forms
+
+    def _generate_folded(self, lemma: str, labels: list[str], codes: list[str]) -> list[Form]:
+        """The forms of a lemma written with capitals that the lexicon lists in lower case only, or not
+        at all: a name the analyzer reads from its apostrophe (Turkish *Karadenizspor'un*: lemma
+        *Karadenizspor*) is generated from the folded lemma and written back in the lemma's capitals,
+        so that what :meth:`analyze` gives as a lemma generates its word again."""
+        folded = self.normalize(lemma)
+        if folded == lemma:
+            return []
+        analysis = f"{lemma} {';'.join(labels)}"
+        found = self._generate_with(self.fsts["generator"], folded, labels, codes)
+        return [Form(restore_case(lemma, f.form, self.normalize), f.weight, analysis) for f in found]
 
     def _labels(self, features: str | Sequence[str]) -> tuple[list[str], list[str]]:
         """The labels of a feature bundle (``"N;PL;LOC"`` or a list) and their codes; an unmarked label
