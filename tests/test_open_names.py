@@ -61,6 +61,13 @@ def test_a_listed_name_is_not_repeated_by_the_open_reading(tur: morphfst.Languag
     assert [t for t in readings if t.lower().startswith("ankara ")] == ["Ankara PROPN;SG;LOC"]
 
 
+def test_an_unlisted_name_is_glossed_by_itself_as_written(tur: morphfst.Language) -> None:
+    # a proper name is glossed by the name itself (common practice in Leipzig glosses), in its capitals
+    first = tur.analyze("Zorbuldak'ta")[0]
+    assert first.lemma == "Zorbuldak" and first.morphs[0].gloss == "Zorbuldak"
+    assert tur.analyze("zorbuldak'ta")[0].morphs[0].gloss == "zorbuldak"  # written in lower case: as written
+
+
 def test_an_unlisted_name_is_segmented_at_its_apostrophe(tur: morphfst.Language) -> None:
     # for indexing: the name, then its suffixes (TDK-YK)
     assert tur.segment("Zorbuldak'tan")[0].morphs == ("zorbuldak", "'tan")

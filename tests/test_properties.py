@@ -31,6 +31,7 @@ def test_generated_forms_analyze_back(tur: morphfst.Language, nouns: list[str], 
 
 
 PLAIN_LETTERS = str.maketrans("çğıöşü", "cgiosu")
+JOINED = {"INT", "ADD"}  # the labels of the enclitic slot of tur/joined.mfg (mi, de written joined)
 
 
 @settings(max_examples=150, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
@@ -43,8 +44,10 @@ def test_every_analysis_generates_the_word(tur: morphfst.Language, word: str) ->
         return tur.normalize(form).replace("'", "").translate(PLAIN_LETTERS)
 
     for analysis in tur.analyze(word):
-        assert plain(word) in [plain(f.form) for f in tur.generate(analysis.lemma, analysis.tags)]
         assert "".join(m.form for m in analysis.morphs) == word
+        if JOINED & set(analysis.tags):
+            continue  # a word written apart joined to this one: read, never generated (tur/joined.mfg)
+        assert plain(word) in [plain(f.form) for f in tur.generate(analysis.lemma, analysis.tags)]
 
 
 @settings(max_examples=60, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])

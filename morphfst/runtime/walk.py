@@ -523,6 +523,20 @@ _new_morph = _builder(Morph)
 _new_analysis = _builder(Analysis)
 
 
+def _name_glossed(morphs: tuple[Morph, ...], folded: str, lemma: str) -> tuple[Morph, ...]:
+    """``morphs`` with a name's stem glossed by the name as written (*Karadenizspor*, not the folded
+    *karadenizspor*: a proper name is glossed by itself, common practice in Leipzig glosses) where the
+    stem has no gloss of its own (the lexicon's gloss, or a lemma's, is its folded lemma)."""
+    if folded == lemma:
+        return morphs
+    return tuple(
+        _new_morph(m.form, lemma, m.features, m.kind, m.underlying, m.slot, m.affix_id, m.new_pos)
+        if m.kind == "stem" and m.gloss == folded
+        else m
+        for m in morphs
+    )
+
+
 def _lowest(items: list[_Piece]) -> list[_Piece]:
     """Steps (or ends) with distinct side text, output (and next state), each at its lowest weight
     (the third field), in first-seen order."""
@@ -640,20 +654,12 @@ class FastAnalyzer:
             return found[:limit]
         fold = self.lang.normalize
         back = GUESS_NAME_WEIGHT + (LOWER_CASE_NAME_WEIGHT if capital else 0.0)
-        names = [
-            _new_analysis(
-                a.word,
-                restore_case(word, a.lemma, fold) if capital else a.lemma,
-                a.pos,
-                a.features,
-                a.morphs,
-                a.weight - back,
-                a.ud,
-                True,
-            )
-            for a in found
-            if a.pos == NAME_POS
-        ]
+        names = []
+        for a in found:
+            if a.pos == NAME_POS:
+                lemma = restore_case(word, a.lemma, fold) if capital else a.lemma
+                morphs = _name_glossed(a.morphs, a.lemma, lemma)
+                names.append(_new_analysis(a.word, lemma, a.pos, a.features, morphs, a.weight - back, a.ud, True))
         return _merged([a for a in found if a.pos != NAME_POS], names, limit)
 
     def guess_normalized(self, surface: str, limit: int = MAX_GUESSES) -> list[Analysis]:
@@ -942,6 +948,7 @@ class FastAnalyzer:
                     continue
                 if capital:
                     lemma = restore_case(written or "", a.lemma, fold)
-                    a = _new_analysis(a.word, lemma, a.pos, a.features, a.morphs, a.weight, a.ud, a.guessed)
+                    morphs = _name_glossed(a.morphs, a.lemma, lemma)
+                    a = _new_analysis(a.word, lemma, a.pos, a.features, morphs, a.weight, a.ud, a.guessed)
             kept.append(a)
         return kept
