@@ -11,7 +11,7 @@ reading comes after every native one should a later entry spell the same word.
 
 Kept: words of ASCII letters only, of three letters or more, or one of the English two-letter words
 in ``TWO_LETTER`` (the list's other two-letter items are mostly fragments and foreign particles:
-la, de, el), and not the few words of ``NOT_LISTED``. Names among them (john, london) are read as
+la, de, el), and not the few words :func:`left_out` names. Names among them (john, london) are read as
 foreign words, not as names.
 
 Run it again after the native lexicon grows (it rewrites the file; words the grammar now reads by
@@ -41,11 +41,20 @@ POS = "X"
 WEIGHT = 10.0  # about ln 22,000: after any native reading
 # English words of two letters (from memory); the list's other two-letter items are left out
 TWO_LETTER = frozenset("am an as at be by do go he if in is it me my no of oh ok on or so to up us we".split())
-# Left out by choice: a few English words of meetings and teaching, which these lexicons do not need
-NOT_LISTED = frozenset(
-    "class classes conference course courses discourse keynote lecture lectures seminar seminars speaker speakers "
-    "speech talk talked talking talks ted transcript transcripts tutorial tutorials webinar".split()
+# Left out by choice: a few English words of meetings and teaching, which these lexicons do not need:
+# these words, and the word families that begin with LEFT_OUT_STARTS (the noun, its plural, the verb)
+LEFT_OUT_WORDS = frozenset(
+    "class classes conference course courses discourse keynote seminar seminars speaker speakers "
+    "speech talk talked talking talks ted tutorial tutorials webinar".split()
 )
+LEFT_OUT_STARTS = ("lectur", "transcri")
+
+
+def left_out(word: str) -> bool:
+    """Whether ``word`` is one of the words this script leaves out by choice."""
+    return word in LEFT_OUT_WORDS or word.startswith(LEFT_OUT_STARTS)
+
+
 HEADER = """\
 # Foreign (English) words quoted in running text, uninflected, read as part of speech X after every
 # native reading. Written by bench/foreign_words.py from the wordfreq English list (ranks 1-{top:,},
@@ -86,7 +95,7 @@ def candidates(top: int) -> list[str]:
     for word in top_n_list("en", top):
         if not (word.isascii() and word.isalpha() and word.islower()):
             continue
-        if (len(word) >= 3 or word in TWO_LETTER) and word not in NOT_LISTED:
+        if (len(word) >= 3 or word in TWO_LETTER) and not left_out(word):
             words.append(word)
     return words
 

@@ -27,6 +27,7 @@ from collections import deque
 from collections.abc import Callable, Iterator
 from contextlib import ExitStack, contextmanager
 from dataclasses import dataclass
+from functools import lru_cache
 from pathlib import Path
 from typing import Any
 
@@ -162,7 +163,12 @@ def owner(token: str, workers: int) -> int:
     analyzer (the stems it spells and the moves along their prefixes) instead of every worker reading
     and folding every state; the first three letters still spread the types evenly (49-51 % at two
     workers on the benchmark texts)."""
-    return zlib.crc32(token[:OWNER_PREFIX].lower().encode("utf-8", "surrogatepass")) % workers
+    return _prefix_owner(token[:OWNER_PREFIX], workers)
+
+
+@lru_cache(maxsize=1 << 16)  # a text has a few thousand prefixes; a worker asks for every type it lacks
+def _prefix_owner(prefix: str, workers: int) -> int:
+    return zlib.crc32(prefix.lower().encode("utf-8", "surrogatepass")) % workers
 
 
 def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: list[Any], me: int) -> None:
@@ -184,7 +190,6 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
     import threading
 
     workers = len(peers)
-    owners: dict[str, int] = {}  # owner by a type's first letters (see owner): a few thousand keys
     waiting: deque[list[Any]] = deque()  # [number, doc, chunk, decoded text, answers still expected]
     by_number: dict[int, list[Any]] = {}
     count = 0
@@ -236,9 +241,7 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
                 asks: dict[int, list[str]] = {}
                 own: list[str] = []
                 for token in missing:
-                    who = owners.get(token[:OWNER_PREFIX])
-                    if who is None:
-                        who = owners[token[:OWNER_PREFIX]] = owner(token, workers)
+                    who = owner(token, workers)
                     if who == me:
                         own.append(token)
                     else:

@@ -11,7 +11,7 @@ from __future__ import annotations
 import itertools
 import re
 from collections.abc import Mapping, Sequence
-from functools import lru_cache
+from functools import cached_property, lru_cache
 from typing import TYPE_CHECKING, Any
 
 from ..compile.archive import LazyFsts, Metadata
@@ -56,7 +56,6 @@ class Language:
         self.analyze_cached = lru_cache(maxsize=65536)(self._analyze_tuple)
         self._fast: FastAnalyzer | None = None
         self._orders: dict[str, str] = {}  # label codes in an order that generated nothing -> one that did
-        self._guessing: list[pynini.Fst | None] = []  # see _guess_generator: empty until built
 
     # ---- analysis ---------------------------------------------------------------------------------
     def analyze(self, word: str, guess: bool = False) -> list[Analysis]:
@@ -220,23 +219,13 @@ class Language:
         forms = self._generate_with(self.fsts["generator"], lemma, labels, codes)
         if not forms:
             forms = self._generate_compound(lemma, labels)
-        if not forms:
-            forms = self._generate_folded(lemma, labels, codes)
+        if not forms and self.normalize(lemma) != lemma:
+            # a lemma with capitals the lexicon lists in lower case or not at all: a name read from its
+            # apostrophe (Karadenizspor'un: Karadenizspor) generates its word again
+            forms = self._generate_folded(self.fsts["generator"], lemma, labels, codes)
         if not forms and guess:
             forms = self._generate_guessed(lemma, labels, codes)
         return forms
-
-    def _generate_folded(self, lemma: str, labels: list[str], codes: list[str]) -> list[Form]:
-        """The forms of a lemma written with capitals that the lexicon lists in lower case only, or not
-        at all: a name the analyzer reads from its apostrophe (Turkish *Karadenizspor'un*: lemma
-        *Karadenizspor*) is generated from the folded lemma and written back in the lemma's capitals,
-        so that what :meth:`analyze` gives as a lemma generates its word again."""
-        folded = self.normalize(lemma)
-        if folded == lemma:
-            return []
-        analysis = f"{lemma} {';'.join(labels)}"
-        found = self._generate_with(self.fsts["generator"], folded, labels, codes)
-        return [Form(restore_case(lemma, f.form, self.normalize), f.weight, analysis) for f in found]
 
     def _labels(self, features: str | Sequence[str]) -> tuple[list[str], list[str]]:
         """The labels of a feature bundle (``"N;PL;LOC"`` or a list) and their codes; an unmarked label
@@ -256,34 +245,36 @@ class Language:
         return self._generate_guessed(lemma, *self._labels(features))
 
     def _generate_guessed(self, lemma: str, labels: list[str], codes: list[str]) -> list[Form]:
-        generator = self._guess_generator()
-        if generator is None:
-            return []
-        # a guessed stem is written in the folded case of the guess patterns: Tırzop as tırzop, then
-        # the forms in the lemma's own case (Tırzop'a)
+        # a guessed stem is written in the folded case of the guess patterns: Tırzop as tırzop
+        generator = self._guess_generator
+        return [] if generator is None else self._generate_folded(generator, lemma, labels, codes, guessed=True)
+
+    def _generate_folded(
+        self, generator: pynini.Fst, lemma: str, labels: list[str], codes: list[str], guessed: bool = False
+    ) -> list[Form]:
+        """The forms of ``lemma`` generated from its folded spelling through ``generator``, written back
+        in the lemma's capitals (Tırzop'a, Karadenizspor'un)."""
         folded = self.normalize(lemma)
         analysis = f"{lemma} {';'.join(labels)}"
         return [
-            Form(restore_case(lemma, f.form, self.normalize) if folded != lemma else f.form, f.weight, analysis, True)
+            Form(restore_case(lemma, f.form, self.normalize) if folded != lemma else f.form, f.weight, analysis, guessed)
             for f in self._generate_with(generator, folded, labels, codes)
         ]
 
+    @cached_property
     def _guess_generator(self) -> pynini.Fst | None:
         """The guesser inverted (analysis -> surface) with the guess marker and affix ids read as nothing
         and the morph boundaries written as nothing: what the generator is to the bounded analyzer
-        (built on first use; the guesser is small)."""
-        if not self._guessing:
-            if "guesser" not in self.fsts:
-                self._guessing.append(None)
-            else:
-                silent = [(ord(c), 0) for c, kind in self.space.kinds.items() if kind == "affix"]
-                mark = self.space.to_char.get(GUESS_SYMBOL)
-                if mark:
-                    silent.append((ord(mark), 0))
-                fst = self.fsts["guesser"].copy().invert()
-                fst.relabel_pairs(ipairs=silent, opairs=[(ord(self.plus), 0)])
-                self._guessing.append(fst.arcsort("ilabel"))
-        return self._guessing[0]
+        (built on first use; the guesser is small). None when the grammar has no guesser."""
+        if "guesser" not in self.fsts:
+            return None
+        silent = [(ord(c), 0) for c, kind in self.space.kinds.items() if kind == "affix"]
+        mark = self.space.to_char.get(GUESS_SYMBOL)
+        if mark:
+            silent.append((ord(mark), 0))
+        fst = self.fsts["guesser"].copy().invert()
+        fst.relabel_pairs(ipairs=silent, opairs=[(ord(self.plus), 0)])
+        return fst.arcsort("ilabel")
 
     def _generate_with(self, generator: pynini.Fst, lemma: str, labels: list[str], codes: list[str]) -> list[Form]:
         """:meth:`generate` through ``generator`` (labels in the order given, else in any order)."""

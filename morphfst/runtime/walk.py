@@ -523,18 +523,19 @@ _new_morph = _builder(Morph)
 _new_analysis = _builder(Analysis)
 
 
-def _name_glossed(morphs: tuple[Morph, ...], folded: str, lemma: str) -> tuple[Morph, ...]:
-    """``morphs`` with a name's stem glossed by the name as written (*Karadenizspor*, not the folded
-    *karadenizspor*: a proper name is glossed by itself, common practice in Leipzig glosses) where the
-    stem has no gloss of its own (the lexicon's gloss, or a lemma's, is its folded lemma)."""
-    if folded == lemma:
-        return morphs
-    return tuple(
-        _new_morph(m.form, lemma, m.features, m.kind, m.underlying, m.slot, m.affix_id, m.new_pos)
-        if m.kind == "stem" and m.gloss == folded
-        else m
-        for m in morphs
-    )
+def _as_name(a: Analysis, lemma: str, weight: float, guessed: bool) -> Analysis:
+    """``a`` with its lemma written ``lemma`` (a name's capitals, as the word writes them), and a stem
+    with no gloss of its own (glossed by the folded lemma) glossed by the name as written
+    (*Karadenizspor*: a proper name is glossed by itself, common practice in Leipzig glosses)."""
+    morphs = a.morphs
+    if lemma != a.lemma:
+        morphs = tuple(
+            _new_morph(m.form, lemma, m.features, m.kind, m.underlying, m.slot, m.affix_id, m.new_pos)
+            if m.kind == "stem" and m.gloss == a.lemma
+            else m
+            for m in morphs
+        )
+    return _new_analysis(a.word, lemma, a.pos, a.features, morphs, weight, a.ud, guessed)  # type: ignore[no-any-return]
 
 
 def _lowest(items: list[_Piece]) -> list[_Piece]:
@@ -654,12 +655,11 @@ class FastAnalyzer:
             return found[:limit]
         fold = self.lang.normalize
         back = GUESS_NAME_WEIGHT + (LOWER_CASE_NAME_WEIGHT if capital else 0.0)
-        names = []
-        for a in found:
-            if a.pos == NAME_POS:
-                lemma = restore_case(word, a.lemma, fold) if capital else a.lemma
-                morphs = _name_glossed(a.morphs, a.lemma, lemma)
-                names.append(_new_analysis(a.word, lemma, a.pos, a.features, morphs, a.weight - back, a.ud, True))
+        names = [
+            _as_name(a, restore_case(word, a.lemma, fold) if capital else a.lemma, a.weight - back, True)
+            for a in found
+            if a.pos == NAME_POS
+        ]
         return _merged([a for a in found if a.pos != NAME_POS], names, limit)
 
     def guess_normalized(self, surface: str, limit: int = MAX_GUESSES) -> list[Analysis]:
@@ -947,8 +947,6 @@ class FastAnalyzer:
                 if a.lemma in listed:
                     continue
                 if capital:
-                    lemma = restore_case(written or "", a.lemma, fold)
-                    morphs = _name_glossed(a.morphs, a.lemma, lemma)
-                    a = _new_analysis(a.word, lemma, a.pos, a.features, morphs, a.weight, a.ud, a.guessed)
+                    a = _as_name(a, restore_case(written or "", a.lemma, fold), a.weight, a.guessed)
             kept.append(a)
         return kept
