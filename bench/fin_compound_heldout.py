@@ -30,7 +30,8 @@ sys.path.insert(0, os.getcwd())
 import pynini  # noqa: E402
 
 import morphfst  # noqa: E402
-from morphfst.runtime import compiled_language as cl  # noqa: E402
+from morphfst.compile.fstutil import acc, paths  # noqa: E402
+from morphfst.runtime.compiled_language import MAX_PATHS  # noqa: E402
 
 FORMS = ("SG;NOM", "SG;GEN", "PL;PRT", "SG;IN+ESS")
 
@@ -54,8 +55,8 @@ def all_paths(lang, word: str):
     surface = lang.normalize(word)
     out = []
     for bounded, _ in lang._bounded(surface):
-        lattice = pynini.compose(cl.acc(bounded), lang.fsts["bounded"])
-        for p in cl.paths(lattice, cl.MAX_PATHS):
+        lattice = pynini.compose(acc(bounded), lang.fsts["bounded"])
+        for p in paths(lattice, MAX_PATHS):
             out.extend(lang.fast.decode_all(surface, [(bounded, p[1], p[2])], False, word))
     return out
 

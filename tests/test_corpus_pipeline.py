@@ -436,6 +436,21 @@ def test_hyphenated_word_keeps_its_first_part_in_the_gloss(tmp_path: Path) -> No
     assert fields["MorphSeg"].count("-") == fields["MorphGloss"].count("-")
 
 
+def test_a_worker_asks_only_for_the_types_it_has_not_cached(tur: morphfst.Language) -> None:
+    # what a worker of -j N analyzes or asks its owner for: each uncached type once, never the line
+    # end, never an overlong token (those are counted where they occur and never cached)
+    processor = ChunkProcessor(tur, Options())
+    long = "a" * (MAX_CACHED_TOKEN + 1)
+    data = f"ev evde ev {long}\nkitap evde\n".encode()
+    chunk = next(iter(chunks([data], 1, 1 << 20, 1 << 20)))
+    (_, _, items), missing = processor.prepare(chunk)
+    assert items is not None and long in items
+    assert sorted(missing) == ["ev", "evde", "kitap"]
+    processor.lookup("ev")
+    processor.old["kitap"] = "kitap"  # a type in the old cache generation counts as cached too
+    assert sorted(processor.prepare(chunk)[1]) == ["evde"]
+
+
 def _types_by_chunk(processor: ChunkProcessor, parts: list[Chunk]) -> set[str]:
     """The word types a chunk-by-chunk reading looks up (what the partition's output will need)."""
     seen: set[str] = set()

@@ -406,12 +406,18 @@ class ChunkProcessor:
 
     def prepare(self, chunk: Chunk) -> tuple[Prepared, list[str]]:
         """The decoded text of a chunk (with its tokens, in terms mode) and its word types that are not
-        in the cache, in first-seen order (overlong tokens left out: they are never cached)."""
+        in the cache, in no particular order (overlong tokens left out: they are never cached).
+
+        The set differences run in C over the chunk's distinct items: a loop in Python over them, with
+        two dictionary lookups each, took half as long as tokenizing the chunk."""
         text, replaced = decode(chunk.data)
         items = self.tokenizer.tokens_and_newlines(text)
-        young, old = self.young, self.old
-        missing = [t for t in _cacheable(items) if t not in young and t not in old]
-        return (text, replaced, items if self.options.mode == "terms" else None), missing
+        missing = set(items).difference(self.young)  # the line end is always in the young generation
+        if self.old and missing:
+            missing = missing.difference(self.old)
+        return (text, replaced, items if self.options.mode == "terms" else None), [
+            t for t in missing if len(t) <= MAX_CACHED_TOKEN
+        ]
 
     def lookup(self, token: str) -> tuple[Any, tuple[str, int, int]]:
         """The formatted output and type information of ``token``, analyzed here if not cached."""
