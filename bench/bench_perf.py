@@ -63,7 +63,10 @@ noisy, so only ratios measured in the same run are worth comparing.
    "types_analyzed" read from the report (the type analyses of all processes together; "n/a" when
    the report has none) and distinct the distinct tokens of the text as the corpus tokenizer cuts
    them (the unit the workers cache and count); the same share against the report's "word_types"
-   (normalized types, numbers left out) is printed beside it.
+   (normalized types, numbers left out) is printed beside it. Beside the -j 2 figure: the twin
+   ceiling (two -j 1 runs of the whole text started together) and, from it and the command's time on
+   an empty text (start, loading, report: the part that stays serial), the most -j 2 can gain here by
+   Amdahl's law.
 4. Growth with corpus size: -j 1, -j 2 and Dask on a running cluster on the first lines of the same
    text (--growth sizes, default a quarter of --tokens and --tokens).
 
@@ -962,6 +965,28 @@ def twin_ceiling(bench: Bench, name: str, corpus: Path) -> float:
     return 2 * one / two if one == one and two == two else math.nan
 
 
+def fixed_cost(bench: Bench, name: str) -> float:
+    """Wall seconds of the corpus command on an empty text (start, loading, the tokenizer's tables, the
+    report; median of the runs): the part of a run that does not shrink with more processes."""
+    empty = bench.tmp / f"{name}-empty.txt"
+    empty.write_bytes(b"")
+    out = bench.tmp / f"{name}-empty.out"
+    times = [
+        run_timed(corpus_command(bench, name, empty, out, out.with_suffix(".json"), "j1"), child_env(), "empty text")
+        for _ in range(bench.args.runs)
+    ]
+    for path in (empty, out, out.with_suffix(".json")):
+        path.unlink(missing_ok=True)
+    return median(times)
+
+
+def j2_bound(one: float, fixed: float, twin: float) -> float:
+    """The most -j 2 can gain over -j 1 here (Amdahl's law): the fixed part of a run stays serial, the
+    rest goes ``twin`` times as fast on two processes as on one (the twin ceiling, which counts what
+    the two cores slow each other down), and nothing is lost to sharing the work."""
+    return one / (fixed + (one - fixed) / twin)
+
+
 def parallel_ceiling(rounds: int = 6) -> float:
     """Wall time of one process doing 2 x ``rounds`` rounds of :data:`CEILING_WORK` over that of two
     processes doing ``rounds`` each at once (the best of 3): the machine's own ceiling for -j 2."""
@@ -1039,6 +1064,12 @@ def corpus_figures(bench: Bench) -> None:
             say(
                 f"   the machine's ceiling for this very work: two '-j 1' runs of the whole text started together do "
                 f"twice the work {twin:.2f} x as fast as one run does once (no target; -j 2 is at {speed / twin:.0%} of it)"
+            )
+            fixed = fixed_cost(bench, name)
+            bound = j2_bound(j1, fixed, twin)
+            say(
+                f"   with the fixed part of a run ({fmt_s(fixed)} on an empty text) kept serial, -j 2 can be at most "
+                f"{bound:.2f} x as fast as -j 1 here (Amdahl's law with the ceiling above); it is at {speed / bound:.0%} of that"
             )
         dask_x = dk / j2
         v = bench.target(
