@@ -2,6 +2,7 @@
 
 from __future__ import annotations
 
+import re
 import unicodedata
 
 from hypothesis import given, settings
@@ -102,6 +103,20 @@ def test_the_combining_mark_class_has_every_mark_of_the_unicode_database() -> No
     every = [chr(cp) for cp in range(sys.maxunicode + 1) if unicodedata.category(chr(cp))[0] == "M"]
     assert every and all(marks.fullmatch(c) for c in every)
     assert not marks.search("aA9 -'\u4e00\U00020000")
+
+
+def test_the_shipped_unicode_tables_are_those_of_this_pythons_unicode_database() -> None:
+    # general categories M and Ll and str.isupper, as Python's unicodedata gives them (a published
+    # standard, the Unicode Character Database): the shipped tables must equal a scan of the database
+    from morphfst.runtime import tokenize, unicode_tables
+
+    assert unicode_tables.tables() == unicode_tables.compute()
+    lower = "".join(chr(cp) for cp in range(0x10000) if unicodedata.category(chr(cp)) == "Ll")
+    assert tokenize._LOWER_CHARS == lower and "ş" in lower and "ä" in lower
+    assert re.fullmatch(f"[{tokenize._UPPER}]+", "ŞÄÖIİ") and not re.search(f"[{tokenize._UPPER}]", "şäöıi9-")
+    for version, texts in unicode_tables.SHIPPED.items():  # every entry reads back as it was written
+        for text in texts:
+            assert unicode_tables._write(unicode_tables._read(text)) == " ".join(text.split()), version
 
 
 # The fast path of tokens() and tokens_and_newlines() cuts at white space and strips edge punctuation

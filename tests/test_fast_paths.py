@@ -238,20 +238,27 @@ def test_glosses_found_in_the_text_are_the_parsed_glosses(tur: morphfst.Language
     assert dict(fresh) == parsed and len(fresh) == len(parsed)
 
 
-def test_a_corpus_processor_reads_the_glosses_whole_and_learns_answers_in_one_call(tur: morphfst.Language) -> None:
+def test_a_corpus_processor_reads_the_glosses_whole_once_many_words_came_and_learns_answers_in_one_call(
+    tur: morphfst.Language,
+) -> None:
+    from morphfst.corpus.reading import chunks
     from morphfst.corpus.records import ChunkProcessor, Options
 
     lang = morphfst.load(tur.meta["grammar_path"])  # a fresh load: its glosses not yet parsed
     glosses = lang.glosses
     assert isinstance(glosses, archive.Glosses) and not glosses._parsed
     processor = ChunkProcessor(lang, Options())
-    assert glosses._parsed  # thousands of words follow: one parse, not a search of the text per lemma
-    teacher = ChunkProcessor(tur, Options())
+    processor.process(next(iter(chunks([b"evlerde kitaplar\n"], 1, 1 << 20, 1 << 20))))
+    assert not glosses._parsed  # a short text: a few searches of the text, no parse of every gloss
+    words = sorted({e["lemma"] for e in tur.lexicon if e["pos"] == "N" and e["lemma"].isalpha()})[: 2 * archive.Glosses.FINDS]
+    processor.process(next(iter(chunks([" ".join(words).encode() + b"\n"], 1, 1 << 20, 1 << 20))))
+    assert glosses._parsed  # many words follow: one parse, not a search of the text per lemma
+    teacher, learner = ChunkProcessor(tur, Options()), ChunkProcessor(tur, Options())
     tokens = ["evlerde", "kitaplar", "evlerde"]
     found = [teacher.lookup(t) for t in tokens]
-    processor.learn_all(tokens, found)
-    assert [processor.lookup(t) for t in tokens] == found and processor.misses == 0
-    assert processor.young_chars == sum(len(t) + len(v) for t, (v, _) in zip(tokens[:2], found[:2]))
+    learner.learn_all(tokens, found)
+    assert [learner.lookup(t) for t in tokens] == found and learner.misses == 0
+    assert learner.young_chars == sum(len(t) + len(v) for t, (v, _) in zip(tokens[:2], found[:2]))
 
 
 def test_the_walk_ends_on_a_cycle_of_arcs_that_read_nothing() -> None:

@@ -272,7 +272,6 @@ class ChunkProcessor:
         self.options = options
         self.doc = doc or "doc"
         self.fast = lang.fast
-        lang.expect_many_words()
         self.tokenizer = Tokenizer.for_meta(lang.meta)
         self.apostrophes = "".join(self.tokenizer.apostrophes)
         self.young: dict[str, Any] = {}

@@ -30,13 +30,13 @@ written without spaces between words (Chinese, Japanese, Thai) are not split int
 from __future__ import annotations
 
 import re
-import unicodedata
 from collections.abc import Iterable, Sequence
 from dataclasses import dataclass
 from functools import lru_cache
 from typing import Any
 
 from ..language.normalize import INVISIBLE
+from .unicode_tables import tables
 
 DEFAULT_APOSTROPHES = ("'", "\u2019", "\u02bc")  # ASCII apostrophe, right single quotation mark, modifier letter apostrophe
 HYPHENS = "-\u2010\u2011"  # hyphen-minus, hyphen, non-breaking hyphen
@@ -46,26 +46,22 @@ ZERO_WIDTH_JOINERS = "\u200c\u200d"  # zero-width non-joiner and joiner, inside 
 EDGE_PUNCTUATION = ".,;:!?()[]{}<>\"'`«»“”„‘’‚‹›…-–—/*\u2010\u2011"
 
 
-@lru_cache(maxsize=1)
-def combining_marks() -> str:
-    """A regular-expression class body of every combining mark (Unicode general category M: Mn, Mc,
-    Me) known to this Python's Unicode database, for every script. Marks live in planes 0 and 1 and
-    in plane 14's variation selectors, which is all that is scanned (planes 2 and 3 hold only CJK
-    ideographs; about 20-60 ms, once per process)."""
-    category = unicodedata.category
-    spans: list[tuple[int, int]] = []
-    for cp in (*range(0x300, 0x20000), *range(0xE0000, 0xE1000)):
-        if category(chr(cp))[0] == "M":
-            if spans and spans[-1][1] == cp - 1:
-                spans[-1] = (spans[-1][0], cp)
-            else:
-                spans.append((cp, cp))
+def _class_body(spans: tuple[tuple[int, int], ...]) -> str:
+    """A regular-expression class body (no brackets) of code point ranges."""
     return "".join(re.escape(chr(a)) if a == b else f"{re.escape(chr(a))}-{re.escape(chr(b))}" for a, b in spans)
 
 
-_UPPER = re.escape("".join(c for c in map(chr, range(0x10000)) if c.isupper()))  # upper-case letters of the BMP
+@lru_cache(maxsize=1)
+def combining_marks() -> str:
+    """A regular-expression class body of every combining mark (Unicode general category M: Mn, Mc,
+    Me) known to this Python's Unicode database, for every script (:mod:`.unicode_tables`: shipped for
+    the supported Python releases, else computed)."""
+    return _class_body(tables().marks)
+
+
+_UPPER = _class_body(tables().upper)  # upper-case letters of the BMP (str.isupper)
 # lower-case letters of the BMP (category Ll: each is a token character): after an ordinal's period
-_LOWER_CHARS = "".join(c for c in map(chr, range(0x10000)) if unicodedata.category(c) == "Ll")
+_LOWER_CHARS = "".join(chr(cp) for a, b in tables().lower for cp in range(a, b + 1))
 _LOWER_SET = frozenset(_LOWER_CHARS)
 # an ordinal with its period: a digit string or a well-formed Roman numeral I-XXXIX, then the period,
 # then white space within the line and a lower-case letter (read by the look-ahead only)
