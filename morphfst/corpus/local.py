@@ -160,9 +160,9 @@ OWNER_PREFIX = 3  # letters of a word type that choose its owner
 def owner(token: str, workers: int) -> int:
     """The worker that analyzes ``token``: a hash of its first letters (lowercased), the same in every
     process. Types that begin alike go to one worker, so each worker walks mostly its own part of the
-    analyzer (the stems it spells and the moves along their prefixes) instead of every worker reading
-    and folding every state; the first three letters still spread the types evenly (49-51 % at two
-    workers on the benchmark texts)."""
+    analyzer (the stems it spells, the states along their prefixes and the decoding memos of their
+    morphs) instead of every worker touching all of it; the first three letters still spread the
+    types evenly (49-51 % at two workers on the benchmark texts)."""
     return _prefix_owner(token[:OWNER_PREFIX], workers)
 
 
