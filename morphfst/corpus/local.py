@@ -319,8 +319,8 @@ class Workers:
                     stream.flush()
                 except (AttributeError, OSError, ValueError):
                     pass
-            # the tokenizer's tables (every combining mark: 20-60 ms) and the glosses table made once
-            # here and inherited, not once in each worker (and again here for the report)
+            # the tokenizer's expressions (about 6 ms to compile) and the glosses table (25-30 ms to
+            # parse) made once here and inherited, not once in each worker (and again for the report)
             Tokenizer.for_meta(lang.meta)
             lang.expect_many_words()
             self._start(ctx, lang, options, jobs, processor_class)

@@ -58,14 +58,17 @@ def _read(text: str) -> tuple[tuple[int, int], ...]:
     """The ranges of a table, in order, those that overlap or touch merged (a later version's table
     may be written as an earlier one's plus what it added)."""
     spans: list[tuple[int, int]] = []
-    for item in sorted(text.split(), key=lambda item: int(item.partition("-")[0], 16)):
-        first, _, last = item.partition("-")
-        a, b = int(first, 16), int(last or first, 16)
+    for a, b in sorted(_range(item) for item in text.split()):
         if spans and a <= spans[-1][1] + 1:
             spans[-1] = (spans[-1][0], max(b, spans[-1][1]))
         else:
             spans.append((a, b))
     return tuple(spans)
+
+
+def _range(item: str) -> tuple[int, int]:
+    first, _, last = item.partition("-")
+    return int(first, 16), int(last or first, 16)
 
 
 def _write(spans: tuple[tuple[int, int], ...]) -> str:
