@@ -18,7 +18,7 @@ import morphfst
 from morphfst.cli import main
 from morphfst.corpus import Options, WorkerFailure, run_corpus
 from morphfst.corpus.reading import Chunk, chunks, finer_tail, read_blocks
-from morphfst.corpus.records import MAX_CACHED_TOKEN, ChunkProcessor
+from morphfst.corpus.records import MAX_CACHED_TOKEN, ChunkProcessor, Tally
 from morphfst.runtime.tokenize import Tokenizer
 
 # Invented demo sentences (our own), mixing lexicon words, names with apostrophes, numbers with
@@ -443,7 +443,7 @@ def test_a_worker_asks_only_for_the_types_it_has_not_cached(tur: morphfst.Langua
     long = "a" * (MAX_CACHED_TOKEN + 1)
     data = f"ev evde ev {long}\nkitap evde\n".encode()
     chunk = next(iter(chunks([data], 1, 1 << 20, 1 << 20)))
-    (_, _, items), missing = processor.prepare(chunk)
+    (_, _, items, _, _, _), missing = processor.prepare(chunk)
     assert items is not None and long in items
     assert sorted(missing) == ["ev", "evde", "kitap"]
     processor.lookup("ev")
@@ -451,11 +451,38 @@ def test_a_worker_asks_only_for_the_types_it_has_not_cached(tur: morphfst.Langua
     assert sorted(processor.prepare(chunk)[1]) == ["evde"]
 
 
+def test_a_prepared_chunk_is_processed_right_after_the_cache_turned_over(tur: morphfst.Language) -> None:
+    # a worker prepares a chunk (its cached outputs looked up then), and processes it once the
+    # answers are in: other chunks processed meanwhile may turn the cache over, and the chunk's
+    # output and figures must be those of a chunk processed at once
+    data = b"ev evde kitap okul ev\nkitaplar okulda evde\n"
+    chunk = next(iter(chunks([data], 1, 1 << 20, 1 << 20)))
+    words = "masa kalem defter kapı pencere duvar yol su ağaç taş dağ deniz göl köy şehir ülke gün gece yıl ay"
+    lines = [" ".join(words.split()[i : i + 10]) for i in (0, 10)]  # ten new types: the cache turns over
+    others = [next(iter(chunks([line.encode() + b"\n"], 1, 1 << 20, 1 << 20))) for line in lines]
+    reference = ChunkProcessor(tur, Options(cache_size=8))
+    expected = reference.process(chunk).data
+    for turns in (0, 1, 2):
+        processor = ChunkProcessor(tur, Options(cache_size=8))
+        total = Tally()
+        first = processor.process(chunk)  # every type cached: the prepared chunk has no holes
+        prepared, missing = processor.prepare(chunk)
+        assert missing == []
+        results = [first] + [processor.process(other) for other in others[:turns]]
+        result = processor.process(chunk, prepared)
+        assert result.data == expected
+        for done in [*results, result]:
+            if done.tally is not None:
+                total.merge(done.tally)
+        total.merge(processor.flush())  # every token counted has its figures (none lost in the turns)
+        assert total.types["ev"][0] == 4 and total.types["evde"][0] == 4 and total.types["kitaplar"][0] == 2
+
+
 def _types_by_chunk(processor: ChunkProcessor, parts: list[Chunk]) -> set[str]:
     """The word types a chunk-by-chunk reading looks up (what the partition's output will need)."""
     seen: set[str] = set()
     for chunk in parts:
-        (_, _, items), _ = processor.prepare(chunk)
+        (_, _, items, _, _, _), _ = processor.prepare(chunk)
         seen.update(t for t in items or [] if t != "\n" and len(t) <= MAX_CACHED_TOKEN)
     return seen
 

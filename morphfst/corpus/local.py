@@ -190,7 +190,7 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
     import threading
 
     workers = len(peers)
-    waiting: deque[list[Any]] = deque()  # [number, doc, chunk, decoded text, answers still expected]
+    waiting: deque[list[Any]] = deque()  # [number, doc, chunk, prepared, answers still expected, asks by owner]
     by_number: dict[int, list[Any]] = {}
     count = 0
     # Results go out through a thread: a send blocks while the main process reads another worker's
@@ -215,8 +215,8 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
 
     def answer(item: Any) -> None:
         _, asker, number, tokens = item
-        found = [processor.lookup(t) for t in tokens]
-        peers[asker].put(("answer", number, tokens, found))
+        lookup = processor.lookup
+        peers[asker].put(("answer", number, me, [lookup(t) for t in tokens]))
 
     def answer_waiting_questions() -> None:
         """Answer the questions already in the inbox now (another worker is waiting for them); keep
@@ -246,7 +246,7 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
                         own.append(token)
                     else:
                         asks.setdefault(who, []).append(token)
-                job = [count, doc, chunk, decoded, len(asks)]
+                job = [count, doc, chunk, decoded, len(asks), asks]  # the asks, to read the answers by
                 by_number[count] = job
                 waiting.append(job)
                 for who, tokens in asks.items():
@@ -261,9 +261,10 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
             elif kind == "ask":
                 answer(item)
             elif kind == "answer":
-                _, number, tokens, found = item
-                processor.learn_all(tokens, found)
-                by_number[number][4] -= 1
+                _, number, who, found = item  # in the order of the tokens asked of ``who``
+                job = by_number[number]
+                processor.learn_all(job[5][who], found)
+                job[4] -= 1
             elif kind == "drain":
                 draining = True
             else:
@@ -271,7 +272,7 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
                 finish(("bye" if drained else "final", processor.flush()))
                 break
             while waiting and waiting[0][4] == 0:
-                number, doc, chunk, decoded, _ = waiting.popleft()
+                number, doc, chunk, decoded, _, _ = waiting.popleft()
                 del by_number[number]
                 processor.doc = doc
                 outbox.put(("ok", processor.process(chunk, decoded)))
@@ -336,8 +337,11 @@ class Workers:
         self, ctx: Any, source: str | Language, options: Options, jobs: int, processor_class: type[ChunkProcessor]
     ) -> None:
         inboxes = [ctx.Queue() for _ in range(jobs)]
+        for inbox in inboxes:
+            _widen(inbox._writer)
         for me, tasks in enumerate(inboxes):
             reader, writer = ctx.Pipe(duplex=False)
+            _widen(writer)
             proc = ctx.Process(
                 target=_worker_main,
                 args=(source, options, processor_class, tasks, writer, os.getpid(), inboxes, me),
@@ -444,6 +448,19 @@ class Workers:
             tasks.close()
         for conn in self.results:
             conn.close()
+
+
+PIPE_BYTES = 1 << 20
+
+
+def _widen(conn: Any) -> None:
+    """Let a pipe hold a whole chunk (Linux: 64 KiB by default)."""
+    try:
+        import fcntl
+
+        fcntl.fcntl(conn.fileno(), 1031, PIPE_BYTES)  # F_SETPIPE_SZ
+    except (ImportError, OSError, AttributeError, ValueError):
+        pass
 
 
 @contextmanager

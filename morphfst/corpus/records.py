@@ -30,11 +30,13 @@ from __future__ import annotations
 
 import codecs
 import gc
+import itertools
 import json
 import unicodedata
 from collections import Counter
 from collections.abc import Iterable
 from dataclasses import dataclass, field
+from operator import not_
 from typing import Any
 
 from ..runtime.compiled_language import MAX_WORD, Language
@@ -259,7 +261,10 @@ class TypeResult:
         return f"{lemma}\t{upos}\t_\t_", misc
 
 
-Prepared = tuple[str, int, list[str] | None]  # decoded text, bytes replaced, tokens and line ends (terms mode)
+# decoded text, bytes replaced; in terms mode also the tokens and line ends, their cached outputs
+# (None where not cached when prepared), the positions of those holes and the cache's generation
+# then (see ChunkProcessor.prepare)
+Prepared = tuple[str, int, list[str] | None, list[Any] | None, list[int] | None, int]
 
 
 class ChunkProcessor:
@@ -279,6 +284,7 @@ class ChunkProcessor:
         self.info_young: dict[str, tuple[str, int, int]] = {}  # token -> (normalized type, status, analyses)
         self.info_old: dict[str, tuple[str, int, int]] = {}
         self.young_chars = 0  # characters held by the young generation (keys and values)
+        self.generation = 0  # times the young generation became the old one
         self.counts: Counter[str] = Counter()  # tokens since the last flush
         self.pending = Tally()  # figures of overlong tokens since the last flush
         self.long_in_chunk = False
@@ -404,19 +410,28 @@ class ChunkProcessor:
         return _cacheable(found)
 
     def prepare(self, chunk: Chunk) -> tuple[Prepared, list[str]]:
-        """The decoded text of a chunk (with its tokens, in terms mode) and its word types that are not
-        in the cache, in no particular order (overlong tokens left out: they are never cached).
+        """The decoded text of a chunk and its word types that are not in the cache, in no particular
+        order (overlong tokens left out: they are never cached).
 
-        The set differences run in C over the chunk's distinct items: a loop in Python over them, with
-        two dictionary lookups each, took half as long as tokenizing the chunk."""
+        In terms mode the chunk's items are looked up once here, in C (``map`` over the young
+        generation's ``get``), and kept: :meth:`process` then fills only the holes (the items not
+        cached yet, answered or analyzed meanwhile) and joins. Finding the uncached types by set
+        differences, and looking every item up again in :meth:`_terms`, made two more passes over
+        the chunk. Other modes find them by set differences over the chunk's distinct items."""
         text, replaced = decode(chunk.data)
         items = self.tokenizer.tokens_and_newlines(text)
-        missing = set(items).difference(self.young)  # the line end is always in the young generation
-        if self.old and missing:
-            missing = missing.difference(self.old)
-        return (text, replaced, items if self.options.mode == "terms" else None), [
-            t for t in missing if len(t) <= MAX_CACHED_TOKEN
-        ]
+        young, old = self.young, self.old
+        if self.options.mode == "terms":
+            vals = list(map(young.get, items))
+            holes = list(itertools.compress(itertools.count(), map(not_, vals)))  # not cached (or empty, as in _terms)
+            missing = {items[i] for i in holes}
+            if old and missing:
+                missing = missing.difference(old)
+            return (text, replaced, items, vals, holes, self.generation), [t for t in missing if len(t) <= MAX_CACHED_TOKEN]
+        missing = set(items).difference(young)  # the line end is always in the young generation
+        if old and missing:
+            missing = missing.difference(old)
+        return (text, replaced, None, None, None, self.generation), [t for t in missing if len(t) <= MAX_CACHED_TOKEN]
 
     def lookup(self, token: str) -> tuple[Any, tuple[str, int, int]]:
         """The formatted output and type information of ``token``, analyzed here if not cached."""
@@ -467,12 +482,17 @@ class ChunkProcessor:
             self.old, self.young = self.young, {}
             self.info_old, self.info_young = self.info_young, {}
             self.young_chars = 0
+            self.generation += 1
             self._seed()
         return tally
 
     # ---- one chunk -----------------------------------------------------------------------------------
     def process(self, chunk: Chunk, prepared: Prepared | None = None) -> ChunkResult:
-        text, replaced, items = prepared or (*decode(chunk.data), None)
+        text, replaced, items, vals, holes, generation = prepared or (*decode(chunk.data), None, None, None, -1)
+        if generation != self.generation:
+            # the cache turned over since: a type read then could lose its figures at the next
+            # turn, so every item is looked up again
+            vals = holes = None
         lines = text.split("\n")
         if text.endswith("\n") or not text:
             lines.pop()
@@ -482,7 +502,7 @@ class ChunkProcessor:
         result.empty_lines = sum(1 for line in whole if not line or line == "\r")
         mode = self.options.mode
         if mode == "terms":
-            out, tokens = self._terms(text, chunk, items)
+            out, tokens = self._terms(text, chunk, items, vals, holes)
             result.tokens = len(tokens) - tokens.count(NEWLINE)
         else:
             out, tokens = self._jsonl(lines, chunk) if mode == "jsonl" else self._conllu(lines, chunk)
@@ -496,13 +516,27 @@ class ChunkProcessor:
         gc.freeze()  # what survived the chunk is long-lived (see FREEZE_EVERY)
         return result
 
-    def _terms(self, text: str, chunk: Chunk, items: list[str] | None = None) -> tuple[str, list[str]]:
-        """Terms of a whole chunk at once: tokens and line ends in one regular-expression pass."""
+    def _terms(
+        self,
+        text: str,
+        chunk: Chunk,
+        items: list[str] | None = None,
+        vals: list[Any] | None = None,
+        holes: list[int] | None = None,
+    ) -> tuple[str, list[str]]:
+        """Terms of a whole chunk at once: tokens and line ends in one pass of the tokenizer; with
+        ``vals`` (see :meth:`prepare`) only the ``holes`` are looked up again."""
         get = self.young.get
         miss = self.miss
         if items is None:
             items = self.tokenizer.tokens_and_newlines(text)
-        out = " ".join([get(t) or miss(t) for t in items]).replace(" \n", "\n").replace("\n ", "\n")
+        if vals is None or holes is None:
+            vals = [get(t) or miss(t) for t in items]
+        else:
+            for i in holes:
+                t = items[i]
+                vals[i] = get(t) or miss(t)
+        out = " ".join(vals).replace(" \n", "\n").replace("\n ", "\n")
         if chunk.part and out and not out.startswith("\n"):
             out = " " + out
         if not chunk.continues and not text.endswith("\n"):
