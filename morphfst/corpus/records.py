@@ -180,14 +180,23 @@ def _misc_value(text: str) -> str:
 class TypeResult:
     """Everything the outputs need about one word type."""
 
-    __slots__ = ("norm", "status", "analyses", "prefix", "split")
+    __slots__ = ("norm", "status", "analyses", "prefix", "split", "count")
 
-    def __init__(self, norm: str, status: int, analyses: list[Analysis], prefix: str = "", split: tuple[str, str] | None = None):
+    def __init__(
+        self,
+        norm: str,
+        status: int,
+        analyses: list[Analysis],
+        prefix: str = "",
+        split: tuple[str, str] | None = None,
+        count: int | None = None,
+    ):
         self.norm = norm
         self.status = status
-        self.analyses = analyses
+        self.analyses = analyses  # all of them, or the best only (``count`` says how many there are)
         self.prefix = prefix  # hyphenated word analyzed by its last part: what comes before it
         self.split = split  # no analysis, but an apostrophe or colon: (stem, suffix)
+        self.count = len(analyses) if count is None else count
 
     def stem_form(self, apostrophes: str) -> str:
         best = self.analyses[0]
@@ -252,8 +261,8 @@ class TypeResult:
             ]
             if self.status == GUESSED:
                 items.append("MorphGuessed=Yes")
-            if len(self.analyses) > 1:
-                items.append(f"MorphAnalyses={len(self.analyses)}")
+            if self.count > 1:
+                items.append(f"MorphAnalyses={self.count}")
             return cols, "|".join(items)
         lemma = _clean_term(self.split[0] if self.split else self.norm)
         upos = "NUM" if self.status == NUMBER else "X"
@@ -292,6 +301,9 @@ class ChunkProcessor:
         # answers found elsewhere (a Dask batch's owners): consulted before analyzing a type not cached
         self.known: dict[str, tuple[Any, tuple[str, int, int]]] = {}
         self.guess_limit = MAX_GUESSES if options.mode == "jsonl" else 1  # only jsonl lists every guess
+        # terms and CoNLL-U write the best analysis and count them all: the others need not be built
+        # (see FastAnalyzer.analyze_best); a caller that reads every analysis sets this to False
+        self.best_only = options.mode != "jsonl"
         self._seed()
 
     def _seed(self) -> None:
@@ -309,15 +321,25 @@ class ChunkProcessor:
         if any(ch.isdigit() for ch in token):
             return TypeResult(norm, NUMBER, [], split=tok.split_joiner(norm))
         fast = self.fast
-        analyses = fast.analyze(token)
-        if analyses:
-            return TypeResult(norm, ANALYZED, analyses)
+        if self.best_only:
+            best, count = fast.analyze_best(token)
+            if best is not None:
+                return TypeResult(norm, ANALYZED, [best], count=count)
+        else:
+            analyses = fast.analyze(token)
+            if analyses:
+                return TypeResult(norm, ANALYZED, analyses)
         hyphen = tok.split_hyphen(token)
         if hyphen is not None:
             prefix, last = hyphen
-            analyses = fast.analyze(last)
-            if analyses:
-                return TypeResult(norm, ANALYZED, analyses, lang.normalize(prefix))
+            if self.best_only:
+                best, count = fast.analyze_best(last)
+                if best is not None:
+                    return TypeResult(norm, ANALYZED, [best], lang.normalize(prefix), count=count)
+            else:
+                analyses = fast.analyze(last)
+                if analyses:
+                    return TypeResult(norm, ANALYZED, analyses, lang.normalize(prefix))
         if self.options.guess:
             target = hyphen[1] if hyphen is not None else token
             guesses = fast.guess(target, self.guess_limit)
@@ -356,7 +378,7 @@ class ChunkProcessor:
             value = self.format_type(result)
             if self.options.mode == "jsonl":
                 value = f'"token":{json.dumps(token, ensure_ascii=False)},{value}'
-            info = (result.norm, result.status, len(result.analyses))
+            info = (result.norm, result.status, result.count)
         if len(token) > MAX_CACHED_TOKEN:
             self._count_long(info)
         else:

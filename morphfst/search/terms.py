@@ -97,6 +97,7 @@ class TermAnalyzer:
         self.options = options or TermOptions()
         self.types = ChunkProcessor(lang, Options(mode="terms", guess=self.options.guess))
         self.types.guess_limit = self.options.max_guesses
+        self.types.best_only = False  # every analysis may give terms (analyses="all")
         self.tokenizer = self.types.tokenizer
         self.apostrophes = self.types.apostrophes
         self.cache_size = cache_size
