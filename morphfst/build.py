@@ -80,6 +80,14 @@ def warn(message: str) -> None:
     sys.stderr.write(message.rstrip("\n") + "\n")
 
 
+def _on_terminal() -> bool:
+    """True when standard error is a terminal: someone is waiting, and may be told why."""
+    try:
+        return sys.stderr.isatty()
+    except (AttributeError, ValueError):
+        return False
+
+
 def find_grammar(name_or_path: str | Path) -> Path:
     """The grammar or compiled file that ``name_or_path`` names."""
     path = Path(name_or_path)
@@ -340,7 +348,15 @@ def load(name_or_path: str | Path, recompile: bool = False) -> Language:
             pass  # another format: rebuilt below
     where: str | None = str(cached)
     if loaded is None:
+        # a first use compiles (seconds for a small grammar, minutes for the shipped Finnish one):
+        # on a terminal, say so rather than seem to hang
+        tell = _on_terminal()
+        if tell:
+            warn(f"morphfst: compiling {path} into the cache {cache_dir()} (once, until its sources change)...")
+        began = time.perf_counter()
         loaded = compile_in_memory(path)
+        if tell:
+            warn(f"morphfst: compiled {name} in {time.perf_counter() - began:.0f} s")
         try:
             save_archive(cached, *loaded)
             prune_cache(name, keep=cached)

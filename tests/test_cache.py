@@ -208,3 +208,21 @@ def test_loading_a_compiled_file_and_analyzing_a_known_word_imports_no_pynini(tm
     )
     done = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True)
     assert done.stdout.split("\n")[:2] == ["ka N;PL;NOM False", "True"]
+
+
+def test_a_first_compile_says_so_on_a_terminal_only(
+    tmp_path: Path, own_cache: Path, monkeypatch: pytest.MonkeyPatch, capsys: pytest.CaptureFixture[str]
+) -> None:
+    # a first use of the shipped Finnish grammar compiles for minutes: on a terminal the user is told
+    # what happens (and how long it took); in a pipeline or a library's log, nothing is added
+    grammar = write_toy(tmp_path / "quiet")
+    assert morphfst.load(grammar).analyze("kalar")
+    assert capsys.readouterr().err == ""
+    monkeypatch.setattr(build, "_on_terminal", lambda: True)
+    grammar = write_toy(tmp_path / "told")
+    (grammar.parent / "toy.tsv").write_text(TOY_LEXICON + "\n")  # other sources: compiled again
+    assert morphfst.load(grammar).analyze("kalar")
+    err = capsys.readouterr().err.splitlines()
+    assert len(err) == 2 and err[0].startswith("morphfst: compiling ") and str(grammar) in err[0]
+    assert str(own_cache) in err[0] and err[1].startswith("morphfst: compiled toy in ")
+    assert morphfst.load(grammar).analyze("kalar") and capsys.readouterr().err == ""  # cached: nothing to say
