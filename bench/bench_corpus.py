@@ -7,8 +7,9 @@ the rest is kept for evaluation), in lines of 5 to 20 tokens, into a temporary f
 Reported for each language, side by side:
 
 - the plain baseline: one ``pynini.lib.rewrite.rewrites`` call on the analyzer per token (a sample);
-- the cold analyzer: every word type analyzed once without cache, by the fast path (arc tables
-  walked in Python), against the same baseline on the same types, and with the guesser;
+- the cold analyzer: every word type analyzed once without cache, by the fast path (the packed arc
+  tables walked in C, or in Python without the extension), against the same baseline on the same
+  types, and with the guesser;
 - end to end (read, tokenize, analyze with the per-type cache, write, count): 1 and 2 processes,
   cold (fresh processes, empty caches) and warm (the same processes, a second pass);
 - the practical ceiling: a dict lookup of precomputed answers per token;
