@@ -320,32 +320,30 @@ class ChunkProcessor:
         tok = self.tokenizer
         if any(ch.isdigit() for ch in token):
             return TypeResult(norm, NUMBER, [], split=tok.split_joiner(norm))
-        fast = self.fast
-        if self.best_only:
-            best, count = fast.analyze_best(token)
-            if best is not None:
-                return TypeResult(norm, ANALYZED, [best], count=count)
-        else:
-            analyses = fast.analyze(token)
-            if analyses:
-                return TypeResult(norm, ANALYZED, analyses)
+        analyses, count = self._lexicon_analyses(token)
+        if analyses:
+            return TypeResult(norm, ANALYZED, analyses, count=count)
         hyphen = tok.split_hyphen(token)
         if hyphen is not None:
             prefix, last = hyphen
-            if self.best_only:
-                best, count = fast.analyze_best(last)
-                if best is not None:
-                    return TypeResult(norm, ANALYZED, [best], lang.normalize(prefix), count=count)
-            else:
-                analyses = fast.analyze(last)
-                if analyses:
-                    return TypeResult(norm, ANALYZED, analyses, lang.normalize(prefix))
+            analyses, count = self._lexicon_analyses(last)
+            if analyses:
+                return TypeResult(norm, ANALYZED, analyses, lang.normalize(prefix), count=count)
         if self.options.guess:
             target = hyphen[1] if hyphen is not None else token
-            guesses = fast.guess(target, self.guess_limit)
+            guesses = self.fast.guess(target, self.guess_limit)
             if guesses:
                 return TypeResult(norm, GUESSED, guesses, lang.normalize(hyphen[0]) if hyphen is not None else "")
         return TypeResult(norm, UNKNOWN, [], split=tok.split_joiner(norm))
+
+    def _lexicon_analyses(self, word: str) -> tuple[list[Analysis], int]:
+        """The lexicon's analyses of ``word`` (every one, or the best only with :attr:`best_only`)
+        and how many there are."""
+        if self.best_only:
+            best, count = self.fast.analyze_best(word)
+            return ([best], count) if best is not None else ([], 0)
+        analyses = self.fast.analyze(word)
+        return analyses, len(analyses)
 
     def propose(self, word: str) -> tuple[str, str]:
         """The guesser's best proposal for a word as (analysis text, segmentation); empty strings when none."""
@@ -442,18 +440,19 @@ class ChunkProcessor:
         the chunk. Other modes find them by set differences over the chunk's distinct items."""
         text, replaced = decode(chunk.data)
         items = self.tokenizer.tokens_and_newlines(text)
-        young, old = self.young, self.old
-        if self.options.mode == "terms":
-            vals = list(map(young.get, items))
+        terms = self.options.mode == "terms"
+        vals: list[Any] | None = None
+        holes: list[int] | None = None
+        if terms:
+            vals = list(map(self.young.get, items))
             holes = list(itertools.compress(itertools.count(), map(not_, vals)))  # not cached (or empty, as in _terms)
             missing = {items[i] for i in holes}
-            if old and missing:
-                missing = missing.difference(old)
-            return (text, replaced, items, vals, holes, self.generation), [t for t in missing if len(t) <= MAX_CACHED_TOKEN]
-        missing = set(items).difference(young)  # the line end is always in the young generation
-        if old and missing:
-            missing = missing.difference(old)
-        return (text, replaced, None, None, None, self.generation), [t for t in missing if len(t) <= MAX_CACHED_TOKEN]
+        else:
+            missing = set(items).difference(self.young)  # the line end is always in the young generation
+        if self.old and missing:
+            missing = missing.difference(self.old)
+        prepared = (text, replaced, items if terms else None, vals, holes, self.generation)
+        return prepared, [t for t in missing if len(t) <= MAX_CACHED_TOKEN]
 
     def lookup(self, token: str) -> tuple[Any, tuple[str, int, int]]:
         """The formatted output and type information of ``token``, analyzed here if not cached."""
