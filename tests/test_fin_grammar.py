@@ -2003,3 +2003,24 @@ def test_added_abstract_and_action_nouns_inflect_by_their_type(fin: morphfst.Lan
 )
 def test_unimorph_bundles_with_unmarked_values_generate(fin: morphfst.Language, lemma: str, bundle: str, form: str) -> None:
     assert [f.form for f in fin.generate(lemma, bundle)][:1] == [form]
+
+
+@pytest.mark.parametrize(
+    ("lemma", "bundle", "form"),
+    [
+        # UniMorph 4.0 makes the participle and the verbal noun parts of speech (V.PTCP, V.MSDR) and
+        # leaves out the nominative singular of a participle; the grammar's `implied` block adds what
+        # the grammar writes (the schema's labels; forms: Karlsson, Finnish: An Essential Grammar, the
+        # participles and the fourth infinitive, from memory)
+        ("puhua", "V.PTCP;ACT;PRS", "puhuva"),
+        ("puhua", "V.PTCP;ACT;PST", "puhunut"),
+        ("puhua", "V.PTCP;PASS;PRS", "puhuttava"),
+        ("puhua", "V.PTCP;PASS;PST", "puhuttu"),
+        ("puhua", "V.PTCP;ACT;PST;PL", "puhuneet"),
+        ("puhua", "V.PTCP;PASS;PRS;SG;GEN", "puhuttavan"),
+        ("tulla", "V.PTCP;ACT;PST", "tullut"),
+        ("puhua", "V.MSDR;SG;GEN", "puhumisen"),
+    ],
+)
+def test_unimorph_participle_bundles_generate(fin: morphfst.Language, lemma: str, bundle: str, form: str) -> None:
+    assert [f.form for f in fin.generate(lemma, bundle)][:1] == [form]

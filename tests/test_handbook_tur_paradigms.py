@@ -347,3 +347,21 @@ def test_lexical_causatives_block_the_rule(tur: morphfst.Language) -> None:
 )
 def test_unimorph_bundles_with_unmarked_values_generate(tur: morphfst.Language, lemma: str, bundle: str, form: str) -> None:
     assert [f.form for f in tur.generate(lemma, bundle)][:1] == [form]
+
+
+@pytest.mark.parametrize(
+    ("lemma", "bundle", "form"),
+    [
+        # UniMorph 4.0 makes the participle, the verbal noun and the converb parts of speech (V.PTCP,
+        # V.MSDR, V.CVB); the grammar's `implied` block adds the verb, the adjective or noun it becomes
+        # and, unless the bundle says otherwise, the singular nominative (the schema's labels; forms
+        # G&K, the participles, verbal nouns and converbs, from memory)
+        ("gelmek", "V.PTCP;PST;PSS1S", "geldiğim"),
+        ("gelmek", "V.PTCP;PST;PSS1S;ACC", "geldiğimi"),
+        ("gelmek", "V.MSDR;ACC", "gelmeyi"),
+        ("okumak", "V.MSDR;DAT", "okumaya"),
+        ("gelmek", "V.CVB;MANR", "gelerek"),
+    ],
+)
+def test_unimorph_nonfinite_bundles_generate(tur: morphfst.Language, lemma: str, bundle: str, form: str) -> None:
+    assert [f.form for f in tur.generate(lemma, bundle)][:1] == [form]

@@ -226,6 +226,38 @@ def test_an_enclitic_slot_follows_any_whole_word_once(tmp_path: Path) -> None:
     assert [f.form for f in lang.generate("ka", "N;SG;NOM;Q")] == ["kako"]
 
 
+def test_implied_labels_are_added_where_a_bundle_has_no_form(tmp_path: Path) -> None:
+    # `implied { LOC => N LOC PL }`: a bundle with LOC stands for N;LOC;PL, each added label only where
+    # the bundle has none of its dimension (a part of speech where it lacks that very one)
+    grammar = TOY_GRAMMAR.replace("rules {", "implied {\n  LOC => N LOC PL\n}\n\nrules {")
+    lang = morphfst.load(write_toy(tmp_path, grammar))
+    assert lang.implied_bundle(["LOC"]) == ["N", "LOC", "PL"]
+    assert lang.implied_bundle(["LOC", "SG"]) == ["N", "LOC", "SG"]
+    assert lang.implied_bundle(["N", "PL"]) == ["N", "PL"]  # no label with a line: unchanged
+    assert [f.form for f in lang.generate("ka", "LOC")] == ["kalarna"]
+    assert [f.form for f in lang.generate("ka", "SG;LOC")] == ["kana"]
+    assert [f.form for f in lang.generate("ka", "N;SG;LOC")] == ["kana"]  # has a form as given
+    assert lang.generate("ka", "NOM") == []  # no line for NOM: nothing is added
+    assert [a.text for a in lang.analyze("kalarna")] == ["ka N;PL;LOC"]
+
+
+@pytest.mark.parametrize(
+    ("line", "message"),
+    [
+        ("LOC => N LOC XYZ", "XYZ is not a declared feature label"),
+        ("LOC => N PL", "implied labels for LOC leave it out"),
+        ("LOC => N LOC PL PL", "name a label twice"),
+    ],
+)
+def test_implied_block_errors_point_at_their_line(tmp_path: Path, line: str, message: str) -> None:
+    grammar = TOY_GRAMMAR.replace("rules {", f"implied {{\n  {line}\n}}\n\nrules {{")
+    path = write_toy(tmp_path, grammar)
+    with pytest.raises(UserError) as caught:
+        morphfst.load(path)
+    assert message in str(caught.value)
+    assert caught.value.position is not None and caught.value.position.line == grammar.splitlines().index(f"  {line}") + 1
+
+
 def test_unmarked_labels_are_left_out_where_no_form_has_them(tmp_path: Path) -> None:
     # `unmarked { ... }`: labels a bundle may spell out (UniMorph's POS for the positive) that the
     # grammar leaves unwritten; an unmarked label the grammar has a feature for is dropped only when

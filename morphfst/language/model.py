@@ -264,6 +264,15 @@ class Layout:
 
 
 @dataclass
+class Implied:
+    """One line of an ``implied`` block: a bundle with ``label`` stands for ``labels`` (in order)."""
+
+    label: str
+    labels: list[str]
+    pos: Position
+
+
+@dataclass
 class LexEntry:
     """One lexicon line."""
 
@@ -307,6 +316,9 @@ class Grammar:
     # labels of unmarked values a bundle to generate may spell out (UniMorph's IND, POS, ACT), dropped
     # where no form carries them
     unmarked: list[str] = field(default_factory=list)
+    # labels a bundle to generate may leave out (UniMorph's V.PTCP;ACT;PRS for V;V.PTCP;ACT;PRS;ADJ;SG;NOM):
+    # label -> the bundle it stands for, in order, itself included (see the ``implied`` block)
+    implied: dict[str, Implied] = field(default_factory=dict)
     lexicon: list[LexEntry] = field(default_factory=list)
     sources: list[str] = field(default_factory=list)  # every file read, for the source hash
 

@@ -237,6 +237,15 @@ class _Builder:
                 if str(tok) not in self.grammar.unmarked:
                     self.grammar.unmarked.append(str(tok))
 
+    def do_implied_block(self, node: Tree) -> None:
+        for line in node.children:
+            label, *labels = (str(tok) for tok in line.children)
+            if label in self.grammar.implied:
+                raise UserError(
+                    f"implied labels for {label} given twice", self.pos_of(line.children[0]), hint="keep one line per label"
+                )
+            self.grammar.implied[label] = m.Implied(label, labels, self.pos_of(line.children[0]))
+
     def do_labels_block(self, node: Tree) -> None:
         for d in node.children:
             self.grammar.labels[str(d.children[0])] = self.unquote(d.children[1])

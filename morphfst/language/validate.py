@@ -40,6 +40,7 @@ def validate(grammar: m.Grammar) -> None:
     _check_rules(grammar)
     _check_stem_rules(grammar)
     _check_compounds(grammar)
+    _check_implied(grammar)
     for index, affix in enumerate(grammar.affixes):
         affix.ident = index
 
@@ -102,6 +103,23 @@ def _check_features(g: m.Grammar) -> None:
     for label in g.ud:
         if label not in owner:
             raise _err(f"UD mapping for undeclared feature {label}", Position(g.path), _near(label, sorted(owner)))
+
+
+def _check_implied(g: m.Grammar) -> None:
+    """An ``implied`` line names declared labels, each once, the one on the left among them."""
+    known = sorted({value for dim in g.dimensions.values() for value in dim.values})
+    for line in g.implied.values():
+        for label in [line.label, *line.labels]:
+            if label not in known:
+                raise _err(f"implied labels: {label} is not a declared feature label", line.pos, _near(label, known))
+        if line.label not in line.labels:
+            raise _err(
+                f"implied labels for {line.label} leave it out",
+                line.pos,
+                f"write the whole bundle it stands for, itself in its place: {line.label} => ... {line.label} ...",
+            )
+        if len(set(line.labels)) < len(line.labels):
+            raise _err(f"implied labels for {line.label} name a label twice", line.pos)
 
 
 def _check_flags(g: m.Grammar) -> None:

@@ -198,11 +198,45 @@ class Language:
         same slots and rules (see :meth:`generate_guessed`).
         """
         labels, codes = self._labels(features)
+        forms = self._generate_spelled(lemma, labels, codes, guess)
+        if forms:
+            return forms
+        # labels the bundle leaves out where the grammar writes them (UniMorph's V.PTCP;ACT;PRS: the
+        # participle's nominative singular): added as the grammar's ``implied`` block says
+        filled = self.implied_bundle(labels)
+        if filled == labels:
+            return []
+        return self._generate_spelled(lemma, filled, [self._label_code(f) for f in filled], guess)
+
+    def implied_bundle(self, labels: list[str]) -> list[str]:
+        """``labels`` with what the grammar's ``implied`` block adds to them: for the first label that
+        has a line there, the line's labels in its order, that label's place taking the bundle's other
+        labels after it; a label of the line is added only where the bundle has no label of its
+        dimension (a part of speech only where the bundle lacks that very one). Unchanged when no
+        label has a line."""
+        implied: dict[str, list[str]] = self.meta.get("implied") or {}
+        trigger = next((f for f in labels if f in implied), None)
+        if trigger is None:
+            return labels
+        line = implied[trigger]
+        dimension = self.labels()
+        given = {dimension.get(f) for f in labels} - {"pos"}
+        out: list[str] = []
+        for f in line:
+            if f == trigger:
+                out.append(f)
+                out.extend(g for g in labels if g not in line)
+            elif f in labels or dimension.get(f) not in given:
+                out.append(f)
+        return out
+
+    def _generate_spelled(self, lemma: str, labels: list[str], codes: list[str], guess: bool) -> list[Form]:
+        """:meth:`_generate_bundle`, then with the grammar's unmarked labels that the bundle spells out
+        (UniMorph's V;IND;PRS;ACT;1;SG where the active is unwritten) left out, fewest first, until a
+        form is found."""
         forms = self._generate_bundle(lemma, labels, codes, guess)
         if forms:
             return forms
-        # the grammar's unmarked labels that the bundle spells out (UniMorph's V;IND;PRS;ACT;1;SG where
-        # the active is unwritten): left out, fewest first, until a form is found
         unmarked = set(self.meta.get("unmarked") or ())
         optional = [i for i, label in enumerate(labels) if label in unmarked]
         for size in range(1, min(len(optional), MAX_UNMARKED) + 1):
