@@ -137,10 +137,10 @@ def _worker_main(
     while True:
         item = tasks.get()
         if item is None:
-            results.send(("bye" if drained else "final", processor.flush()))
+            results.send(("bye" if drained else "final", processor.flush().packed()))
             break
         if item[0] == "drain":  # every chunk is done: the figures go now (see _shared_loop)
-            results.send(("final", processor.flush()))
+            results.send(("final", processor.flush().packed()))
             drained = True
             continue
         _, doc, chunk = item
@@ -269,7 +269,7 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
                 draining = True
             else:
                 # after a drain, what is left to count is the types analyzed for the others since
-                finish(("bye" if drained else "final", processor.flush()))
+                finish(("bye" if drained else "final", processor.flush().packed()))
                 break
             while waiting and waiting[0][4] == 0:
                 number, doc, chunk, decoded, _, _ = waiting.popleft()
@@ -278,7 +278,7 @@ def _shared_loop(processor: ChunkProcessor, inbox: Any, results: Any, peers: lis
                 outbox.put(("ok", processor.process(chunk, decoded)))
             if draining and not waiting:
                 # every chunk is out: the figures go now, while the other workers finish theirs
-                outbox.put(("final", processor.flush()))
+                outbox.put(("final", processor.flush().packed()))
                 draining, drained = False, True
     except BaseException:
         finish(("error", traceback.format_exc()))
@@ -427,7 +427,7 @@ class Workers:
         got, payload = self._receive(index, "its last figures")
         if got != kind:
             raise WorkerFailure(f"worker process {index + 1} sent {got!r} instead of its last figures")
-        return payload  # type: ignore[no-any-return]
+        return Tally.unpacked(payload)
 
     def close(self, wait: bool = True) -> None:
         if self.closed:
