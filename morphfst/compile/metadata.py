@@ -103,6 +103,7 @@ def build_metadata(g: m.Grammar, space: SymbolSpace) -> dict[str, Any]:
         "tests": [{"kind": t.kind, "word": t.word, "expected": t.expected, "line": t.pos.line} for t in g.tests],
         "unmarked": g.unmarked,
         "implied": {label: line.labels for label, line in g.implied.items()},
+        "detached": {"pos": g.detached.pos_label, "hosts": g.detached.hosts} if g.detached else None,
         "layouts": [
             {
                 "pos": lay.pos_tag,

@@ -212,6 +212,8 @@ class TypeResult:
 
     def stem_form(self, apostrophes: str) -> str:
         best = self.analyses[0]
+        if not best.has_stem:  # suffixes read without their word: the lemma stands for the stem
+            return self.prefix + best.lemma
         # the leading stem morphs: one for a lexicon word, the parts of a hyphenated word (joined
         # with its hyphen: etelä-suome), the first part of a compound as before
         stems = [best.morphs[0].form]
@@ -232,7 +234,7 @@ class TypeResult:
             stem = _clean_term(self.stem_form(apostrophes))
             if kind == "stem":
                 return stem
-            affixes = [_clean_term(m.form.strip(apostrophes)) for m in best.morphs[1:]]
+            affixes = [_clean_term(m.form.strip(apostrophes)) for m in best.morphs[1 if best.has_stem else 0 :]]
             return " ".join([stem] + ["+" + a for a in affixes if a])
         if self.split is not None:
             stem, suffix = self.split

@@ -33,6 +33,7 @@ class AnalysisExplanation:
     path: list[PathStep]
     derivation: Derivation | None  # None when no lexicon entry reproduces the word (e.g. a guess)
     compound: list[str] = field(default_factory=list)  # the parts' surface forms of a compound (the last explained)
+    detached: bool = False  # suffixes read without their word (the grammar's detached block)
 
     @property
     def fired(self) -> list[str]:
@@ -113,6 +114,7 @@ def explain_analysis(session: DebugSession, analysis: Analysis, surface: str) ->
         path=analysis_path(session.grammar, klass, affixes),
         derivation=chosen[1] if chosen else None,
         compound=[mo.form for mo in first] + [surface] if first else [],
+        detached=not analysis.has_stem,
     )
 
 
@@ -197,7 +199,9 @@ def render_explanation(ex: Explanation, rules: bool = True) -> str:
                 f"  entry       {a.entry['lemma']} ({a.entry['class']}, {a.entry['pos']}{flags}) at {a.entry['file']}:{a.entry['line']}"
             )
         out.append(f"  path        {render_path(a.path)}")
-        if a.derivation is None:
+        if a.detached:
+            out.append("  (suffixes read without their word, after the hosts of the grammar's detached block)")
+        elif a.derivation is None:
             out.append("  (no lexicon entry reproduces this surface; the analysis may be a guess)")
         elif rules:
             out.extend(render_derivation(a.derivation))

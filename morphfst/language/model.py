@@ -273,6 +273,16 @@ class Implied:
 
 
 @dataclass
+class Detached:
+    """The ``detached`` block: a word with no reading of its own is read as the suffixes of these
+    ``hosts`` (each written with what separates it from its suffixes), with part of speech ``pos``."""
+
+    pos_label: str
+    hosts: list[str]
+    pos: Position
+
+
+@dataclass
 class LexEntry:
     """One lexicon line."""
 
@@ -319,6 +329,9 @@ class Grammar:
     # labels a bundle to generate may leave out (UniMorph's V.PTCP;ACT;PRS for V;V.PTCP;ACT;PRS;ADJ;SG;NOM):
     # label -> the bundle it stands for, in order, itself included (see the ``implied`` block)
     implied: dict[str, Implied] = field(default_factory=dict)
+    # suffixes split from their word by a tokenizer: their part of speech and the host words they are
+    # read after (see the ``detached`` block)
+    detached: Detached | None = None
     lexicon: list[LexEntry] = field(default_factory=list)
     sources: list[str] = field(default_factory=list)  # every file read, for the source hash
 

@@ -246,6 +246,14 @@ class _Builder:
                 )
             self.grammar.implied[label] = m.Implied(label, labels, self.pos_of(line.children[0]))
 
+    def do_detached_block(self, node: Tree) -> None:
+        label, *lines = node.children
+        at = self.pos_of(label)
+        if self.grammar.detached is not None:
+            raise UserError("a second detached block", at, hint="list every host in one block")
+        hosts = [self.unquote(tok) for line in lines for tok in line.children]
+        self.grammar.detached = m.Detached(str(label), hosts, at)
+
     def do_labels_block(self, node: Tree) -> None:
         for d in node.children:
             self.grammar.labels[str(d.children[0])] = self.unquote(d.children[1])

@@ -41,6 +41,7 @@ def validate(grammar: m.Grammar) -> None:
     _check_stem_rules(grammar)
     _check_compounds(grammar)
     _check_implied(grammar)
+    _check_detached(grammar)
     for index, affix in enumerate(grammar.affixes):
         affix.ident = index
 
@@ -120,6 +121,26 @@ def _check_implied(g: m.Grammar) -> None:
             )
         if len(set(line.labels)) < len(line.labels):
             raise _err(f"implied labels for {line.label} name a label twice", line.pos)
+
+
+def _check_detached(g: m.Grammar) -> None:
+    """A ``detached`` block names a declared part of speech and at least one host, each a word and
+    what separates it from its suffixes."""
+    d = g.detached
+    if d is None:
+        return
+    parts = list(g.dimensions["pos"].values) if "pos" in g.dimensions else []
+    if d.pos_label not in parts:
+        raise _err(f"detached: {d.pos_label} is not a declared part of speech", d.pos, _near(d.pos_label, parts))
+    if not d.hosts:
+        raise _err("detached: no host word", d.pos, 'write the words whose suffixes are read, in quotes: "Ta\'"')
+    for host in d.hosts:
+        if len(host) < 2 or host[-1].isalnum() or not host[:-1].strip():
+            raise _err(
+                f"detached: host {host!r} is not a word followed by its separator",
+                d.pos,
+                'write the word and what comes between it and its suffixes: "Ta\'"',
+            )
 
 
 def _check_flags(g: m.Grammar) -> None:

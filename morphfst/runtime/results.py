@@ -43,6 +43,12 @@ class Analysis:
         return (self.pos, *self.features)
 
     @property
+    def has_stem(self) -> bool:
+        """Whether the first morph is a stem (not so for suffixes read without their word:
+        :mod:`morphfst.runtime.detached`)."""
+        return bool(self.morphs) and self.morphs[0].kind == "stem"
+
+    @property
     def text(self) -> str:
         """The analysis as ``lemma POS;FEAT;...`` (UniMorph labels in slot order)."""
         return f"{self.lemma} {';'.join(self.tags)}"

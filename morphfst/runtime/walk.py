@@ -25,6 +25,7 @@ from ..compile.arctable import NO_STATE_ID, Arcs, FstArcs, PackedArcs
 from ..compile.guessweights import GUESS_COMPOUND_WEIGHT, GUESS_NAME_WEIGHT, GUESS_OFFSET, GUESS_STEM_WEIGHT, NAME_POS
 from ..language.normalize import restore_case
 from ..language.symbols import COMPOUND_SEAM, GUESS_SYMBOL, SymbolSpace
+from .detached import detached
 from .hyphenated import HYPHEN, hyphenated
 from .native import native_walker
 from .results import Analysis, Morph
@@ -605,6 +606,11 @@ class FastAnalyzer:
         # lemmas are the word's letters in folded case (see _open_names)
         self.open_names = any(c.get("open") and NAME_POS in c.get("pos", ()) for c in lang.meta["classes"].values())
         self._listed_names: frozenset[str] | None = None  # read on the first open reading
+        # suffixes a tokenizer split from their word (Ankara'nın: nın; see runtime/detached.py): the
+        # grammar's part of speech for them and its host words, normalized, each with its separator
+        spec = lang.meta.get("detached") or {}
+        self.detached_pos: str = spec.get("pos", "")
+        self.detached_hosts = [(host[:-1], host[-1]) for host in map(lang.normalize, spec.get("hosts", ()))]
 
     @property
     def guesser(self) -> ArcWalker | None:
@@ -625,9 +631,16 @@ class FastAnalyzer:
         found = self.decode_all(surface, self.bounded.walk(surface, limit), False, word if cased else None)
         if not found and HYPHEN in surface:
             found = hyphenated(surface, word, self._analyze_part)
+        if not found and self.detached_hosts:
+            found = self.detached(surface)
         if not found and guess:
             return self.guess(word, cased=cased)
         return found
+
+    def detached(self, surface: str) -> list[Analysis]:
+        """Readings of a normalized word as suffixes a tokenizer split from their word (the grammar's
+        ``detached`` block; :func:`morphfst.runtime.detached.detached`)."""
+        return detached(surface, self.detached_hosts, self.detached_pos, self._analyze_part, self.bounded.accepts)
 
     def _analyze_part(self, part: str) -> list[Analysis]:
         """Lexicon analyses of one part of a hyphenated word (normalized; no guesses)."""
@@ -954,6 +967,8 @@ class FastAnalyzer:
             found = []
         if not found and HYPHEN in surface:
             found = hyphenated(surface, word, self._analyze_part)
+        if not found and self.detached_hosts:
+            found = self.detached(surface)
         return (found[0], len(found)) if found else (None, 0)
 
     def _decode_best(self, surface: str, walked: list[tuple[str, str, float]], written: str) -> tuple[Analysis, int] | None:

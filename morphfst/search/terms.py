@@ -146,9 +146,10 @@ class TermAnalyzer:
                     elif kind == "surface":
                         add(PREFIX["surface"] + _cut(result.norm))
                     else:
-                        add(PREFIX["stem"] + _cut(prefix + a.morphs[0].form.rstrip(self.apostrophes)))
+                        stem = a.morphs[0].form if a.has_stem else a.lemma  # a suffix read alone: its lemma
+                        add(PREFIX["stem"] + _cut(prefix + stem.rstrip(self.apostrophes)))
                         if kind == "morphs":
-                            for m in a.morphs[1:]:
+                            for m in a.morphs[1 if a.has_stem else 0 :]:
                                 form = m.form.strip(self.apostrophes)
                                 if form:
                                     add(PREFIX["affix"] + _cut(form))
