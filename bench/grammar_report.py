@@ -87,7 +87,7 @@ def main(argv: list[str] | None = None) -> int:
         if all(results):
             covered_types += 1
             covered_f += freq
-            if all(a.pos == FOREIGN_POS for r in results for a in r):
+            if all(a.pos == FOREIGN_POS and a.has_stem for r in results for a in r):  # not suffixes read alone (detached)
                 foreign_types += 1
                 foreign_f += freq
             readings.append(sum(len(r) for r in results) // len(results))
