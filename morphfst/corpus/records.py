@@ -234,7 +234,7 @@ class TypeResult:
             stem = _clean_term(self.stem_form(apostrophes))
             if kind == "stem":
                 return stem
-            affixes = [_clean_term(m.form.strip(apostrophes)) for m in best.morphs[1 if best.has_stem else 0 :]]
+            affixes = [_clean_term(m.form.strip(apostrophes)) for m in best.affixes]
             return " ".join([stem] + ["+" + a for a in affixes if a])
         if self.split is not None:
             stem, suffix = self.split

@@ -19,7 +19,6 @@ from ..compile.arctable import Arcs, FstArcs
 from ..errors import UserError
 from ..language.normalize import Normalization, make_normalizer, restore_case
 from ..language.symbols import GUESS_SYMBOL, PRIVATE_START, SymbolSpace
-from .detached import detached
 from .hyphenated import HYPHEN, hyphenated
 from .results import Analysis, Form, Segmentation
 from .walk import FastAnalyzer
@@ -107,9 +106,8 @@ class Language:
         found = self._composed_surface(surface, word)
         if not found and HYPHEN in surface:
             return tuple(hyphenated(surface, word, self._composed_surface))
-        if not found and self.fast.detached_hosts:
-            fast = self.fast
-            return tuple(detached(surface, fast.detached_hosts, fast.detached_pos, self._composed_surface))
+        if not found:
+            return tuple(self.fast.detached(surface, self._composed_surface))
         return found
 
     def _composed_surface(self, surface: str, written: str | None = None) -> tuple[Analysis, ...]:

@@ -49,6 +49,11 @@ class Analysis:
         return bool(self.morphs) and self.morphs[0].kind == "stem"
 
     @property
+    def affixes(self) -> tuple[Morph, ...]:
+        """The morphs after the first stem (every morph when there is none)."""
+        return self.morphs[1:] if self.has_stem else self.morphs
+
+    @property
     def text(self) -> str:
         """The analysis as ``lemma POS;FEAT;...`` (UniMorph labels in slot order)."""
         return f"{self.lemma} {';'.join(self.tags)}"

@@ -17,7 +17,7 @@ from __future__ import annotations
 import heapq
 import math
 import re
-from collections.abc import Callable, Iterable, Mapping
+from collections.abc import Callable, Iterable, Mapping, Sequence
 from dataclasses import MISSING, fields
 from typing import TYPE_CHECKING, Any, Protocol, TypeVar, cast
 
@@ -631,15 +631,20 @@ class FastAnalyzer:
         found = self.decode_all(surface, self.bounded.walk(surface, limit), False, word if cased else None)
         if not found and HYPHEN in surface:
             found = hyphenated(surface, word, self._analyze_part)
-        if not found and self.detached_hosts:
+        if not found:
             found = self.detached(surface)
         if not found and guess:
             return self.guess(word, cased=cased)
         return found
 
-    def detached(self, surface: str) -> list[Analysis]:
+    def detached(self, surface: str, analyze: Callable[[str], Sequence[Analysis]] | None = None) -> list[Analysis]:
         """Readings of a normalized word as suffixes a tokenizer split from their word (the grammar's
-        ``detached`` block; :func:`morphfst.runtime.detached.detached`)."""
+        ``detached`` block; :func:`morphfst.runtime.detached.detached`); each host word is analyzed by
+        ``analyze`` (by default this walk, which also tells cheaply which hosts read the word at all)."""
+        if not self.detached_hosts:
+            return []
+        if analyze is not None:
+            return detached(surface, self.detached_hosts, self.detached_pos, analyze)
         return detached(surface, self.detached_hosts, self.detached_pos, self._analyze_part, self.bounded.accepts)
 
     def _analyze_part(self, part: str) -> list[Analysis]:
@@ -967,7 +972,7 @@ class FastAnalyzer:
             found = []
         if not found and HYPHEN in surface:
             found = hyphenated(surface, word, self._analyze_part)
-        if not found and self.detached_hosts:
+        if not found:
             found = self.detached(surface)
         return (found[0], len(found)) if found else (None, 0)
 

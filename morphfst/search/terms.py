@@ -149,7 +149,7 @@ class TermAnalyzer:
                         stem = a.morphs[0].form if a.has_stem else a.lemma  # a suffix read alone: its lemma
                         add(PREFIX["stem"] + _cut(prefix + stem.rstrip(self.apostrophes)))
                         if kind == "morphs":
-                            for m in a.morphs[1 if a.has_stem else 0 :]:
+                            for m in a.affixes:
                                 form = m.form.strip(self.apostrophes)
                                 if form:
                                     add(PREFIX["affix"] + _cut(form))
